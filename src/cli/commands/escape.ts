@@ -1,0 +1,60 @@
+import { criticalAngle, cuboidChipEscape, escapeCone } from '$lib/optics';
+import { CliError } from '../cli-error';
+import { indexOption } from '../index-option';
+import { integerOption, numberOption, parseOptions, type OptionSpec } from '../options';
+import { emit, percent, type Row } from '../output';
+
+export const summary = 'critical angle and escape fractions of an isotropic source through planar faces';
+export const help = `outcouple escape — escape cone of a chip face
+
+  --n-in N | --in MATERIAL     chip index (1 to 6, or n+ki) or library material
+  --n-out N | --out MATERIAL   surrounding medium (default 1, air)
+  --wavelength NM              wavelength for library materials (200 to 2500 nm, default 450)
+  --faces 1..6                 emitting faces of a cuboid chip (1 top; 5 top + sides; 6 all), default 1
+  --json                       print one JSON object
+
+Example: outcouple escape --n-in 2.45 --n-out 1 --json`;
+
+const options: OptionSpec = {
+  'n-in': { type: 'string' }, in: { type: 'string' }, 'n-out': { type: 'string' }, out: { type: 'string' },
+  wavelength: { type: 'string' }, faces: { type: 'string' }, json: { type: 'boolean' }
+};
+
+export function run(argv: string[]): void {
+  const { values, positionals } = parseOptions(argv, options, 'escape');
+  if (positionals.length) throw new CliError(`escape: unexpected argument '${positionals[0].slice(0, 40)}'`);
+  const wavelengthNm = numberOption(values, 'wavelength', 200, 2500, 450);
+  const chip = indexOption(values, 'n-in', 'in', wavelengthNm);
+  const outside = indexOption(values, 'n-out', 'out', wavelengthNm, '1');
+  const faces = integerOption(values, 'faces', 1, 6, 1);
+  if (chip.n < 1 || chip.n > 6) throw new CliError(`--n-in must be from 1 to 6 (got ${chip.n})`);
+  if (outside.n < 1 || outside.n > 6) throw new CliError(`--n-out must be from 1 to 6 (got ${outside.n})`);
+
+  const cone = escapeCone(chip.n, outside.n);
+  const chipEscape = cuboidChipEscape(chip.n, outside.n, faces);
+  const thetaC = criticalAngle(chip.n, outside.n);
+  const result = {
+    nIn: chip.n, nOut: outside.n, wavelengthNm, faces,
+    criticalAngleDeg: thetaC === null ? null : (thetaC * 180) / Math.PI,
+    escapeFractionGeometric: cone.geometric,
+    escapeFractionSmallAngle: cone.smallAngle,
+    escapeFractionFresnel: cone.fresnel,
+    escapeFractionFresnelS: cone.fresnelS,
+    escapeFractionFresnelP: cone.fresnelP,
+    normalReflectance: cone.normalReflectance,
+    chipEscapeFraction: chipEscape.fraction,
+    conesOverlap: chipEscape.conesOverlap,
+    warnings: [chip.warning, outside.warning, chipEscape.conesOverlap ? chipEscape.note : undefined].filter(Boolean)
+  };
+  const rows: Row[] = [
+    ['chip index', chip.n], ['surrounding index', outside.n],
+    ['critical angle', result.criticalAngleDeg === null ? 'none (no total internal reflection)' : result.criticalAngleDeg.toFixed(2), result.criticalAngleDeg === null ? '' : '°'],
+    ['escape, geometric (1 − cos θc)/2', percent(cone.geometric)],
+    ['escape, small-angle n²out/4n²in', percent(cone.smallAngle)],
+    ['escape, Fresnel-weighted', percent(cone.fresnel)],
+    ['  s-polarised', percent(cone.fresnelS)], ['  p-polarised', percent(cone.fresnelP)],
+    ['normal reflectance', percent(cone.normalReflectance)],
+    [`chip escape through ${faces} face${faces > 1 ? 's' : ''}`, percent(chipEscape.fraction)]
+  ];
+  emit(values.json === true, result, 'Escape cone', rows, result.warnings as string[]);
+}

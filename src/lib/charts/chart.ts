@@ -1,0 +1,152 @@
+/**
+ * Chart.js, wrapped once. Registers only the pieces our charts use, draws a ChartSpec on a canvas,
+ * follows the light/dark theme, fills an opaque background (so a saved PNG reads on any viewer) and
+ * draws error bars from each point's yMin/yMax.
+ */
+import {
+  BarController,
+  BarElement,
+  CategoryScale,
+  Chart,
+  Legend,
+  LinearScale,
+  LineElement,
+  LogarithmicScale,
+  PointElement,
+  ScatterController,
+  Tooltip,
+  type Plugin
+} from 'chart.js';
+import { chartConfig, FALLBACK_PALETTE, seriesColor, type ChartPalette } from './chart-config';
+import type { ChartSpec } from './spec';
+
+Chart.register(
+  ScatterController,
+  BarController,
+  PointElement,
+  LineElement,
+  BarElement,
+  LinearScale,
+  LogarithmicScale,
+  CategoryScale,
+  Legend,
+  Tooltip
+);
+
+/** Reads the theme's chart colours from CSS custom properties on (or above) the element. */
+export function readPalette(el: Element): ChartPalette {
+  const cs = getComputedStyle(el);
+  const v = (name: string, fallback: string) => cs.getPropertyValue(name).trim() || fallback;
+  const f = FALLBACK_PALETTE;
+  return {
+    series: f.series.map((c, i) => v(`--chart-${i + 1}`, c)),
+    ink: v('--chart-ink', f.ink),
+    muted: v('--chart-muted', f.muted),
+    grid: v('--chart-grid', f.grid),
+    guide: v('--chart-guide', f.guide),
+    background: v('--chart-bg', f.background),
+    fontFamily: cs.fontFamily || f.fontFamily
+  };
+}
+
+interface Live {
+  spec: ChartSpec;
+  palette: ChartPalette;
+}
+
+function backgroundPlugin(live: Live): Plugin {
+  return {
+    id: 'outcoupleBackground',
+    beforeDraw(chart) {
+      const { ctx, width, height } = chart;
+      ctx.save();
+      ctx.fillStyle = live.palette.background;
+      ctx.fillRect(0, 0, width, height);
+      ctx.restore();
+    }
+  };
+}
+
+/** Vertical error bars with short caps, from each point's yMin / yMax. */
+function errorBarPlugin(live: Live): Plugin {
+  return {
+    id: 'outcoupleErrorBars',
+    afterDatasetsDraw(chart) {
+      const { ctx } = chart;
+      const yScale = chart.scales.y;
+      live.spec.series.forEach((s, i) => {
+        if (!chart.isDatasetVisible(i)) return;
+        const meta = chart.getDatasetMeta(i);
+        ctx.save();
+        ctx.strokeStyle = seriesColor(live.palette, s);
+        ctx.lineWidth = 1.5;
+        s.points.forEach((p, j) => {
+          if (p.yMin === undefined && p.yMax === undefined) return;
+          const el = meta.data[j];
+          if (!el) return;
+          const x = el.x;
+          const y0 = yScale.getPixelForValue(p.yMin ?? p.y);
+          const y1 = yScale.getPixelForValue(p.yMax ?? p.y);
+          ctx.beginPath();
+          ctx.moveTo(x, y0);
+          ctx.lineTo(x, y1);
+          ctx.moveTo(x - 4, y0);
+          ctx.lineTo(x + 4, y0);
+          ctx.moveTo(x - 4, y1);
+          ctx.lineTo(x + 4, y1);
+          ctx.stroke();
+        });
+        ctx.restore();
+      });
+    }
+  };
+}
+
+export interface ChartHandle {
+  /** Redraws with a new spec (same chart kind keeps the canvas; a different kind rebuilds it). */
+  update(spec: ChartSpec): void;
+  /** PNG of the chart as a data URL. */
+  toPng(): string;
+  destroy(): void;
+}
+
+/** Draws `spec` on `canvas` and keeps it in step with the colour scheme until destroyed. */
+export function mountChart(canvas: HTMLCanvasElement, spec: ChartSpec): ChartHandle {
+  const live: Live = { spec, palette: readPalette(canvas) };
+  const make = () => {
+    const config = chartConfig(live.spec, live.palette);
+    config.plugins = [backgroundPlugin(live), errorBarPlugin(live)];
+    return new Chart(canvas, config);
+  };
+  let chart = make();
+
+  const redraw = () => {
+    live.palette = readPalette(canvas);
+    const config = chartConfig(live.spec, live.palette);
+    if ((config as { type: string }).type !== (chart.config as { type: string }).type) {
+      chart.destroy();
+      chart = make();
+      return;
+    }
+    chart.data = config.data;
+    chart.options = config.options ?? {};
+    chart.update('none');
+  };
+
+  const scheme = window.matchMedia?.('(prefers-color-scheme: dark)');
+  scheme?.addEventListener('change', redraw);
+
+  return {
+    update(next) {
+      live.spec = next;
+      redraw();
+    },
+    toPng() {
+      return chart.toBase64Image('image/png', 1);
+    },
+    destroy() {
+      scheme?.removeEventListener('change', redraw);
+      chart.destroy();
+    }
+  };
+}

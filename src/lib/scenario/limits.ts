@@ -1,0 +1,72 @@
+/**
+ * Every numeric limit of a scenario, in one place. The schema, the URL decoder, the scenario panel
+ * and the command line all read their allowed ranges from here, so an error message always names
+ * the same range the check uses.
+ */
+
+/** An allowed closed range for one kind of number, with the unit shown beside it. */
+export interface NumberLimit {
+  readonly min: number;
+  readonly max: number;
+  /** Unit written after the number ('' for plain numbers). */
+  readonly unit: string;
+  /** Whole numbers only. */
+  readonly integer?: boolean;
+}
+
+export const LIMITS = {
+  /** Emission or design wavelength: near UV to short-wave infrared, where LED materials have data. */
+  wavelengthNm: { min: 200, max: 2500, unit: 'nm' },
+  /** Full width at half maximum of a Gaussian emission band. */
+  fwhmNm: { min: 1, max: 500, unit: 'nm' },
+  /** Relative weight of one row of a tabulated spectrum. */
+  spectrumWeight: { min: 0, max: 1e12, unit: '' },
+  /** Number of rows of a tabulated spectrum. */
+  spectrumRows: { min: 2, max: 2000, unit: 'rows', integer: true },
+  /** Any length of the package: chip sides, chip height, dome radius, encapsulant height. */
+  sizeMm: { min: 0.001, max: 1000, unit: 'mm' },
+  /** Height of the emitting plane above the chip's bottom face (upper bound is the chip height). */
+  emitterZMm: { min: 0, max: 1000, unit: 'mm' },
+  /** Bulk absorption coefficient (Beer–Lambert, I = I0·exp(−α·d)). */
+  absorptionPerMm: { min: 0, max: 1000, unit: '1/mm' },
+  /** Power reflectance of the base under the chip. */
+  reflectance: { min: 0, max: 1, unit: '' },
+  /** Real part of a typed refractive index (dielectric media: air up to the densest semiconductors). */
+  indexN: { min: 1, max: 6, unit: '' },
+  /** Extinction coefficient of a typed refractive index. */
+  indexK: { min: 0, max: 10, unit: '' },
+  /** Rays launched by the Monte Carlo trace. */
+  rays: { min: 1_000, max: 20_000_000, unit: 'rays', integer: true },
+  /** Seed of the trace's random number generator (unsigned 32-bit). */
+  seed: { min: 0, max: 4_294_967_295, unit: '', integer: true },
+  /** Length of the scenario's name, in characters. */
+  nameLength: { min: 1, max: 120, unit: 'characters', integer: true }
+} as const satisfies Record<string, NumberLimit>;
+
+export type LimitName = keyof typeof LIMITS;
+
+/** "between 0.001 and 1000 mm" — the allowed range written out for a message. */
+export function rangeText(limit: NumberLimit): string {
+  const unit = limit.unit === '' ? '' : ` ${limit.unit}`;
+  return `between ${limit.min} and ${limit.max}${unit}`;
+}
+
+/** "Chip width must be between 0.001 and 1000 mm." */
+export function rangeMessage(field: string, limit: NumberLimit): string {
+  const whole = limit.integer ? 'a whole number ' : '';
+  return `${field} must be ${whole}${rangeText(limit)}.`;
+}
+
+/**
+ * Checks one number against a limit and returns the message to show, or null when it is allowed.
+ * NaN, ±Infinity and non-numbers are rejected with the same range message.
+ */
+export function checkNumber(field: string, limit: NumberLimit, value: unknown): string | null {
+  if (typeof value !== 'number' || !Number.isFinite(value)) return rangeMessage(field, limit);
+  if (value < limit.min || value > limit.max) return rangeMessage(field, limit);
+  if (limit.integer && !Number.isInteger(value)) return rangeMessage(field, limit);
+  return null;
+}
+
+/** Identifier of a material in the library: lower case letters, digits and dashes. */
+export const MATERIAL_ID_PATTERN = /^[a-z0-9][a-z0-9-]{0,39}$/;

@@ -1,0 +1,86 @@
+/**
+ * Lifts older scenario layouts to the current version before validation.
+ *
+ * Version 0 is the short hand-written draft layout (also what a scenario without a `version` field is
+ * read as): one `wavelengthNm`; media written as a library id string or a bare index number; the base
+ * as a reflectance number or a metal id string; optional fields filled from the demo scenario.
+ */
+import { DEMO_SCENARIO } from './defaults';
+import { SCENARIO_VERSION } from './schema';
+
+export type MigrateResult = { ok: true; value: unknown; from: number } | { ok: false; message: string };
+
+function isRecord(x: unknown): x is Record<string, unknown> {
+  return typeof x === 'object' && x !== null && !Array.isArray(x);
+}
+
+/** v0 medium: 'gan' → library material; 2.5 → typed index (k = 0); anything else is passed on for the schema to reject. */
+function mediumV0(x: unknown): unknown {
+  if (typeof x === 'string') return { kind: 'material', id: x };
+  if (typeof x === 'number') return { kind: 'index', n: x, k: 0 };
+  return x;
+}
+
+function orDefault<T>(x: unknown, fallback: T): unknown {
+  return x === undefined ? fallback : x;
+}
+
+function fromV0(v0: Record<string, unknown>): Record<string, unknown> {
+  const d = DEMO_SCENARIO;
+  const chip = isRecord(v0.chip) ? v0.chip : {};
+  const enc = isRecord(v0.encapsulant) ? v0.encapsulant : {};
+  const base = v0.base;
+  return {
+    version: 1,
+    name: orDefault(v0.name, 'Imported scenario'),
+    emission: { kind: 'single', wavelengthNm: v0.wavelengthNm },
+    chip: {
+      medium: mediumV0(chip.material),
+      widthMm: chip.widthMm,
+      lengthMm: chip.lengthMm,
+      heightMm: chip.heightMm,
+      emitterZMm: orDefault(chip.emitterZMm, chip.heightMm),
+      absorptionPerMm: orDefault(chip.absorptionPerMm, 0),
+      emission: orDefault(chip.emission, 'plane')
+    },
+    base:
+      typeof base === 'number'
+        ? { kind: 'reflectance', reflectance: base }
+        : typeof base === 'string'
+          ? { kind: 'metal', id: base }
+          : orDefault(base, d.base),
+    encapsulant: {
+      medium: mediumV0(orDefault(enc.material, 'air')),
+      shape: orDefault(enc.shape, 'none'),
+      radiusMm: orDefault(enc.radiusMm, d.encapsulant.radiusMm),
+      heightMm: orDefault(enc.heightMm, orDefault(enc.radiusMm, d.encapsulant.heightMm)),
+      absorptionPerMm: orDefault(enc.absorptionPerMm, 0)
+    },
+    outside: mediumV0(orDefault(v0.outside, 'air')),
+    trace: {
+      rays: orDefault(v0.rays, d.trace.rays),
+      seed: orDefault(v0.seed, d.trace.seed),
+      polarization: orDefault(v0.polarization, d.trace.polarization)
+    }
+  };
+}
+
+/**
+ * Brings a parsed scenario object of any known version to the current version (not yet validated).
+ * A version newer than this program reads, or a value that is not an object, gives a message instead.
+ */
+export function migrateScenario(raw: unknown): MigrateResult {
+  if (!isRecord(raw)) return { ok: false, message: 'A scenario must be an object with named fields.' };
+  const version = raw.version === undefined ? 0 : raw.version;
+  if (typeof version !== 'number' || !Number.isInteger(version) || version < 0) {
+    return { ok: false, message: `Scenario version must be a whole number from 0 to ${SCENARIO_VERSION}.` };
+  }
+  if (version > SCENARIO_VERSION) {
+    return {
+      ok: false,
+      message: `This scenario was made by a newer version of Outcouple (scenario version ${version}); this one reads versions up to ${SCENARIO_VERSION}.`
+    };
+  }
+  if (version === SCENARIO_VERSION) return { ok: true, value: raw, from: version };
+  return { ok: true, value: fromV0(raw), from: 0 };
+}

@@ -1,0 +1,126 @@
+/**
+ * Scenario → numbers: the refractive indices at the scenario's design wavelength (from the material
+ * library, with its range warnings) and the package description the Monte Carlo tracer takes.
+ */
+import { findMaterial, indexAt } from '../materials/index';
+import type { TracePackage } from '../trace/package-spec';
+import type { BaseSpec, EmissionSpec, MediumSpec, Scenario } from './schema';
+
+/** A medium's complex index n + ik at one wavelength, and where it came from. */
+export interface ResolvedMedium {
+  n: number;
+  k: number;
+  /** Short human label: the material's name or "typed index". */
+  label: string;
+  /** Library id, or null for a typed index. */
+  materialId: string | null;
+  /** False when the wavelength is outside the material's data range (the value is then a clamp or extrapolation). */
+  inRange: boolean;
+  /** The library's warning for this wavelength, if any. */
+  warning: string | null;
+}
+
+export type ResolvedBase =
+  | { kind: 'reflectance'; reflectance: number }
+  | { kind: 'metal'; n: number; k: number; label: string; materialId: string; inRange: boolean; warning: string | null };
+
+export interface ResolvedScenario {
+  /** The wavelength every index is taken at (nm). */
+  wavelengthNm: number;
+  chip: ResolvedMedium;
+  encapsulant: ResolvedMedium;
+  outside: ResolvedMedium;
+  base: ResolvedBase;
+  /** Every library warning, prefixed with the part it concerns. */
+  warnings: string[];
+}
+
+/**
+ * The single wavelength a scenario is evaluated at (nm): the single wavelength, the Gaussian peak,
+ * or the row of largest weight of a table (the first such row on ties).
+ */
+export function designWavelengthNm(emission: EmissionSpec): number {
+  if (emission.kind === 'single') return emission.wavelengthNm;
+  if (emission.kind === 'gaussian') return emission.peakNm;
+  let best = 0;
+  for (let i = 1; i < emission.rows.length; i++) if (emission.rows[i][1] > emission.rows[best][1]) best = i;
+  return emission.rows[best][0];
+}
+
+/**
+ * Index of a medium at a wavelength. A typed index is returned as typed. A library id that is not in
+ * the library throws a RangeError naming the field (a validated scenario never has one).
+ */
+export function resolveMedium(spec: MediumSpec, wavelengthNm: number, field = 'Medium'): ResolvedMedium {
+  if (spec.kind === 'index') {
+    return { n: spec.n, k: spec.k, label: 'typed index', materialId: null, inRange: true, warning: null };
+  }
+  const material = findMaterial(spec.id);
+  if (!material) throw new RangeError(`${field} material '${spec.id}' is not in the material library.`);
+  const v = indexAt(material, wavelengthNm);
+  return {
+    n: v.n,
+    k: v.k,
+    label: material.name,
+    materialId: material.id,
+    inRange: v.inRange,
+    warning: v.warning ?? null
+  };
+}
+
+function resolveBase(base: BaseSpec, wavelengthNm: number): ResolvedBase {
+  if (base.kind === 'reflectance') return { kind: 'reflectance', reflectance: base.reflectance };
+  const m = resolveMedium({ kind: 'material', id: base.id }, wavelengthNm, 'Base metal');
+  return { kind: 'metal', n: m.n, k: m.k, label: m.label, materialId: base.id, inRange: m.inRange, warning: m.warning };
+}
+
+/** All indices of a (validated) scenario at its design wavelength, with the library's warnings gathered. */
+export function resolveScenario(scenario: Scenario): ResolvedScenario {
+  const wavelengthNm = designWavelengthNm(scenario.emission);
+  const chip = resolveMedium(scenario.chip.medium, wavelengthNm, 'Chip');
+  const encapsulant = resolveMedium(scenario.encapsulant.medium, wavelengthNm, 'Encapsulant');
+  const outside = resolveMedium(scenario.outside, wavelengthNm, 'Outside medium');
+  const base = resolveBase(scenario.base, wavelengthNm);
+  const warnings: string[] = [];
+  const note = (part: string, w: string | null) => {
+    if (w) warnings.push(`${part}: ${w}`);
+  };
+  note('Chip', chip.warning);
+  if (scenario.encapsulant.shape !== 'none') note('Encapsulant', encapsulant.warning);
+  note('Outside medium', outside.warning);
+  if (base.kind === 'metal') note('Base', base.warning);
+  return { wavelengthNm, chip, encapsulant, outside, base, warnings };
+}
+
+/**
+ * The tracer's package description. Real parts of the dielectric indices are used (chip and
+ * encapsulant losses are carried by their absorption per mm); a metal base keeps n and k.
+ */
+export function toTracePackage(scenario: Scenario, resolved: ResolvedScenario = resolveScenario(scenario)): TracePackage {
+  const c = scenario.chip;
+  const e = scenario.encapsulant;
+  return {
+    chip: {
+      widthMm: c.widthMm,
+      lengthMm: c.lengthMm,
+      heightMm: c.heightMm,
+      n: resolved.chip.n,
+      absorptionPerMm: c.absorptionPerMm,
+      emitterZMm: c.emitterZMm,
+      emission: c.emission
+    },
+    base:
+      resolved.base.kind === 'reflectance'
+        ? { kind: 'reflectance', reflectance: resolved.base.reflectance }
+        : { kind: 'metal', n: resolved.base.n, k: resolved.base.k },
+    encapsulant: {
+      shape: e.shape,
+      radiusMm: e.radiusMm,
+      heightMm: e.heightMm,
+      n: resolved.encapsulant.n,
+      absorptionPerMm: e.absorptionPerMm
+    },
+    outsideN: resolved.outside.n,
+    polarization: scenario.trace.polarization
+  };
+}

@@ -1,0 +1,239 @@
+/**
+ * The scenario: one LED package description shared by every page, the URL and the command line.
+ * Version 1. Older versions are lifted by `migrateScenario` before they reach this schema.
+ */
+import { z } from 'zod';
+import { findMaterial } from '../materials/index';
+import { LIMITS, MATERIAL_ID_PATTERN, type NumberLimit, rangeMessage } from './limits';
+
+export const SCENARIO_VERSION = 1;
+
+/** A number field with a range message that names the field (zod rejects NaN and ±Infinity). */
+function num(field: string, limit: NumberLimit) {
+  const message = rangeMessage(field, limit);
+  const base = z.number({ error: message }).min(limit.min, { error: message }).max(limit.max, { error: message });
+  return limit.integer ? base.int({ error: message }) : base;
+}
+
+function materialId(field: string) {
+  return z
+    .string({ error: `${field} must be a material id from the library.` })
+    .regex(MATERIAL_ID_PATTERN, { error: `${field} must be a material id from the library.` });
+}
+
+/** A medium: a library material (indices taken at the scenario wavelength) or a typed index n + ik. */
+function medium(field: string) {
+  return z.discriminatedUnion(
+    'kind',
+    [
+      z.object({ kind: z.literal('material'), id: materialId(`${field} material`) }).strict(),
+      z
+        .object({
+          kind: z.literal('index'),
+          n: num(`${field} index n`, LIMITS.indexN),
+          k: num(`${field} extinction k`, LIMITS.indexK)
+        })
+        .strict()
+    ],
+    { error: `${field} must be a library material or a typed index.` }
+  );
+}
+
+const emissionSchema = z.discriminatedUnion(
+  'kind',
+  [
+    z.object({ kind: z.literal('single'), wavelengthNm: num('Wavelength', LIMITS.wavelengthNm) }).strict(),
+    z
+      .object({
+        kind: z.literal('gaussian'),
+        peakNm: num('Peak wavelength', LIMITS.wavelengthNm),
+        fwhmNm: num('Spectral width (FWHM)', LIMITS.fwhmNm)
+      })
+      .strict(),
+    z
+      .object({
+        kind: z.literal('table'),
+        rows: z
+          .array(z.tuple([num('Spectrum wavelength', LIMITS.wavelengthNm), num('Spectrum weight', LIMITS.spectrumWeight)]), {
+            error: 'Spectrum rows must be a list of [wavelength nm, weight] pairs.'
+          })
+          .min(LIMITS.spectrumRows.min, { error: rangeMessage('Number of spectrum rows', LIMITS.spectrumRows) })
+          .max(LIMITS.spectrumRows.max, { error: rangeMessage('Number of spectrum rows', LIMITS.spectrumRows) })
+      })
+      .strict()
+  ],
+  { error: 'Emission must be a single wavelength, a Gaussian band or a table.' }
+);
+
+const chipSchema = z
+  .object({
+    medium: medium('Chip'),
+    widthMm: num('Chip width', LIMITS.sizeMm),
+    lengthMm: num('Chip length', LIMITS.sizeMm),
+    heightMm: num('Chip height', LIMITS.sizeMm),
+    emitterZMm: num('Emitter height', LIMITS.emitterZMm),
+    absorptionPerMm: num('Chip absorption', LIMITS.absorptionPerMm),
+    emission: z.enum(['plane', 'volume'], { error: "Chip emission must be 'plane' or 'volume'." })
+  })
+  .strict();
+
+const baseSchema = z.discriminatedUnion(
+  'kind',
+  [
+    z.object({ kind: z.literal('reflectance'), reflectance: num('Base reflectance', LIMITS.reflectance) }).strict(),
+    z.object({ kind: z.literal('metal'), id: materialId('Base metal') }).strict()
+  ],
+  { error: 'Base must be a reflectance or a metal from the library.' }
+);
+
+const encapsulantSchema = z
+  .object({
+    medium: medium('Encapsulant'),
+    shape: z.enum(['none', 'dome', 'cylinder'], { error: "Encapsulant shape must be 'none', 'dome' or 'cylinder'." }),
+    radiusMm: num('Encapsulant radius', LIMITS.sizeMm),
+    heightMm: num('Encapsulant height', LIMITS.sizeMm),
+    absorptionPerMm: num('Encapsulant absorption', LIMITS.absorptionPerMm)
+  })
+  .strict();
+
+const traceSchema = z
+  .object({
+    rays: num('Rays', LIMITS.rays),
+    seed: num('Seed', LIMITS.seed),
+    polarization: z.enum(['average', 'track'], { error: "Polarisation must be 'average' or 'track'." })
+  })
+  .strict();
+
+const nameSchema = z
+  .string({ error: 'Name must be text.' })
+  .trim()
+  .min(LIMITS.nameLength.min, { error: rangeMessage('Name length', LIMITS.nameLength) })
+  .max(LIMITS.nameLength.max, { error: rangeMessage('Name length', LIMITS.nameLength) });
+
+const objectSchema = z
+  .object({
+    version: z.literal(SCENARIO_VERSION, { error: `Scenario version must be ${SCENARIO_VERSION}.` }),
+    name: nameSchema,
+    emission: emissionSchema,
+    chip: chipSchema,
+    base: baseSchema,
+    encapsulant: encapsulantSchema,
+    outside: medium('Outside medium'),
+    trace: traceSchema
+  })
+  .strict();
+
+type ObjectScenario = z.infer<typeof objectSchema>;
+type Ctx = z.RefinementCtx<ObjectScenario>;
+
+function checkMaterial(ctx: Ctx, path: (string | number)[], field: string, id: string, wantMetal: boolean): void {
+  const m = findMaterial(id);
+  if (!m) {
+    ctx.addIssue({ code: 'custom', path, message: `${field} '${id}' is not in the material library.` });
+  } else if (wantMetal !== (m.category === 'metal')) {
+    const what = wantMetal ? 'a metal' : 'a non-metal (dielectric or semiconductor)';
+    ctx.addIssue({ code: 'custom', path, message: `${field} must be ${what}; '${id}' is not.` });
+  }
+}
+
+function fmtMm(x: number): string {
+  return `${Number(x.toPrecision(3))} mm`;
+}
+
+/** Checks that span more than one field: materials exist, the emitter is inside the chip, the chip fits. */
+function crossChecks(s: ObjectScenario, ctx: Ctx): void {
+  if (s.chip.medium.kind === 'material') checkMaterial(ctx, ['chip', 'medium', 'id'], 'Chip material', s.chip.medium.id, false);
+  if (s.encapsulant.medium.kind === 'material')
+    checkMaterial(ctx, ['encapsulant', 'medium', 'id'], 'Encapsulant material', s.encapsulant.medium.id, false);
+  if (s.outside.kind === 'material') checkMaterial(ctx, ['outside', 'id'], 'Outside medium material', s.outside.id, false);
+  if (s.base.kind === 'metal') checkMaterial(ctx, ['base', 'id'], 'Base metal', s.base.id, true);
+
+  if (s.chip.emitterZMm > s.chip.heightMm) {
+    ctx.addIssue({
+      code: 'custom',
+      path: ['chip', 'emitterZMm'],
+      message: `Emitter height must be between 0 and the chip height (${fmtMm(s.chip.heightMm)}).`
+    });
+  }
+
+  // The chip's top corners decide whether it fits: both shapes keep or lose width going up.
+  const rho = Math.hypot(s.chip.widthMm / 2, s.chip.lengthMm / 2);
+  const H = s.chip.heightMm;
+  const e = s.encapsulant;
+  if (e.shape !== 'none' && e.heightMm <= H) {
+    ctx.addIssue({
+      code: 'custom',
+      path: ['encapsulant', 'heightMm'],
+      message: `Encapsulant height must be more than the chip height (${fmtMm(H)}) and at most ${LIMITS.sizeMm.max} mm.`
+    });
+  } else if (e.shape === 'dome') {
+    // Dome = upper half of the spheroid x²/R² + y²/R² + z²/h² = 1: corner inside ⇔ R > ρ / √(1 − H²/h²).
+    const minR = rho / Math.sqrt(1 - (H * H) / (e.heightMm * e.heightMm));
+    if (e.radiusMm <= minR) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['encapsulant', 'radiusMm'],
+        message: `Encapsulant radius must be more than ${fmtMm(minR)} (so the chip's corners are inside the dome) and at most ${LIMITS.sizeMm.max} mm.`
+      });
+    }
+  } else if (e.shape === 'cylinder' && e.radiusMm <= rho) {
+    ctx.addIssue({
+      code: 'custom',
+      path: ['encapsulant', 'radiusMm'],
+      message: `Encapsulant radius must be more than the chip's half-diagonal (${fmtMm(rho)}) and at most ${LIMITS.sizeMm.max} mm.`
+    });
+  }
+
+  if (s.emission.kind === 'table') {
+    const rows = s.emission.rows;
+    let total = 0;
+    for (let i = 0; i < rows.length; i++) {
+      total += rows[i][1];
+      if (i > 0 && rows[i][0] <= rows[i - 1][0]) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['emission', 'rows', i, 0],
+          message: `Spectrum wavelengths must increase from row to row (row ${i + 1} does not).`
+        });
+        break;
+      }
+    }
+    if (!(total > 0)) {
+      ctx.addIssue({ code: 'custom', path: ['emission', 'rows'], message: 'Spectrum weights must not all be zero.' });
+    }
+  }
+}
+
+/** The version-1 scenario schema, including the checks that span fields. */
+export const scenarioSchema = objectSchema.superRefine(crossChecks);
+
+export type Scenario = z.infer<typeof scenarioSchema>;
+export type MediumSpec = Scenario['outside'];
+export type EmissionSpec = Scenario['emission'];
+export type BaseSpec = Scenario['base'];
+export type EncapsulantShape = Scenario['encapsulant']['shape'];
+
+/** One problem found in a scenario: a dotted path ('chip.widthMm') and a message naming field and range. */
+export interface ScenarioIssue {
+  path: string;
+  message: string;
+}
+
+export type ParseResult = { ok: true; scenario: Scenario } | { ok: false; issues: ScenarioIssue[] };
+
+/** Validates a version-1 scenario. Never throws; every issue names its field and allowed range. */
+export function parseScenario(input: unknown): ParseResult {
+  const r = scenarioSchema.safeParse(input);
+  if (r.success) return { ok: true, scenario: r.data };
+  return {
+    ok: false,
+    issues: r.error.issues.map((i) => ({ path: i.path.map(String).join('.'), message: i.message }))
+  };
+}
+
+/** Validates a version-1 scenario and throws a RangeError with the first issue (for the command line). */
+export function assertScenario(input: unknown): Scenario {
+  const r = parseScenario(input);
+  if (!r.ok) throw new RangeError(r.issues[0].message);
+  return r.scenario;
+}
