@@ -1,4 +1,4 @@
-import { findMaterial, indexAt, resolveIndex } from '$lib/materials';
+import { findMaterial, indexAt, resolveIndex } from '../lib/materials';
 import { CliError } from './cli-error';
 import type { ParsedValues } from './options';
 

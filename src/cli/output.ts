@@ -22,6 +22,7 @@ export function formatNumber(value: number): string {
   if (!Number.isFinite(value)) return '—';
   if (value === 0) return '0';
   const magnitude = Math.abs(value);
+  if (Number.isInteger(value) && magnitude < 1e12) return value.toLocaleString('en-US');
   if (magnitude >= 1e6 || magnitude < 1e-4) return value.toExponential(4);
   return Number(value.toPrecision(6)).toString();
 }

@@ -1,4 +1,4 @@
-import { domeEstimate } from '$lib/optics';
+import { domeEstimate } from '../../lib/optics';
 import { CliError } from '../cli-error';
 import { indexOption } from '../index-option';
 import { numberOption, parseOptions, sizeOption, type OptionSpec } from '../options';

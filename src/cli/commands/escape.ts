@@ -1,4 +1,4 @@
-import { criticalAngle, cuboidChipEscape, escapeCone } from '$lib/optics';
+import { criticalAngle, cuboidChipEscape, escapeCone } from '../../lib/optics';
 import { CliError } from '../cli-error';
 import { indexOption } from '../index-option';
 import { integerOption, numberOption, parseOptions, type OptionSpec } from '../options';

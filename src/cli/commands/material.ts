@@ -1,4 +1,4 @@
-import { findMaterial, indexAt, listMaterials } from '$lib/materials';
+import { findMaterial, indexAt, listMaterials } from '../../lib/materials';
 import { CliError } from '../cli-error';
 import { numberOption, parseOptions, type OptionSpec } from '../options';
 import { emit, type Row } from '../output';
@@ -18,13 +18,13 @@ export function run(argv: string[]): void {
   const { values, positionals } = parseOptions(argv, options, 'material');
   const json = values.json === true;
   if (values.list === true) {
-    const list = listMaterials().map((m) => ({ id: m.id, name: m.name, category: m.category, model: m.model.kind,
-      validRangeNm: m.validRangeNm, source: m.source }));
+    const list = listMaterials().map((m) => ({ id: m.id, name: m.name, category: m.category, model: m.dispersion.model,
+      validRangeNm: [m.validRangeNm.min, m.validRangeNm.max], source: m.source }));
     if (json) {
       process.stdout.write(JSON.stringify({ materials: list }, null, 2) + '\n');
     } else {
-      const lines = list.map((m) => `${m.id.padEnd(16)} ${m.name.padEnd(28)} ${m.category.padEnd(12)} ${String(m.validRangeNm[0]).padStart(5)}–${String(m.validRangeNm[1]).padEnd(5)} nm  ${m.model}`);
-      process.stdout.write(['id               name                         category      valid range  model', ...lines].join('\n') + '\n');
+      const lines = list.map((m) => `${m.id.padEnd(16)} ${m.name.padEnd(30)} ${m.category.padEnd(12)} ${String(m.validRangeNm[0]).padStart(5)}–${String(m.validRangeNm[1]).padEnd(6)} nm  ${m.model}`);
+      process.stdout.write(['id               name                           category        valid range      model', ...lines].join('\n') + '\n');
     }
     return;
   }
@@ -35,13 +35,13 @@ export function run(argv: string[]): void {
   const wavelengthNm = numberOption(values, 'wavelength', 200, 2500, 450);
   const value = indexAt(material, wavelengthNm);
   const result = {
-    id: material.id, name: material.name, wavelengthNm, n: value.n, k: value.k, model: material.model.kind,
-    validRangeNm: material.validRangeNm, inRange: value.inRange, source: material.source,
+    id: material.id, name: material.name, wavelengthNm, n: value.n, k: value.k, model: material.dispersion.model,
+    validRangeNm: [material.validRangeNm.min, material.validRangeNm.max], inRange: value.inRange, source: material.source,
     provenance: material.provenance, warning: value.warning ?? null
   };
   const rows: Row[] = [
     ['material', material.name], ['wavelength', wavelengthNm, 'nm'], ['n', value.n], ['k', value.k],
-    ['model', material.model.kind], ['valid range', `${material.validRangeNm[0]}–${material.validRangeNm[1]}`, 'nm'],
+    ['model', material.dispersion.model], ['valid range', `${material.validRangeNm.min}–${material.validRangeNm.max}`, 'nm'],
     ['source', `${material.source} (${material.provenance})`]
   ];
   emit(json, result, `Material: ${material.name}`, rows, value.warning ? [value.warning] : []);

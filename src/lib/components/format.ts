@@ -70,3 +70,11 @@ export function fmtPlain(x: number, digits = 6, reason = 'not defined'): string 
   if (abs >= 1e6 || abs < 1e-3) return fmtNumber(x, digits).replace(/\.?0+ ×/, ' ×');
   return String(Number(x.toPrecision(Math.min(15, Math.max(1, Math.round(digits))))));
 }
+
+/**
+ * A material's display name without a trailing nominal index such as "(n ≈ 1.41)", for places that
+ * print the actual index at the wavelength beside it: "Methyl silicone (n ≈ 1.41)" → "Methyl silicone".
+ */
+export function plainName(name: string): string {
+  return name.replace(/\s*\(n\s*[≈=~][^)]*\)\s*$/u, '');
+}

@@ -9,12 +9,15 @@ import { polesNm } from './poles';
 import type { IndexAt, Material } from './types';
 
 const scratch: NkSlot = { n: 0, k: 0 };
+/** Relative distance from a pole treated as on it (1e-6: 0.00087 nm at GaAs's 874.6 nm pole). */
+const POLE_BAND = 1e-6;
 
 /**
  * Complex refractive index N = n + ik of `material` at a vacuum wavelength.
  * - Inside `material.validRangeNm` (closed): `inRange: true`, no warning.
  * - Outside it: the model is extrapolated and `warning` says so — never silently.
- * - If a pole of the formula lies between the wavelength and the validity range (or on it), or the
+ * - If a pole of the formula lies between the wavelength and the validity range (or within a relative
+ *   1e-6 of the wavelength), or the
  *   formula gives n² ≤ 0, n ≤ 0, k < 0 or a non-finite value: RangeError naming the material and its range.
  * @param wavelengthNm vacuum wavelength, nm, in [100, 20000]
  * @returns n (> 0; metals may be < 1) and k (≥ 0)
@@ -29,13 +32,14 @@ export function indexAt(material: Material, wavelengthNm: number): IndexAt {
   const inRange = wavelengthNm >= min && wavelengthNm <= max;
   const rangeText = `${min}–${max} nm`;
 
-  // Refuse to extrapolate across (or onto) a pole of the formula
+  // Refuse to extrapolate across (or onto) a pole of the formula; "onto" allows for the rounding
+  // of the pole position (relative POLE_BAND) so an exact pole wavelength is never evaluated
   if (!inRange) {
     const edge = wavelengthNm < min ? min : max;
     const lo = Math.min(edge, wavelengthNm);
     const hi = Math.max(edge, wavelengthNm);
     for (const pole of polesNm(material.dispersion)) {
-      if (pole >= lo && pole <= hi) {
+      if (pole >= lo * (1 - POLE_BAND) && pole <= hi * (1 + POLE_BAND)) {
         throw new RangeError(
           `${material.name}: its dispersion formula has a pole at ${round(pole)} nm, between ${wavelengthNm} nm ` +
             `and its valid range ${rangeText}; no index can be given there`

@@ -38,7 +38,9 @@ const nkRow = z.tuple(
       error: `wavelength must be in [${W.min}, ${W.max}] nm`
     }),
     num(' > 0').gt(0, { error: 'n must be > 0' }),
-    kField
+    num(` in [${K.min}, ${K.max}]`).min(K.min, { error: `k must be in [${K.min}, ${K.max}]` }).max(K.max, {
+      error: `k must be in [${K.min}, ${K.max}]`
+    })
   ],
   { error: 'each row must be [wavelength_nm, n, k]' }
 );
@@ -76,7 +78,7 @@ const dispersionSchema = z.discriminatedUnion(
         .max(ROWS.max, { error: `must hold ${ROWS.min} to ${ROWS.max} rows` })
     })
   ],
-  { error: 'model must be one of sellmeier, sellmeier-glass, cauchy, formula, table' }
+  { error: 'must name a model: sellmeier, sellmeier-glass, cauchy, formula or table' }
 );
 
 const rangeSchema = z.strictObject({

@@ -13,10 +13,10 @@ export interface ChipEscape {
   perFace: number;
   /** geometric fraction through one face, (1 − cos θc)/2 */
   perFaceGeometric: number;
-  /** faces × perFace, clamped to ≤ 1 */
-  total: number;
+  /** escape fraction of the chip, faces × perFace, clamped to ≤ 1 */
+  fraction: number;
   /** faces × perFaceGeometric, clamped to ≤ 1 */
-  totalGeometric: number;
+  fractionGeometric: number;
   /** true when more than one face counts and θc > 45°: neighbouring cones overlap */
   conesOverlap: boolean;
   /** true when a sum exceeded 1 and was clamped */
@@ -34,7 +34,7 @@ export interface ChipEscape {
  * share a direction), so for θc > 45° the sum counts some directions twice: `conesOverlap` is set and the
  * sum is an overestimate. Sums above 1 are clamped to 1 and `clamped` is set.
  * @param nIn chip index (> 0); @param nOut outside index (> 0); @param faces 1, 5 or 6
- * @example cuboidChipEscape(2.5, 1, 6).total // ≈ 0.1946
+ * @example cuboidChipEscape(2.5, 1, 6).fraction // ≈ 0.1946
  * @see E. F. Schubert, Light-Emitting Diodes, 2nd ed. (2006), ch. 5 (escape cones of a cuboid chip)
  */
 export function cuboidChipEscape(nIn: number, nOut: number, faces: ChipFaces): ChipEscape {
@@ -63,8 +63,8 @@ export function cuboidChipEscape(nIn: number, nOut: number, faces: ChipFaces): C
     criticalAngleRad: cone.criticalAngleRad,
     perFace: cone.fresnel,
     perFaceGeometric: cone.geometric,
-    total: Math.min(1, rawTotal),
-    totalGeometric: Math.min(1, rawGeometric),
+    fraction: Math.min(1, rawTotal),
+    fractionGeometric: Math.min(1, rawGeometric),
     conesOverlap,
     clamped,
     note: notes.join(' ')

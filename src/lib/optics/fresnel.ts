@@ -8,7 +8,8 @@
  * At normal incidence this gives rp = −rs; only |r|² matters for power.
  * Source: M. Born, E. Wolf, Principles of Optics, 7th ed., §1.5.2 (dielectrics) and §14.2 (absorbing media).
  */
-import { cSqrtInto, cDivInto, type Complex } from './complex';
+import { cDivInto, type Complex } from './complex';
+import { propagationFactorInto } from './propagation-factor';
 import { requireInRange, requirePositive, requireNonNegative } from './guard';
 
 // Roundoff allowance on a cosine passed in by a ray tracer (a normalised dot product can reach 1 + 2ε).
@@ -115,28 +116,6 @@ export interface FresnelComplexResult {
 const z = new Float64Array(16);
 
 /**
- * Sets z[i], z[i+1] to the normal-to-interface propagation factor N·cosθ = √(N² − β²) of a medium with
- * complex index N = n + ik, for the conserved tangential index β = N1 sin θ1 (complex in general).
- * Branch: the wave must decay away from the interface, Im(N cosθ) > 0; when Im is zero within roundoff
- * (lossless, propagating), the forward-going root Re(N cosθ) ≥ 0 is taken.
- * Source: Born & Wolf §1.5.4 (evanescent wave), §14.2 (absorbing media).
- */
-function propagationFactor(i: number, n: number, k: number, betaRe: number, betaIm: number): void {
-  // N² − β²
-  const wRe = n * n - k * k - (betaRe * betaRe - betaIm * betaIm);
-  const wIm = 2 * n * k - 2 * betaRe * betaIm;
-  cSqrtInto(z, i, wRe, wIm);
-  const re = z[i];
-  const im = z[i + 1];
-  const tiny = 1e-14 * (Math.abs(re) + Math.abs(im));
-  const flip = Math.abs(im) > tiny ? im < 0 : re < 0;
-  if (flip) {
-    z[i] = -re;
-    z[i + 1] = -im;
-  }
-}
-
-/**
  * Fresnel coefficients for complex indices N = n + ik on either side (absorbing chips, metals with
  * n < 1), valid beyond the critical angle (then |rs| = |rp| = 1 and T = 0, evanescent field in medium 2).
  *
@@ -176,7 +155,7 @@ export function fresnelComplex(
   // a = N1 cos θ1 (z[0..1]), b = N2 cos θ2 (z[2..3])
   const aRe = nI * cos1;
   const aIm = kI * cos1;
-  propagationFactor(2, nT, kT, betaRe, betaIm);
+  propagationFactorInto(z, 2, nT, kT, betaRe, betaIm);
   const bRe = z[2];
   const bIm = z[3];
 
@@ -261,7 +240,7 @@ export function reflectanceComplex(
   if (!(kT >= 0 && kT < Infinity)) {
     throw new RangeError(`kT must be a finite number ≥ 0 (got ${kT})`);
   }
-  propagationFactor(14, nT, kT, etaI * Math.sqrt(1 - cosI * cosI), 0);
+  propagationFactorInto(z, 14, nT, kT, etaI * Math.sqrt(1 - cosI * cosI), 0);
   const qRe = z[14];
   const qIm = z[15];
 

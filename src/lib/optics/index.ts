@@ -1,6 +1,20 @@
-/** Public API of the optics core: pure, synchronous, radians inside. */
+/** Public API of the optics core: pure, synchronous, radians inside, degrees only where a name says Deg. */
 export * from './complex';
 export * from './fresnel';
 export * from './snell';
 export * from './critical-angle';
 export * from './brewster';
+export * from './propagation-factor';
+export * from './quadrature';
+export * from './escape-cone';
+export * from './chip-escape';
+export * from './transmission-curve';
+export * from './layer';
+export * from './thin-film';
+export * from './incoherent-stack';
+export * from './trapped-bands';
+export * from './stack-extraction';
+export * from './stack-curves';
+export * from './graded-index';
+export * from './dome-estimate';
+export { requireInRange, requirePositive, requireNonNegative, requireInteger } from './guard';

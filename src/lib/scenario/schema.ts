@@ -127,8 +127,9 @@ type ObjectScenario = z.infer<typeof objectSchema>;
 type Ctx = z.RefinementCtx<ObjectScenario>;
 
 function checkMaterial(ctx: Ctx, path: (string | number)[], field: string, id: string, wantMetal: boolean): void {
+  if (!MATERIAL_ID_PATTERN.test(id)) return; // already reported by the field's own check
   const m = findMaterial(id);
-  if (!m) {
+  if (!m || m.id !== id) {
     ctx.addIssue({ code: 'custom', path, message: `${field} '${id}' is not in the material library.` });
   } else if (wantMetal !== (m.category === 'metal')) {
     const what = wantMetal ? 'a metal' : 'a non-metal (dielectric or semiconductor)';

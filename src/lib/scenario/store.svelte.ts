@@ -101,12 +101,28 @@ export class ScenarioStore {
     const url = new URL(window.location.href);
     if (url.searchParams.get(SCENARIO_PARAM) === this.param) return;
     url.searchParams.set(SCENARIO_PARAM, this.param);
-    try {
-      replaceState(url, page.state);
-    } catch {
-      // The router is not ready yet (very early in start-up): fall back to the plain history API.
-      history.replaceState(history.state, '', url);
+    replaceUrl(url);
+  }
+
+  /**
+   * A page's own view settings in the link (e.g. `into=outside` on the escape-cone page), beside the
+   * scenario, so a copied link reopens the same view. null removes a parameter. Browser only.
+   */
+  setPageParams(params: Record<string, string | null>): void {
+    if (!browser) return;
+    const url = new URL(window.location.href);
+    for (const [name, value] of Object.entries(params)) {
+      if (name === SCENARIO_PARAM) continue;
+      if (value === null) url.searchParams.delete(name);
+      else url.searchParams.set(name, value);
     }
+    if (url.href !== window.location.href) replaceUrl(url);
+  }
+
+  /** A page's view setting from the current link (null on the server or when absent). */
+  pageParam(name: string): string | null {
+    if (!browser) return null;
+    return new URL(window.location.href).searchParams.get(name);
   }
 
   #adopt(param: string): void {
@@ -164,6 +180,15 @@ export class ScenarioStore {
     } catch {
       // Another tab wrote something unreadable; keep ours.
     }
+  }
+}
+
+function replaceUrl(url: URL): void {
+  try {
+    replaceState(url, page.state);
+  } catch {
+    // The router is not ready yet (very early in start-up): fall back to the plain history API.
+    history.replaceState(history.state, '', url);
   }
 }
 

@@ -8,22 +8,20 @@ import { SURFACE_NONE, CHIP_TOP, CHIP_X_POS, CHIP_X_NEG, CHIP_Y_POS, CHIP_Y_NEG 
  * Writes the distance (mm, ≥ 0) to hit[0] and returns the entry face, or SURFACE_NONE on a miss.
  * A ray leaving a face it stands on has t_far ≤ eps and so misses, which keeps a ray that just left
  * (or was just reflected off) the chip from hitting it again at t = 0.
- * @param eps distance below which a hit counts as the ray's own starting face, mm (≥ 0)
+ * @param ray [x, y, z, dx, dy, dz] in mm, unit direction (read only)
+ * @param box [a, b, H, eps]: half width (x), half length (y), height, and the self-hit distance, mm
  * @see T. L. Kay, J. T. Kajiya, "Ray tracing complex scenes", SIGGRAPH '86 (slabs)
  */
-export function boxEntry(
-  px: number,
-  py: number,
-  pz: number,
-  dx: number,
-  dy: number,
-  dz: number,
-  a: number,
-  b: number,
-  H: number,
-  eps: number,
-  hit: Float64Array
-): number {
+export function boxEntry(ray: Float64Array, box: Float64Array, hit: Float64Array): number {
+  const px = ray[0];
+  const py = ray[1];
+  const pz = ray[2];
+  const dx = ray[3];
+  const dy = ray[4];
+  const dz = ray[5];
+  const a = box[0];
+  const b = box[1];
+  const H = box[2];
   let tNear = -Infinity;
   let tFar = Infinity;
   let face = SURFACE_NONE;
@@ -74,7 +72,7 @@ export function boxEntry(
   } else if (!(pz < H)) {
     return SURFACE_NONE;
   }
-  if (!(tNear <= tFar && tFar > eps)) return SURFACE_NONE;
+  if (!(tNear <= tFar && tFar > box[3])) return SURFACE_NONE;
   hit[0] = tNear > 0 ? tNear : 0;
   return face;
 }

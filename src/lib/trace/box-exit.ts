@@ -5,21 +5,19 @@ import { SURFACE_NONE, CHIP_TOP, CHIP_X_POS, CHIP_X_NEG, CHIP_Y_POS, CHIP_Y_NEG,
  * of the ray is at t = (wall − p)/d; the nearest of the three is the exit (slab method).
  * Writes the distance (mm, ≥ 0) to hit[0] and returns the face (a constant from surfaces.ts), or
  * SURFACE_NONE for a zero direction. A point a hair outside (roundoff) gives t = 0, never t < 0.
- * @param a half width (x), mm; @param b half length (y), mm; @param H height, mm
+ * @param ray [x, y, z, dx, dy, dz] in mm, unit direction (read only)
+ * @param box [a, b, H, …]: half width along x, half length along y, height, mm
  * @see T. L. Kay, J. T. Kajiya, "Ray tracing complex scenes", SIGGRAPH '86 (slabs)
  */
-export function boxExit(
-  px: number,
-  py: number,
-  pz: number,
-  dx: number,
-  dy: number,
-  dz: number,
-  a: number,
-  b: number,
-  H: number,
-  hit: Float64Array
-): number {
+export function boxExit(ray: Float64Array, box: Float64Array, hit: Float64Array): number {
+  const px = ray[0];
+  const py = ray[1];
+  const pz = ray[2];
+  const dx = ray[3];
+  const dy = ray[4];
+  const dz = ray[5];
+  const a = box[0];
+  const b = box[1];
   let t = Infinity;
   let face = SURFACE_NONE;
   // t = (wall − p)/d along each axis, for the wall ahead
@@ -44,7 +42,7 @@ export function boxExit(
     }
   }
   if (dz > 0) {
-    const tz = (H - pz) / dz;
+    const tz = (box[2] - pz) / dz;
     if (tz < t) {
       t = tz;
       face = CHIP_TOP;

@@ -5,26 +5,23 @@ import { CYLINDER_SIDE, CYLINDER_TOP, SURFACE_NONE } from './surfaces';
  * (the base plane z = 0 is handled by the caller). Wall: far root of A t² + 2B t + C = 0 with
  * A = dx² + dy², B = x dx + y dy, C = x² + y² − R²; top: t = (h − z)/dz for dz > 0.
  * Writes the distance (mm, ≥ 0) to hit[0] and returns CYLINDER_SIDE or CYLINDER_TOP, or SURFACE_NONE
- * when the ray heads straight down the axis direction (dz ≤ 0 and no horizontal motion).
- * @param R radius, mm (> 0); @param h height, mm (> 0)
+ * (hit[0] = ∞) when the ray moves straight down or not at all.
+ * @param ray [x, y, z, dx, dy, dz] in mm, unit direction (read only)
+ * @param shell [R, h]: radius and height, mm
  * @see W. H. Press et al., Numerical Recipes, 3rd ed., §5.6 (stable quadratic roots)
  */
-export function cylinderExit(
-  px: number,
-  py: number,
-  pz: number,
-  dx: number,
-  dy: number,
-  dz: number,
-  R: number,
-  h: number,
-  hit: Float64Array
-): number {
+export function cylinderExit(ray: Float64Array, shell: Float64Array, hit: Float64Array): number {
+  const px = ray[0];
+  const py = ray[1];
+  const dx = ray[3];
+  const dy = ray[4];
+  const dz = ray[5];
   let t = Infinity;
   let face = SURFACE_NONE;
   // Wall: far root, cancellation-free form
   const A = dx * dx + dy * dy;
   if (A > 0) {
+    const R = shell[0];
     const B = px * dx + py * dy;
     const C = px * px + py * py - R * R;
     let D = B * B - A * C;
@@ -35,7 +32,7 @@ export function cylinderExit(
   }
   // Flat top
   if (dz > 0) {
-    const tTop = (h - pz) / dz;
+    const tTop = (shell[1] - ray[2]) / dz;
     if (tTop < t) {
       t = tTop;
       face = CYLINDER_TOP;

@@ -4,24 +4,21 @@
  * v = (dx, dy, dz·R/h), solve |q + t v|² = R², i.e. A t² + 2B t + C = 0 with A = v·v, B = q·v,
  * C = q·q − R², and take the far root t = (−B + √(B² − AC))/A, written as −C/(B + √(B² − AC)) when
  * B > 0 to avoid cancellation.
- * Returns t in mm (≥ 0). A point a hair outside (roundoff, B² < AC) gives the tangent distance
+ * Writes t (mm, ≥ 0) to hit[0]. A point a hair outside (roundoff, B² < AC) gives the tangent distance
  * clamped at 0, never NaN.
- * @param R equatorial radius, mm (> 0); @param h polar semi-axis (height of the dome), mm (> 0)
+ * @param ray [x, y, z, dx, dy, dz] in mm, unit direction (read only)
+ * @param shell [R, h]: equatorial radius and polar semi-axis (the dome's height), mm
  * @see W. H. Press et al., Numerical Recipes, 3rd ed., §5.6 (stable quadratic roots)
  */
-export function spheroidExit(
-  px: number,
-  py: number,
-  pz: number,
-  dx: number,
-  dy: number,
-  dz: number,
-  R: number,
-  h: number
-): number {
-  const s = R / h;
-  const qz = pz * s;
-  const vz = dz * s;
+export function spheroidExit(ray: Float64Array, shell: Float64Array, hit: Float64Array): void {
+  const px = ray[0];
+  const py = ray[1];
+  const dx = ray[3];
+  const dy = ray[4];
+  const R = shell[0];
+  const s = R / shell[1];
+  const qz = ray[2] * s;
+  const vz = ray[5] * s;
   const A = dx * dx + dy * dy + vz * vz;
   const B = px * dx + py * dy + qz * vz;
   const C = px * px + py * py + qz * qz - R * R;
@@ -30,5 +27,5 @@ export function spheroidExit(
   const sq = Math.sqrt(D);
   // Far root of A t² + 2B t + C = 0, cancellation-free form
   const t = B > 0 ? -C / (B + sq) : (sq - B) / A;
-  return t > 0 ? t : 0;
+  hit[0] = t > 0 ? t : 0;
 }

@@ -1,0 +1,238 @@
+/**
+ * Encapsulant candidates ranked for one package by the closed-form dome estimate: a point-like chip
+ * face under a large hemispherical dome,
+ *   η_dome = η_F(nChip → nEnc) · (1 − R_normal(nEnc → nOut)),  gain = η_dome / η_F(nChip → nOut),
+ * with the no-TIR dome radius r·nEnc/nOut (r = chip half-diagonal) — see optics/dome-estimate.ts
+ * (Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; Born & Wolf §4.2.3 for the aplanatic radius).
+ * Optionally weighted over an emission spectrum, by radiant power and by luminous flux (CIE V(λ)).
+ */
+import { domeEstimate } from '../optics/index';
+import { indexAt } from '../materials/dispersion';
+import type { Material, MaterialCategory, MaterialNote, Provenance } from '../materials/types';
+import { weightedAverage, type Spectrum } from '../photometry/index';
+import { encapsulantNotes } from './encapsulant-notes';
+
+/** Where an index comes from: a fixed number (typed) or a material's dispersion. */
+export type IndexSource = { n: number } | { material: Material };
+
+/** A candidate and whether it came from the library or the user's own materials. */
+export interface Candidate {
+  material: Material;
+  source: 'library' | 'user';
+}
+
+export type RankOrder = 'design' | 'radiometric' | 'luminous';
+
+export interface RankInput {
+  chip: IndexSource;
+  outside: IndexSource;
+  /** Chip footprint, mm, (0, 1000]. */
+  chipWidthMm: number;
+  chipLengthMm: number;
+  /** The scenario's dome radius, mm, (0, 1000]. */
+  radiusMm: number;
+  /** Design wavelength, nm, [200, 2500]. */
+  wavelengthNm: number;
+  candidates: readonly Candidate[];
+  /** The scenario's current encapsulant: its label, index at the design wavelength, and library id if any. */
+  current: { label: string; n: number; materialId: string | null };
+  /** Emission spectrum for weighted figures; omit for the design wavelength only. */
+  spectrum?: Spectrum | null;
+  /** Which figure orders the rows (default 'design'). */
+  order?: RankOrder;
+}
+
+export interface EncapsulantRow {
+  rank: number;
+  id: string;
+  name: string;
+  category: MaterialCategory;
+  source: 'library' | 'user';
+  provenance: Provenance;
+  /** Index at the design wavelength (real part; absorption is not part of the closed form). */
+  nEnc: number;
+  kEnc: number;
+  inRange: boolean;
+  warning: string | null;
+  etaDome: number;
+  /** Over the bare chip. */
+  gain: number;
+  /** Over the scenario's current encapsulant. */
+  gainOverCurrent: number;
+  minRadiusNoTirMm: number;
+  /** The scenario's dome radius is at least the no-TIR radius. */
+  meetsNoTir: boolean;
+  /** Spectrally weighted η_dome (null without a spectrum; luminous null when V(λ) = 0 over the band). */
+  radiometric: number | null;
+  luminous: number | null;
+  maxServiceTempC: number | null;
+  notes: MaterialNote[];
+  isCurrent: boolean;
+}
+
+export interface EncapsulantRanking {
+  wavelengthNm: number;
+  nChip: number;
+  nOut: number;
+  /** η_F of the bare chip face at the design wavelength. */
+  etaBare: number;
+  current: { label: string; n: number; etaDome: number; minRadiusNoTirMm: number };
+  radiusMm: number;
+  halfDiagonalMm: number;
+  order: RankOrder;
+  rows: EncapsulantRow[];
+  /** Candidates that could not be evaluated (e.g. a formula with no index at this wavelength). */
+  skipped: { id: string; name: string; reason: string }[];
+  /** Warnings about the chip or outside medium (out-of-range wavelengths). */
+  warnings: string[];
+}
+
+const SIZE_MAX_MM = 1000;
+/** Nodes at which η_dome is evaluated across a spectrum before linear interpolation. */
+const SPECTRAL_NODES = 17;
+
+function positive(field: string, value: unknown, max: number): number {
+  if (typeof value !== 'number' || !(value > 0 && value <= max)) {
+    throw new RangeError(`${field} must be a number in (0, ${max}] (got ${String(value)})`);
+  }
+  return value;
+}
+
+function indexOf(source: IndexSource, wavelengthNm: number, warnings: string[] | null, field: string): number {
+  if ('material' in source) {
+    const v = indexAt(source.material, wavelengthNm);
+    if (v.warning && warnings && !warnings.includes(v.warning)) warnings.push(v.warning);
+    return v.n;
+  }
+  if (typeof source.n !== 'number' || !(source.n >= 1 && source.n <= 6)) {
+    throw new RangeError(`${field} index must be a number in [1, 6] (got ${String(source.n)})`);
+  }
+  return source.n;
+}
+
+/**
+ * f(λ) evaluated at SPECTRAL_NODES even nodes over the spectrum's span and interpolated linearly
+ * between them: indices vary slowly with λ, so this keeps a 241-sample band cheap.
+ */
+function smoothOverBand(spectrum: Spectrum, f: (nm: number) => number): (nm: number) => number {
+  const w = spectrum.wavelengthNm;
+  const lo = w[0];
+  const hi = w[w.length - 1];
+  if (w.length <= SPECTRAL_NODES || !(hi > lo)) return f;
+  const step = (hi - lo) / (SPECTRAL_NODES - 1);
+  const values = Array.from({ length: SPECTRAL_NODES }, (_, i) => f(i === SPECTRAL_NODES - 1 ? hi : lo + i * step));
+  return (nm) => {
+    const t = Math.min(SPECTRAL_NODES - 1, Math.max(0, (nm - lo) / step));
+    const i = Math.min(SPECTRAL_NODES - 2, Math.floor(t));
+    return values[i] + (t - i) * (values[i + 1] - values[i]);
+  };
+}
+
+/**
+ * Ranks encapsulant candidates for a package by closed-form dome extraction (see file header).
+ * Candidates whose index cannot be evaluated are listed in `skipped` with the reason, never dropped
+ * silently. Ties keep the candidates' order.
+ * @throws RangeError naming the field for bad sizes, wavelength or typed indices
+ */
+export function rankEncapsulants(input: RankInput): EncapsulantRanking {
+  if (!input || typeof input !== 'object') throw new RangeError('rankEncapsulants needs an input object');
+  const w = positive('chipWidthMm', input.chipWidthMm, SIZE_MAX_MM);
+  const l = positive('chipLengthMm', input.chipLengthMm, SIZE_MAX_MM);
+  const radiusMm = positive('radiusMm', input.radiusMm, SIZE_MAX_MM);
+  const lambda = input.wavelengthNm;
+  if (typeof lambda !== 'number' || !(lambda >= 200 && lambda <= 2500)) {
+    throw new RangeError(`wavelengthNm must be a number in [200, 2500] nm (got ${String(lambda)})`);
+  }
+  const order = input.order ?? 'design';
+  if (order !== 'design' && order !== 'radiometric' && order !== 'luminous') {
+    throw new RangeError(`order must be 'design', 'radiometric' or 'luminous' (got ${String(order)})`);
+  }
+  if (!Array.isArray(input.candidates)) throw new RangeError('candidates must be a list of materials');
+  const cur = input.current;
+  if (!cur || typeof cur.n !== 'number' || !(cur.n >= 1 && cur.n <= 6)) {
+    throw new RangeError(`current encapsulant index must be a number in [1, 6] (got ${String(cur?.n)})`);
+  }
+
+  const warnings: string[] = [];
+  const nChip = indexOf(input.chip, lambda, warnings, 'Chip');
+  const nOut = indexOf(input.outside, lambda, warnings, 'Outside medium');
+  const dome = (nC: number, nE: number, nO: number) =>
+    domeEstimate({ nChip: nC, nEnc: nE, nOut: nO, chipWidthMm: w, chipLengthMm: l, radiusMm });
+  const currentDome = dome(nChip, cur.n, nOut);
+  const spectrum = input.spectrum ?? null;
+
+  const rows: EncapsulantRow[] = [];
+  const skipped: EncapsulantRanking['skipped'] = [];
+  for (const { material, source } of input.candidates) {
+    try {
+      const at = indexAt(material, lambda);
+      const d = dome(nChip, at.n, nOut);
+      let radiometric: number | null = null;
+      let luminous: number | null = null;
+      if (spectrum) {
+        // η_dome(λ) with every index at λ; warnings of the band are the design-wavelength ones plus the chip's
+        const f = smoothOverBand(spectrum, (nm) =>
+          dome(indexOf(input.chip, nm, null, 'Chip'), indexAt(material, nm).n, indexOf(input.outside, nm, null, 'Outside medium')).etaDome
+        );
+        radiometric = weightedAverage(spectrum, f, 'radiometric').value;
+        try {
+          luminous = weightedAverage(spectrum, f, 'luminous').value;
+        } catch {
+          luminous = null; // V(λ) = 0 over the whole band: no luminous figure
+        }
+      }
+      rows.push({
+        rank: 0,
+        id: material.id,
+        name: material.name,
+        category: material.category,
+        source,
+        provenance: material.provenance,
+        nEnc: at.n,
+        kEnc: at.k,
+        inRange: at.inRange,
+        warning: at.warning ?? null,
+        etaDome: d.etaDome,
+        gain: d.gain,
+        gainOverCurrent: d.etaDome / currentDome.etaDome,
+        minRadiusNoTirMm: d.minRadiusNoTirMm,
+        meetsNoTir: d.noTir,
+        radiometric,
+        luminous,
+        maxServiceTempC: material.maxServiceTempC ?? null,
+        notes: encapsulantNotes(material, source),
+        isCurrent: cur.materialId !== null && cur.materialId === material.id
+      });
+    } catch (error) {
+      skipped.push({ id: material.id, name: material.name, reason: error instanceof Error ? error.message : String(error) });
+    }
+  }
+
+  // Order: the chosen figure, highest first; the sort is stable, so ties keep the candidates' order
+  const key = (r: EncapsulantRow) => (order === 'radiometric' ? r.radiometric : order === 'luminous' ? r.luminous : null) ?? r.etaDome;
+  rows.sort((a, b) => key(b) - key(a));
+  rows.forEach((r, i) => (r.rank = i + 1));
+
+  return {
+    wavelengthNm: lambda,
+    nChip,
+    nOut,
+    etaBare: currentDome.etaBare,
+    current: { label: cur.label, n: cur.n, etaDome: currentDome.etaDome, minRadiusNoTirMm: currentDome.minRadiusNoTirMm },
+    radiusMm,
+    halfDiagonalMm: currentDome.halfDiagonalMm,
+    order,
+    rows,
+    skipped,
+    warnings
+  };
+}
+
+/** The candidates of a ranking: library encapsulants and optics, then the user's materials of any category but metal. */
+export function encapsulantCandidates(library: readonly Material[], userMaterials: readonly Material[] = []): Candidate[] {
+  const fit = (m: Material) => m.category === 'encapsulant' || m.category === 'optic';
+  return [
+    ...library.filter(fit).map((material) => ({ material, source: 'library' as const })),
+    ...userMaterials.filter((m) => m.category !== 'metal').map((material) => ({ material, source: 'user' as const }))
+  ];
+}

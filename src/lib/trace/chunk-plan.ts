@@ -1,0 +1,28 @@
+/**
+ * How a run is cut into chunks. The chunk size is fixed, so chunk i always holds the same rays with the
+ * same random numbers, whichever worker traces it: one thread and eight give identical ledgers.
+ */
+
+/** Rays per chunk (the last chunk may be shorter). */
+export const CHUNK_SIZE = 16384;
+
+export interface ChunkPlan {
+  /** Total rays of the run. */
+  rays: number;
+  /** Rays per full chunk. */
+  chunkSize: number;
+  /** Number of chunks, ⌈rays / chunkSize⌉. */
+  chunkCount: number;
+}
+
+/** The chunk plan for a run of `rays` rays (integer ≥ 0). */
+export function chunkPlan(rays: number): ChunkPlan {
+  return { rays, chunkSize: CHUNK_SIZE, chunkCount: Math.ceil(rays / CHUNK_SIZE) };
+}
+
+/** Rays in chunk `index` of a plan: chunkSize, except the remainder in the last chunk. */
+export function raysInChunk(plan: ChunkPlan, index: number): number {
+  const start = index * plan.chunkSize;
+  const left = plan.rays - start;
+  return left < plan.chunkSize ? (left > 0 ? left : 0) : plan.chunkSize;
+}

@@ -1,0 +1,176 @@
+/**
+ * Turns a tally into the numbers a reader wants: extraction with its standard error, the ledger as
+ * fractions and counts, escapes per surface, and the far field.
+ *
+ * Far field (rotationally averaged about z): the escape histogram has 180 bins of 1° in polar angle θ.
+ * Intensity per solid angle in bin i is N_i / ΔΩ_i with ΔΩ_i = 2π (cos θ_i − cos θ_{i+1}); it is
+ * reported relative to a Lambertian emitter of the same escaped flux Φ, whose on-axis intensity is
+ * I0 = Φ/π (so a Lambertian reads cos θ).
+ * - onAxisVsLambertian: mean intensity over the 0–5° cap over I0 (a Lambertian gives (1 + cos 5°)/2
+ *   = 0.9981; the cap keeps the count large enough to be steady).
+ * - beamAngleDeg: full angle at half maximum. Each bin's intensity is smoothed over ±2 bins (counts
+ *   over solid angle of the 5° window, clipped at 0° and 180°); from the peak outward the first
+ *   crossing below half the peak is interpolated linearly between bin centres; the full angle is
+ *   twice that polar angle. null when nothing escaped or the intensity never falls to half.
+ * Sources: Lambertian I(θ) = I0 cos θ with Φ = π I0 and FWHM 120° (common practice); solid angle of a
+ * polar zone 2π (cos θ1 − cos θ2) (common practice).
+ */
+import { POLAR_BINS, type Tally } from './tally';
+
+export interface FarFieldBin {
+  /** Bin centre, degrees from +z. */
+  thetaDeg: number;
+  /** Intensity per solid angle over the Lambertian I0 = Φ/π of the same escaped flux. */
+  relativeIntensity: number;
+}
+
+export interface TraceSummary {
+  rays: number;
+  /** Escaped / launched. */
+  extraction: number;
+  /** Binomial standard error of the extraction, √(p(1 − p)/N). */
+  stderr: number;
+  /** Fractions of launched rays; they sum to 1. */
+  ledger: { escaped: number; chip: number; encapsulant: number; base: number; lost: number };
+  /** The same as integers; escaped + chip + encapsulant + base + lost = rays exactly. */
+  counts: {
+    rays: number;
+    escaped: number;
+    chip: number;
+    encapsulant: number;
+    base: number;
+    lost: number;
+    escapedBelowHorizon: number;
+  };
+  /** Fraction of launched rays that escaped heading below the horizon (included in extraction). */
+  escapedBelowHorizon: number;
+  /** Mean surface events per ray. */
+  eventsPerRay: number;
+  /** Fraction of launched rays escaping through each surface. */
+  perSurface: { chipTop: number; chipSide: number; dome: number; cylinderTop: number; cylinderSide: number };
+  /** Rays stopped because the geometry failed (counted in lost); should be 0. */
+  geometryErrors: number;
+  /** Debug counts of total internal reflections. */
+  tir: { outerSurface: number; chipFaces: number };
+  /** Set when rays reached the event cap: explains what the lost share means. */
+  trappedNote: string | null;
+  /** Set when geometry errors occurred. */
+  geometryNote: string | null;
+  farField: {
+    beamAngleDeg: number | null;
+    onAxisVsLambertian: number | null;
+    bins: FarFieldBin[];
+  };
+}
+
+const RAD = Math.PI / 180;
+const ON_AXIS_CAP_DEG = 5;
+const SMOOTH_HALF_WIDTH = 2;
+
+/** Solid angle of the polar zone [θ1, θ2] in degrees: 2π (cos θ1 − cos θ2), steradians. */
+function zoneSolidAngle(theta1Deg: number, theta2Deg: number): number {
+  // ΔΩ = 2π (cos θ1 − cos θ2)
+  return 2 * Math.PI * (Math.cos(theta1Deg * RAD) - Math.cos(theta2Deg * RAD));
+}
+
+function percent(x: number): string {
+  return `${(100 * x).toFixed(x < 0.001 ? 3 : 1)} %`;
+}
+
+/** The far field of an escape histogram; relative intensities against I0 = escaped/π. */
+function farField(histogram: Float64Array, escaped: number): TraceSummary['farField'] {
+  const bins: FarFieldBin[] = [];
+  if (escaped === 0) {
+    for (let i = 0; i < POLAR_BINS; i++) bins.push({ thetaDeg: i + 0.5, relativeIntensity: 0 });
+    return { beamAngleDeg: null, onAxisVsLambertian: null, bins };
+  }
+  const i0 = escaped / Math.PI;
+  for (let i = 0; i < POLAR_BINS; i++) {
+    bins.push({ thetaDeg: i + 0.5, relativeIntensity: histogram[i] / zoneSolidAngle(i, i + 1) / i0 });
+  }
+
+  // On axis: mean intensity over the 0–5° cap
+  let capCount = 0;
+  for (let i = 0; i < ON_AXIS_CAP_DEG; i++) capCount += histogram[i];
+  const onAxisVsLambertian = capCount / zoneSolidAngle(0, ON_AXIS_CAP_DEG) / i0;
+
+  // Smoothed profile: counts over solid angle of a ±2-bin window
+  const smooth = new Float64Array(POLAR_BINS);
+  let peak = 0;
+  let peakBin = 0;
+  for (let i = 0; i < POLAR_BINS; i++) {
+    const lo = Math.max(0, i - SMOOTH_HALF_WIDTH);
+    const hi = Math.min(POLAR_BINS - 1, i + SMOOTH_HALF_WIDTH);
+    let n = 0;
+    for (let j = lo; j <= hi; j++) n += histogram[j];
+    smooth[i] = n / zoneSolidAngle(lo, hi + 1);
+    if (smooth[i] > peak) {
+      peak = smooth[i];
+      peakBin = i;
+    }
+  }
+  let beamAngleDeg: number | null = null;
+  const half = peak / 2;
+  for (let i = peakBin + 1; i < POLAR_BINS; i++) {
+    if (smooth[i] < half) {
+      // linear interpolation between bin centres i − 1 + 0.5 and i + 0.5
+      const f = (smooth[i - 1] - half) / (smooth[i - 1] - smooth[i]);
+      beamAngleDeg = 2 * (i - 0.5 + f);
+      break;
+    }
+  }
+  return { beamAngleDeg, onAxisVsLambertian, bins };
+}
+
+/** Summarises a tally (see the file comment for the far-field definitions). */
+export function summarize(tally: Tally): TraceSummary {
+  const N = tally.launched;
+  const inv = N > 0 ? 1 / N : 0;
+  const p = tally.escaped * inv;
+  const trapped = tally.lost - tally.geometryErrors;
+  return {
+    rays: N,
+    extraction: p,
+    // binomial standard error √(p(1 − p)/N)
+    stderr: N > 0 ? Math.sqrt((p * (1 - p)) / N) : 0,
+    ledger: {
+      escaped: p,
+      chip: tally.absorbedChip * inv,
+      encapsulant: tally.absorbedEncapsulant * inv,
+      base: tally.absorbedBase * inv,
+      lost: tally.lost * inv
+    },
+    counts: {
+      rays: N,
+      escaped: tally.escaped,
+      chip: tally.absorbedChip,
+      encapsulant: tally.absorbedEncapsulant,
+      base: tally.absorbedBase,
+      lost: tally.lost,
+      escapedBelowHorizon: tally.escapedBelowHorizon
+    },
+    escapedBelowHorizon: tally.escapedBelowHorizon * inv,
+    eventsPerRay: tally.events * inv,
+    perSurface: {
+      chipTop: tally.escapedChipTop * inv,
+      chipSide: tally.escapedChipSide * inv,
+      dome: tally.escapedDome * inv,
+      cylinderTop: tally.escapedCylinderTop * inv,
+      cylinderSide: tally.escapedCylinderSide * inv
+    },
+    geometryErrors: tally.geometryErrors,
+    tir: { outerSurface: tally.outerSurfaceTir, chipFaces: tally.chipFaceTir },
+    trappedNote:
+      trapped > 0
+        ? `${percent(trapped * inv)} of rays reached the event cap without escaping or being absorbed: they travel ` +
+          `outside every escape cone, and nothing (absorption, base loss) ends them. They are counted ` +
+          `as lost, not escaped; a real chip would absorb them. Add chip or encapsulant absorption, a base ` +
+          `reflectance below 1, or raise the event cap to see where they end.`
+        : null,
+    geometryNote:
+      tally.geometryErrors > 0
+        ? `${tally.geometryErrors} rays stopped on a geometry error (no surface found ahead) and are counted as lost.`
+        : null,
+    farField: farField(tally.polarHistogram, tally.escaped)
+  };
+}

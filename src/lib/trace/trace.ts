@@ -1,0 +1,35 @@
+/**
+ * Single-thread trace: validates the package and options, cuts the run into the fixed chunk plan and
+ * traces the chunks in order. The worker pools run the same chunks, so they give the same tally.
+ */
+import { chunkPlan, raysInChunk } from './chunk-plan';
+import { DEFAULT_MAX_EVENTS, validateTraceOptions, validateTracePackage, type TraceOptions, type TracePackage } from './package-spec';
+import { createTally, type Tally } from './tally';
+import { traceChunk } from './trace-chunk';
+
+export { chunkPlan } from './chunk-plan';
+
+/**
+ * Traces `options.rays` rays through `pkg` on the calling thread and returns the tally.
+ * @param onProgress called after each chunk with (rays done, rays total)
+ * @throws RangeError naming the field and its allowed range when pkg or options are invalid
+ */
+export function traceSync(
+  pkg: TracePackage,
+  options: TraceOptions,
+  onProgress?: (raysDone: number, raysTotal: number) => void
+): Tally {
+  validateTracePackage(pkg);
+  validateTraceOptions(options);
+  const maxEvents = options.maxEvents ?? DEFAULT_MAX_EVENTS;
+  const plan = chunkPlan(options.rays);
+  const tally = createTally();
+  let done = 0;
+  for (let i = 0; i < plan.chunkCount; i++) {
+    const n = raysInChunk(plan, i);
+    traceChunk(pkg, i, n, options.seed, tally, maxEvents);
+    done += n;
+    onProgress?.(done, plan.rays);
+  }
+  return tally;
+}

@@ -1,0 +1,111 @@
+/**
+ * The page's layer stack in the running app: kept in the link (`stack=` parameter, next to the
+ * scenario's `s=`) and in localStorage, so a reload or a copied link reopens the same stack.
+ * Only this file touches the URL and storage for the stack.
+ */
+import { browser } from '$app/environment';
+import { replaceState } from '$app/navigation';
+import { page } from '$app/state';
+import { checkStack, defaultStack, type StackDoc } from './stack-doc';
+import { decodeStackParam, encodeStackParam, STACK_PARAM } from './stack-url';
+
+/** localStorage key; the number is the stack version written under it. */
+export const STACK_KEY = 'outcouple.stack.v1';
+
+export class StackStore {
+  /** The current, always valid stack. Replace it through `set`. */
+  doc: StackDoc = $state.raw(defaultStack());
+  /** Why a link's stack was not used, until dismissed. */
+  linkMessage: string | null = $state(null);
+  /** Set when the browser refuses storage. */
+  storageMessage: string | null = $state(null);
+  readonly param: string = $derived(encodeStackParam(this.doc));
+
+  #started = false;
+
+  /** Reads the link (which wins), else storage, else keeps the current stack; writes both. Returns the cleanup. */
+  start(): () => void {
+    if (!browser || this.#started) return () => {};
+    this.#started = true;
+    const fromUrl = new URL(window.location.href).searchParams.get(STACK_PARAM);
+    const saved = this.#load();
+    const fallback = saved ?? this.doc;
+    if (fromUrl) {
+      const d = decodeStackParam(fromUrl, fallback);
+      this.doc = d.doc;
+      this.linkMessage = d.message;
+    } else {
+      this.doc = fallback;
+    }
+    this.#save();
+    this.writeUrl();
+    return () => {
+      this.#started = false;
+    };
+  }
+
+  /** Makes `next` the stack if it is valid (saved and put in the link). Returns null, or the message naming the problem. */
+  set(next: StackDoc): string | null {
+    const r = checkStack(next);
+    if (!r.ok) return r.message;
+    this.doc = r.doc;
+    this.#save();
+    this.writeUrl();
+    return null;
+  }
+
+  /** Puts the stack into the current link, keeping the other parameters. */
+  writeUrl(): void {
+    if (!browser || !this.#started) return;
+    const url = new URL(window.location.href);
+    if (url.searchParams.get(STACK_PARAM) === this.param) return;
+    url.searchParams.set(STACK_PARAM, this.param);
+    try {
+      replaceState(url, page.state);
+    } catch {
+      // Router not ready yet: the plain history API does the same.
+      history.replaceState(history.state, '', url);
+    }
+  }
+
+  #storage(): Storage | null {
+    try {
+      const s = window.localStorage;
+      const probe = `${STACK_KEY}.probe`;
+      s.setItem(probe, '1');
+      s.removeItem(probe);
+      return s;
+    } catch {
+      this.storageMessage = "Cannot save in this browser: the stack is kept only in this tab's link.";
+      return null;
+    }
+  }
+
+  #load(): StackDoc | null {
+    const s = this.#storage();
+    if (!s) return null;
+    try {
+      const text = s.getItem(STACK_KEY);
+      if (!text) return null;
+      const r = checkStack(JSON.parse(text));
+      return r.ok ? r.doc : null;
+    } catch {
+      return null;
+    }
+  }
+
+  #save(): void {
+    if (!this.#started) return;
+    const s = this.#storage();
+    if (!s) return;
+    try {
+      s.setItem(STACK_KEY, JSON.stringify(this.doc));
+      this.storageMessage = null;
+    } catch {
+      this.storageMessage = "Cannot save in this browser: the stack is kept only in this tab's link.";
+    }
+  }
+}
+
+/** The page's one stack store (module-level, so the stack survives leaving and re-entering the page). */
+export const stackStore = new StackStore();

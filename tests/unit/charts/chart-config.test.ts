@@ -1,0 +1,60 @@
+import { describe, expect, it } from 'vitest';
+import { chartConfig, FALLBACK_PALETTE, seriesColor } from '../../../src/lib/charts/chart-config';
+import { polarChart } from '../../../src/lib/charts/polar-chart';
+import type { ChartSpec } from '../../../src/lib/charts/spec';
+
+const line: ChartSpec = {
+  kind: 'line',
+  title: 'T',
+  ariaLabel: 'a',
+  x: { title: 'θ (°)', min: 0, max: 90 },
+  y: { title: 'T (%)' },
+  series: [
+    { label: 'data', points: [{ x: 0, y: 1 }], color: 0 },
+    { label: 'guide', points: [{ x: 0, y: 0 }], color: 0, role: 'guide' },
+    { label: 'scatter', points: [{ x: 1, y: 2 }], color: 7, line: false }
+  ]
+};
+
+describe('chartConfig', () => {
+  it('draws line charts as scatter charts with lines, numeric axes with titles, animation off', () => {
+    const c = chartConfig(line, FALLBACK_PALETTE) as any;
+    expect(c.type).toBe('scatter');
+    expect(c.options.animation).toBe(false);
+    expect(c.options.scales.x).toMatchObject({ type: 'linear', min: 0, max: 90, title: { display: true, text: 'θ (°)' } });
+    expect(c.options.scales.y.title.text).toBe('T (%)');
+    expect(c.data.datasets[0]).toMatchObject({ label: 'data', showLine: true, pointRadius: 0, borderColor: FALLBACK_PALETTE.series[0] });
+    expect(c.data.datasets[2]).toMatchObject({ showLine: false, pointRadius: 3.5 });
+  });
+
+  it('wraps palette slots and greys out guides; guides are kept out of legend and tooltips', () => {
+    expect(seriesColor(FALLBACK_PALETTE, line.series[2])).toBe(FALLBACK_PALETTE.series[1]); // slot 7 of 6 → 1
+    expect(seriesColor(FALLBACK_PALETTE, line.series[1])).toBe(FALLBACK_PALETTE.guide);
+    const c = chartConfig(line, FALLBACK_PALETTE) as any;
+    const filter = c.options.plugins.legend.labels.filter;
+    expect([0, 1, 2].map((i) => filter({ datasetIndex: i }))).toEqual([true, false, true]);
+    expect(c.options.plugins.tooltip.filter({ datasetIndex: 1 })).toBe(false);
+  });
+
+  it('bar charts use the categories and a category x axis', () => {
+    const c = chartConfig(
+      { ...line, kind: 'bar', categories: ['a', 'b'], series: [{ label: 'v', points: [{ x: 0, y: 1 }, { x: 1, y: 2 }], color: 2 }] },
+      FALLBACK_PALETTE
+    ) as any;
+    expect(c.type).toBe('bar');
+    expect(c.data.labels).toEqual(['a', 'b']);
+    expect(c.data.datasets[0].data).toEqual([1, 2]);
+    expect(c.options.scales.x.type).toBe('category');
+  });
+
+  it('polar charts keep their aspect ratio so a circle stays round', () => {
+    const c = chartConfig(polarChart([{ label: 'a', thetaRad: [0], intensity: [1] }], { title: 'F', intensityLabel: 'I' }), FALLBACK_PALETTE) as any;
+    expect(c.options.maintainAspectRatio).toBe(true);
+    expect(c.options.aspectRatio).toBeCloseTo(2 * 0.92, 12);
+  });
+
+  it('log axes when asked', () => {
+    const c = chartConfig({ ...line, y: { title: 'rays', log: true } }, FALLBACK_PALETTE) as any;
+    expect(c.options.scales.y.type).toBe('logarithmic');
+  });
+});

@@ -1,0 +1,66 @@
+import { describe, expect, it } from 'vitest';
+import { DEMO_SCENARIO, demoScenario } from '../../../src/lib/scenario/defaults';
+import { migrateScenario } from '../../../src/lib/scenario/migrate';
+import { readScenario } from '../../../src/lib/scenario/read-scenario';
+
+/** A version-0 draft: media as bare ids or numbers, one wavelength, base as a number. */
+const V0 = {
+  version: 0,
+  name: 'Old draft',
+  wavelengthNm: 530,
+  chip: { material: 2.45, widthMm: 0.5, lengthMm: 0.5, heightMm: 0.1 },
+  base: 0.9,
+  encapsulant: { material: 'epoxy', shape: 'dome', radiusMm: 1.5 },
+  outside: 'air',
+  rays: 50_000
+};
+
+describe('migrateScenario', () => {
+  it('lifts a version-0 draft to version 1, filling what it lacked', () => {
+    const r = readScenario(V0);
+    expect(r.ok).toBe(true);
+    if (!r.ok) return;
+    expect(r.migratedFrom).toBe(0);
+    const s = r.scenario;
+    expect(s.version).toBe(1);
+    expect(s.emission).toEqual({ kind: 'single', wavelengthNm: 530 });
+    expect(s.chip.medium).toEqual({ kind: 'index', n: 2.45, k: 0 });
+    expect(s.chip.emitterZMm).toBe(0.1); // defaults to the top of the chip
+    expect(s.base).toEqual({ kind: 'reflectance', reflectance: 0.9 });
+    expect(s.encapsulant).toEqual({ medium: { kind: 'material', id: 'epoxy' }, shape: 'dome', radiusMm: 1.5, heightMm: 1.5, absorptionPerMm: 0 });
+    expect(s.outside).toEqual({ kind: 'material', id: 'air' });
+    expect(s.trace).toEqual({ rays: 50_000, seed: DEMO_SCENARIO.trace.seed, polarization: 'average' });
+  });
+
+  it('reads a scenario without a version field as version 0', () => {
+    const { version: _v, ...unversioned } = V0;
+    const r = readScenario(unversioned);
+    expect(r.ok && r.migratedFrom).toBe(0);
+  });
+
+  it('a version-0 draft with a bad value fails with the version-1 message for that field', () => {
+    const r = readScenario({ ...V0, wavelengthNm: 50 });
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.message).toBe('Wavelength must be between 200 and 2500 nm.');
+  });
+
+  it('passes version 1 through unchanged', () => {
+    const s = demoScenario();
+    const m = migrateScenario(s);
+    expect(m).toEqual({ ok: true, value: s, from: 1 });
+    const r = readScenario(s);
+    expect(r.ok && r.migratedFrom).toBeNull();
+  });
+
+  it('refuses a newer version with a message that names both versions', () => {
+    const m = migrateScenario({ ...demoScenario(), version: 2 });
+    expect(m.ok).toBe(false);
+    if (!m.ok) expect(m.message).toMatch(/newer version of Outcouple \(scenario version 2\); this one reads versions up to 1/);
+  });
+
+  it('refuses non-objects and odd versions', () => {
+    for (const bad of [null, 3, 'x', [], { version: -1 }, { version: 1.5 }, { version: '1' }]) {
+      expect(migrateScenario(bad).ok).toBe(false);
+    }
+  });
+});
