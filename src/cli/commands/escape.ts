@@ -10,7 +10,7 @@ export const help = `outcouple escape — escape cone of a chip face
   --n-in N | --in MATERIAL     chip index (1 to 6, or n+ki) or library material
   --n-out N | --out MATERIAL   surrounding medium (default 1, air)
   --wavelength NM              wavelength for library materials (200 to 2500 nm, default 450)
-  --faces 1..6                 emitting faces of a cuboid chip (1 top; 5 top + sides; 6 all), default 1
+  --faces 1|5|6                emitting faces of a cuboid chip: 1 top only; 5 top + 4 sides; 6 all (default 1)
   --json                       print one JSON object
 
 Example: outcouple escape --n-in 2.45 --n-out 1 --json`;
@@ -27,11 +27,12 @@ export function run(argv: string[]): void {
   const chip = indexOption(values, 'n-in', 'in', wavelengthNm);
   const outside = indexOption(values, 'n-out', 'out', wavelengthNm, '1');
   const faces = integerOption(values, 'faces', 1, 6, 1);
+  if (faces !== 1 && faces !== 5 && faces !== 6) throw new CliError(`--faces must be 1 (top only), 5 (top + 4 sides) or 6 (all faces) (got ${faces})`);
   if (chip.n < 1 || chip.n > 6) throw new CliError(`--n-in must be from 1 to 6 (got ${chip.n})`);
   if (outside.n < 1 || outside.n > 6) throw new CliError(`--n-out must be from 1 to 6 (got ${outside.n})`);
 
   const cone = escapeCone(chip.n, outside.n);
-  const chipEscape = cuboidChipEscape(chip.n, outside.n, faces);
+  const chipEscape = cuboidChipEscape(chip.n, outside.n, faces as 1 | 5 | 6);
   const thetaC = criticalAngle(chip.n, outside.n);
   const result = {
     nIn: chip.n, nOut: outside.n, wavelengthNm, faces,

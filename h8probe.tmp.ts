@@ -1,0 +1,2 @@
+import { run } from './src/cli/commands/claim';
+run(process.argv.slice(2));
