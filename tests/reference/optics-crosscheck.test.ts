@@ -26,11 +26,16 @@ class C {
   abs2() { return this.re * this.re + this.im * this.im; }
   conj() { return new C(this.re, -this.im); }
   exp() { const m = Math.exp(this.re); return new C(m * Math.cos(this.im), m * Math.sin(this.im)); }
+  /** principal root, in the cancellation-free form (W. H. Press et al., Numerical Recipes, §5.5) */
   sqrt() {
+    if (this.re === 0 && this.im === 0) return new C(0);
     const r = Math.hypot(this.re, this.im);
-    const re = Math.sqrt((r + this.re) / 2);
-    const im = Math.sign(this.im || 1) * Math.sqrt(Math.max(0, (r - this.re) / 2));
-    return new C(re, im);
+    if (this.re >= 0) {
+      const t = Math.sqrt((r + this.re) / 2);
+      return new C(t, this.im / (2 * t));
+    }
+    const t = Math.sqrt((r - this.re) / 2);
+    return new C(Math.abs(this.im) / (2 * t), this.im < 0 ? -t : t);
   }
 }
 

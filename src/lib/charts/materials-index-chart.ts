@@ -59,9 +59,12 @@ export function materialsIndexChart(curves: readonly MaterialCurve[], opts: Mate
       series.push({ label: j === 0 ? c.label : `${c.label} (part ${j + 1})`, points, color: i })
     );
     if (opts.extrapolated) {
-      runs(c, values, false).forEach((points, j) =>
-        series.push({ label: j === 0 ? `${c.label}, outside its valid range` : `${c.label}, outside its valid range (${j + 1})`, points, color: i, dashed: true })
-      );
+      const firstIn = c.inRange.indexOf(true);
+      runs(c, values, false).forEach((points) => {
+        // A run ending at or before the first in-range sample lies below the range; otherwise above it
+        const side = firstIn < 0 ? 'outside' : points[points.length - 1].x <= c.wavelengthNm[firstIn] ? 'below' : 'above';
+        series.push({ label: `${c.label}, ${side} its valid range`, points, color: i, dashed: true });
+      });
     }
   });
 

@@ -195,7 +195,7 @@ export function checkClaim(claim: Claim): ClaimResult {
     geometryNumbers();
     add('ideal-dome', b.encapsulated ? `Ideal dome, ${faces} faces, single pass` : `Bare chip, ${faces} faces, single pass`, b.idealDome, 'fraction');
     add('recycling-limit', 'Planar-chip limit with lossless recycling (light inside any escape cone)', b.recyclingLimit, 'fraction');
-    add('best-reported', `Best reported light extraction (${BEST_REPORTED_EXTRACTION.source}, from memory)`, BEST_REPORTED_EXTRACTION.value, 'fraction');
+    add('best-reported', 'Best reported light extraction (thin-film flip-chip GaN, from memory)', BEST_REPORTED_EXTRACTION.value, 'fraction');
 
     if (claim.structure === 'planar') {
       if (v > b.recyclingLimit + SLACK) {

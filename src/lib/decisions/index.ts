@@ -28,3 +28,4 @@ export {
 } from './rank-encapsulants';
 export { extractionCurve, type ExtractionCurve } from './extraction-curve';
 export { rankingChart } from './ranking-chart';
+export { traceAgreement, type TracedCandidate, type PairAgreement } from './trace-agreement';

@@ -137,13 +137,17 @@ export function cSqrtInto(out: Float64Array, i: number, aRe: number, aIm: number
     out[i + 1] = aIm; // keeps the sign of zero
     return out;
   }
-  const t = Math.sqrt((Math.hypot(aRe, aIm) + Math.abs(aRe)) / 2);
+  const ar = Math.abs(aRe);
+  const ai = Math.abs(aIm);
+  // |a| without Math.hypot (slow in hot loops) while the squares cannot overflow or underflow
+  const mod = ar < 1e150 && ai < 1e150 && (ar > 1e-150 || ai > 1e-150) ? Math.sqrt(aRe * aRe + aIm * aIm) : Math.hypot(aRe, aIm);
+  const t = Math.sqrt((mod + ar) / 2);
   if (aRe >= 0) {
     out[i] = t;
     out[i + 1] = aIm / (2 * t);
   } else {
-    out[i] = Math.abs(aIm) / (2 * t);
-    out[i + 1] = aIm < 0 || Object.is(aIm, -0) ? -t : t;
+    out[i] = ai / (2 * t);
+    out[i + 1] = aIm < 0 || (aIm === 0 && 1 / aIm < 0) ? -t : t;
   }
   return out;
 }

@@ -46,7 +46,8 @@ export function startTrace(
   const result = new Promise<Tally>((resolve, reject) => (settle = { resolve, reject }));
 
   const stop = (error: Error | null) => {
-    for (const w of pool) w.terminate();
+    // 'cancel' first: harmless before terminate, and it stops a worker that outlives terminate()
+    pool.forEach((w, id) => (w.postMessage({ type: 'cancel', id } satisfies TraceRequest), w.terminate()));
     pool.length = 0;
     if (error) settle.reject(error);
   };

@@ -15,9 +15,9 @@ const scope = self as unknown as {
 };
 const cancelled = new Set<number>();
 const tick = new MessageChannel();
-let resume: () => void = () => {};
-tick.port1.onmessage = () => resume();
-const yieldToEvents = () => new Promise<void>((r) => ((resume = r), tick.port2.postMessage(0)));
+const waiting: (() => void)[] = [];
+tick.port1.onmessage = () => waiting.shift()?.();
+const yieldToEvents = () => new Promise<void>((r) => (waiting.push(r), tick.port2.postMessage(0)));
 
 async function run(msg: Extract<TraceRequest, { type: 'run' }>): Promise<void> {
   validateTracePackage(msg.pkg);

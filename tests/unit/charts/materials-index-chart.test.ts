@@ -93,11 +93,17 @@ describe('materialsIndexChart(curves, options)', () => {
   it('draws the valid range solid and the extrapolated part dashed, touching at the edge', () => {
     const spec = materialsIndexChart(curves, { quantity: 'n', extrapolated: true });
     const solid = spec.series.find((s) => s.label === 'N-BK7')!;
-    const dashed = spec.series.find((s) => s.label === 'N-BK7, outside its valid range')!;
+    const dashed = spec.series.find((s) => s.label === 'N-BK7, below its valid range')!;
     expect(solid.points.map((p) => p.x)).toEqual([300, 350, 400]);
     expect(dashed.dashed).toBe(true);
     expect(dashed.points.map((p) => p.x)).toEqual([250, 300]);
     expect(dashed.color).toBe(solid.color);
+  });
+
+  it('names which side of the valid range an extrapolated part lies on', () => {
+    const wide = sampleMaterial(bk7, 200, 3000, 29);
+    const labels = materialsIndexChart([wide], { quantity: 'n', extrapolated: true }).series.map((s) => s.label);
+    expect(labels).toEqual(['N-BK7', 'N-BK7, below its valid range', 'N-BK7, above its valid range']);
   });
 
   it('leaves the extrapolated parts out when asked', () => {

@@ -1,2 +1,0 @@
-import { run } from './src/cli/commands/claim';
-run(process.argv.slice(2));

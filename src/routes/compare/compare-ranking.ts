@@ -1,0 +1,48 @@
+/**
+ * The scenario turned into a ranking input: chip and outside media (library material or typed index),
+ * the current encapsulant, the emission spectrum for weighted figures, and the candidates (library plus
+ * the user's own materials). Pure apart from its $lib imports.
+ */
+import { encapsulantCandidates, rankEncapsulants, type EncapsulantRanking, type IndexSource, type RankOrder } from '$lib/decisions';
+import { findMaterial, listMaterials } from '$lib/materials';
+import type { Material } from '$lib/materials/types';
+import { gaussianSpectrum, tableSpectrum, type Spectrum } from '$lib/photometry';
+import type { ResolvedScenario } from '$lib/scenario/resolve';
+import type { EmissionSpec, MediumSpec, Scenario } from '$lib/scenario/schema';
+
+/** The emission as a sampled spectrum, or null for a single wavelength (nothing to weight). */
+export function emissionSpectrum(emission: EmissionSpec): Spectrum | null {
+  if (emission.kind === 'gaussian') return gaussianSpectrum(emission.peakNm, emission.fwhmNm);
+  if (emission.kind === 'table') return tableSpectrum(emission.rows);
+  return null;
+}
+
+function source(spec: MediumSpec, n: number): IndexSource {
+  const m = spec.kind === 'material' ? findMaterial(spec.id) : undefined;
+  return m ? { material: m } : { n };
+}
+
+/** Ranks every candidate encapsulant for the scenario's chip, dome radius and outside medium. */
+export function compareRanking(
+  scenario: Scenario,
+  resolved: ResolvedScenario,
+  userMaterials: readonly Material[],
+  order: RankOrder
+): EncapsulantRanking {
+  const spectrum = emissionSpectrum(scenario.emission);
+  const hasEncapsulant = scenario.encapsulant.shape !== 'none';
+  return rankEncapsulants({
+    chip: source(scenario.chip.medium, resolved.chip.n),
+    outside: source(scenario.outside, resolved.outside.n),
+    chipWidthMm: scenario.chip.widthMm,
+    chipLengthMm: scenario.chip.lengthMm,
+    radiusMm: scenario.encapsulant.radiusMm,
+    wavelengthNm: resolved.wavelengthNm,
+    candidates: encapsulantCandidates(listMaterials(), userMaterials),
+    current: hasEncapsulant
+      ? { label: resolved.encapsulant.label, n: resolved.encapsulant.n, materialId: resolved.encapsulant.materialId }
+      : { label: 'no encapsulant', n: resolved.outside.n, materialId: null },
+    spectrum,
+    order: spectrum ? order : 'design'
+  });
+}
