@@ -127,6 +127,21 @@ function packageFromOptions(values: ParsedValues, base?: TracePackage): TracePac
   };
 }
 
+/** Core field paths as the options that set them, so a core RangeError names what the user typed. */
+const optionOfField: [RegExp, string][] = [
+  [/\bencapsulant\.radiusMm\b/g, '--radius'], [/\bencapsulant\.heightMm\b/g, '--height'], [/\bencapsulant\.n\b/g, '--n-enc'],
+  [/\bencapsulant\.absorptionPerMm\b/g, '--enc-absorption'], [/\bchip\.emitterZMm\b/g, '--emitter-z'],
+  [/\bchip\.(widthMm|lengthMm|heightMm)\b/g, '--chip'], [/\bchip\.n\b/g, '--n-chip'], [/\bchip\.absorptionPerMm\b/g, '--chip-absorption'],
+  [/\bbase\.reflectance\b/g, '--base-reflectance'], [/\bbase\.(n|k)\b/g, '--base-material'], [/\boutsideN\b/g, '--n-out']
+];
+
+function inOptionTerms(error: unknown): unknown {
+  if (!(error instanceof RangeError)) return error;
+  let message = error.message;
+  for (const [pattern, option] of optionOfField) message = message.replace(pattern, option);
+  return new CliError(message);
+}
+
 function writeOutput(path: string, text: string, option: string): void {
   try {
     writeFileSync(path, text);
@@ -164,7 +179,12 @@ export async function run(argv: string[]): Promise<void> {
   const lumens = numberOption(values, 'lumens', 1e-6, 1e7, 100);
 
   const started = performance.now();
-  const tally = threads === 1 ? traceSync(pkg, { rays, seed, maxEvents }) : await traceParallel(pkg, { rays, seed, maxEvents }, threads);
+  let tally;
+  try {
+    tally = threads === 1 ? traceSync(pkg, { rays, seed, maxEvents }) : await traceParallel(pkg, { rays, seed, maxEvents }, threads);
+  } catch (error) {
+    throw inOptionTerms(error);
+  }
   const seconds = (performance.now() - started) / 1000;
   const s = summarize(tally);
   const farFieldSamples = { thetaDeg: s.farField.bins.map((b) => b.thetaDeg), relativeIntensity: s.farField.bins.map((b) => b.relativeIntensity) };
