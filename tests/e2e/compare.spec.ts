@@ -88,6 +88,6 @@ test('a long trace can be cancelled', async ({ page }) => {
   await page.getByRole('button', { name: 'Trace top 3' }).click();
   await expect(page.getByRole('progressbar', { name: 'Trace progress' })).toBeVisible();
   await page.getByRole('button', { name: 'Cancel' }).click();
-  await expect(page.getByRole('status')).toContainText('Cancelled');
+  await expect(page.getByRole('main').getByRole('status')).toContainText('Cancelled');
   await expect(page.getByRole('button', { name: 'Trace top 3' })).toBeEnabled();
 });

@@ -115,16 +115,16 @@ test('a bad index shows an error naming the field and range, and keeps the last 
 });
 
 test('defaults follow the scenario: GaN chip into the methyl silicone, or into air', async ({ page }) => {
-  // Demo scenario: GaN (Barker & Ilegems 1973 formula, n ≈ 2.487 at 450 nm) into methyl silicone (≈ 1.41,
-  // common practice). θc = asin(1.41/2.487) ≈ 34.5°; the library's silicone value sets the last digits, so
-  // this check only pins the range 33°–36° (from memory of the inputs, loose on purpose).
+  // Demo scenario: GaN, n(450 nm) = 2.4869 (computed from the Barker & Ilegems 1973 formula, physics notes §5),
+  // into methyl silicone, n ≈ 1.41 (common practice; the library's dispersion gives a little more at 450 nm).
+  // θc = asin(1.41/2.487) = 34.5°; 1.43 would give 35.1°. The window 33°–36° allows for that spread.
   const text = (await page.getByTestId('critical-angle').textContent()) ?? '';
   const deg = Number(text.replace('°', ''));
   expect(deg).toBeGreaterThan(33);
   expect(deg).toBeLessThan(36);
 
   await page.getByLabel('Surrounding medium (light escapes into)').selectOption('outside');
-  // Into air: θc = asin(1/2.487) ≈ 23.7° (same formula; GaN index 2.45–2.55 from sources that spread ±0.05).
+  // Into air: θc = asin(1/2.487) = 23.71°; the window 23.0°–24.2° covers GaN indices 2.45–2.55 (sources spread ±0.05).
   const air = Number(((await page.getByTestId('critical-angle').textContent()) ?? '').replace('°', ''));
   expect(air).toBeGreaterThan(23.0);
   expect(air).toBeLessThan(24.2);

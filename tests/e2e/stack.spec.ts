@@ -40,7 +40,7 @@ async function downloadText(page: Page, button: RegExp | string): Promise<{ name
 async function typedChipIntoAir(page: Page, nChip: string) {
   await page.getByLabel('Chip material').selectOption('typed');
   await page.getByLabel('Chip index n').fill(nChip);
-  await page.getByLabel(/^Outside: /).check();
+  await page.getByLabel(/Outside: /).check();
 }
 
 /** Makes layer `i` (1-based) a typed index with the given thickness. */
@@ -72,10 +72,10 @@ test('the starting stack shows R, T, A, extraction against bare, the trapped-lig
 
 test('incoherent 2.5 → 1.5 → air gives T = 90.23 % against a bare 81.63 % (physics notes §3, computed)', async ({ page }) => {
   await typedChipIntoAir(page, '2.5');
-  await page.getByLabel(/^Thick layers/).check();
+  await page.getByLabel(/Thick layers \(incoherent/).check();
   await typedLayer(page, 1, '1.5', '1000');
   await expect(page.getByLabel('Layer 1 thickness')).toHaveValue('1000');
-  await expect(page.getByText('µm').first()).toBeVisible();
+  await expect(page.getByLabel('Layer 1 thickness').locator('xpath=following-sibling::span')).toHaveText('µm');
   await expect(page.getByTestId('normal-T')).toHaveText('90.23 %');
   await expect(page.getByRole('row', { name: /Transmittance T/ })).toContainText('81.63 %');
   await expect(page.getByTestId('normal-A')).toHaveText('0 %');
@@ -179,12 +179,14 @@ test('graded sections expand into sublayers, and the 200-layer limit is stated',
 });
 
 test('switching to thin-film mode refuses a layer thicker than 100 µm, with the reason', async ({ page }) => {
-  await page.getByLabel(/^Thick layers/).check();
+  await page.getByLabel(/Thick layers \(incoherent/).check();
   await page.getByLabel('Layer 1 thickness').fill('500');
-  await page.getByLabel(/^Thin films/).check();
+  await page.getByLabel(/Thin films \(coherent/).click();
   await expect(page.getByRole('alert').filter({ hasText: 'Item 1 is 500 µm thick; thin-film mode takes layers between 0 and 100000 nm' })).toBeVisible();
-  await expect(page.getByLabel(/^Thick layers/)).toBeChecked();
+  await expect(page.getByLabel(/Thick layers \(incoherent/)).toBeChecked();
+  await expect(page.getByLabel(/Thin films \(coherent/)).not.toBeChecked();
   await expect(page.getByLabel('Layer 1 thickness')).toHaveValue('500');
+  await expect(page.getByLabel('Layer 1 thickness').locator('xpath=following-sibling::span')).toHaveText('µm');
 });
 
 test('the link reopens the same stack, and a reload keeps it', async ({ page, browser }) => {

@@ -60,6 +60,19 @@ export function regroupFarField(bins: readonly FarFieldSample[], group: number, 
   return out;
 }
 
+/**
+ * How far in θ the chart reaches (°): 90, or — with `fullSphere` — the upper edge of the last bin
+ * holding light, rounded up to 10°, at most 180.
+ */
+export function farFieldExtentDeg(input: FarFieldInput): number {
+  if (!input.fullSphere) return 90;
+  const bins = input.bins;
+  const width = bins.length > 1 ? bins[1].thetaDeg - bins[0].thetaDeg : 1;
+  let last = 0;
+  for (const b of bins) if (b.relativeIntensity > 0 && Number.isFinite(b.relativeIntensity)) last = b.thetaDeg + width / 2;
+  return Math.min(180, Math.max(90, Math.ceil(last / 10 - 1e-9) * 10));
+}
+
 /** Lambertian reference cos θ (relative to I0), sampled every `step` degrees from 0 to 90. */
 export function lambertianCurve(step = 2): ChartPoint[] {
   const pts: ChartPoint[] = [];
@@ -73,13 +86,14 @@ export function lambertianCurve(step = 2): ChartPoint[] {
  * says so; the Lambertian reference is always drawn, so the chart is never blank.
  */
 export function domeFarFieldChart(input: FarFieldInput, group = 3): ChartSpec {
-  const maxDeg = input.fullSphere ? 180 : 90;
+  const maxDeg = farFieldExtentDeg(input);
   const zones = regroupFarField(input.bins, group, maxDeg);
   const traced: ChartPoint[] = zones.map((z) => ({ x: z.thetaDeg, y: z.intensity }));
   const empty = !traced.some((p) => p.y > 0);
-  let top = 1.1;
-  for (const p of traced) if (p.y * 1.1 > top) top = p.y * 1.1;
-  top = Math.ceil(top * 10) / 10;
+  let peak = 1;
+  for (const p of traced) if (p.y > peak) peak = p.y;
+  // y axis top: 10 % above the larger of the peak and the Lambertian's 1, up to the next 0.2
+  const top = Math.round(Math.ceil((peak * 1.1) / 0.2 - 1e-9) * 2) / 10;
 
   const series: SeriesSpec[] = [
     { label: 'Monte Carlo trace', points: empty ? [] : traced, color: 0 },
@@ -107,7 +121,7 @@ export function domeFarFieldChart(input: FarFieldInput, group = 3): ChartSpec {
     title: 'Far field: intensity against polar angle',
     ariaLabel: `Line chart of relative intensity against the polar angle from the package normal, 0 to ${maxDeg} degrees, for the trace and a Lambertian emitter of the same flux; ${facts}.`,
     x: { title: 'Angle from the package normal θ (°)', min: 0, max: maxDeg },
-    y: { title: 'Intensity over the Lambertian I₀ = Φ/π', min: 0, max: top },
+    y: { title: 'Relative intensity I/I₀', min: 0, max: top },
     series,
     csv: {
       headers: ['Angle from normal θ (°)', 'Trace intensity / I0', 'Lambertian intensity / I0'],

@@ -4,7 +4,7 @@
  * shared polar chart; pure.
  */
 import { polarChart } from './polar-chart';
-import { regroupFarField, type FarFieldInput } from './dome-far-field-chart';
+import { farFieldExtentDeg, regroupFarField, type FarFieldInput } from './dome-far-field-chart';
 import type { ChartSpec } from './spec';
 
 const RAD = Math.PI / 180;
@@ -29,7 +29,7 @@ function mirrored(thetaDeg: number[], values: number[]): { thetaRad: number[]; i
  * zones of `group` bins (3° for 1° bins); the Lambertian cos θ is sampled every 3°.
  */
 export function domeFarFieldPolar(input: FarFieldInput, group = 3): ChartSpec {
-  const maxDeg = input.fullSphere ? 180 : 90;
+  const maxDeg = farFieldExtentDeg(input);
   const zones = regroupFarField(input.bins, group, maxDeg);
   const traced = mirrored(
     zones.map((z) => z.thetaDeg),

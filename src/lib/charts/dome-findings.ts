@@ -66,6 +66,13 @@ function pct(x: number): string {
   return `${(x * 100).toFixed(1)} %`;
 }
 
+/** A difference of two fractions in percentage points: 0.311 → "31.1 percentage points". */
+function points(x: number): string {
+  const v = x * 100;
+  const text = v >= 10 ? v.toFixed(1) : v >= 1 ? v.toFixed(2) : v.toPrecision(2);
+  return `${text} percentage ${text === '1.00' ? 'point' : 'points'}`;
+}
+
 function mm(x: number): string {
   return `${Number(x.toPrecision(3))} mm`;
 }
@@ -85,8 +92,8 @@ export function domeGap(pkg: TracePackage, closed: ClosedFormFacts, trace: Trace
   const headline = !Number.isFinite(delta)
     ? 'No comparison: the trace gave no number.'
     : disagree
-      ? `The trace is ${pct(Math.abs(delta))} ${sign} than the closed form — more than ${GAP_K} standard errors (${pct(GAP_K * sigma)}) and more than ${pct(GAP_MIN_ABS)}.`
-      : `The trace and the closed form agree within ${GAP_K} standard errors or ${pct(GAP_MIN_ABS)} (difference ${pct(Math.abs(delta))}).`;
+      ? `The trace is ${points(Math.abs(delta))} ${sign} than the closed form: more than ${GAP_K} standard errors (${points(GAP_K * sigma)}) and more than ${points(GAP_MIN_ABS)}.`
+      : `The trace and the closed form agree within ${GAP_K} standard errors (${points(GAP_K * sigma)}) or ${points(GAP_MIN_ABS)}: they differ by ${points(Math.abs(delta))}.`;
   if (!disagree) return { delta, sigma, disagree, headline, reasons: [] };
 
   const reasons: GapReason[] = [];
@@ -172,7 +179,7 @@ export function domeGap(pkg: TracePackage, closed: ClosedFormFacts, trace: Trace
       share: L.lost,
       reason: {
         key: 'lost',
-        text: `${pct(L.lost)} of the rays were still trapped when the trace stopped them (see "Where the light goes"); they count as not escaped.`
+        text: `${pct(L.lost)} of the rays were still trapped when the trace stopped them (see "Where the light is lost"); they count as not escaped.`
       }
     });
   }

@@ -64,10 +64,10 @@ export function domeLedgerChart(input: readonly LedgerSeriesInput[]): ChartSpec 
   const missing = bad.length > 0 ? ` Not available: ${bad.join(', ')}.` : '';
   return {
     kind: 'bar',
-    title: 'Where the light goes',
+    title: 'Fate of every launched ray',
     ariaLabel: `Bar chart of the share of launched rays in percent that escaped or were absorbed in the chip, the encapsulant or at the base, or were lost. ${text}.${missing}`,
     x: { title: 'Fate of the ray' },
-    y: { title: 'Share of launched rays (%)', min: 0, max: 100 },
+    y: { title: 'Share of rays (%)', min: 0, max: 100 },
     categories: LEDGER_CATEGORIES.map((c) => c.label),
     series
   };

@@ -70,6 +70,8 @@ export function domeSweepChart(plan: SweepPlan, results: readonly SweepPointResu
   const xMin = Math.min(...xs, ...plan.closedFormLine.map((p) => p.x));
   const xMax = Math.max(...xs, ...plan.closedFormLine.map((p) => p.x));
   const range = Number.isFinite(xMin) && Number.isFinite(xMax) ? `${xMin} to ${xMax}` : 'no values';
+  // 3 % of the range on each side, so the end points and their error bars are not cut in half
+  const pad = Number.isFinite(xMax - xMin) && xMax > xMin ? 0.03 * (xMax - xMin) : 0.5;
   let traceText: string;
   if (traced.length === 0) {
     traceText = 'the trace has not been run yet';
@@ -91,7 +93,7 @@ export function domeSweepChart(plan: SweepPlan, results: readonly SweepPointResu
     kind: 'line',
     title: plan.title,
     ariaLabel: `Chart of extraction in percent against ${plan.xTitle.toLowerCase()}, ${range}: the closed form as a line and the Monte Carlo trace as points with error bars; ${traceText}.`,
-    x: { title: plan.xTitle, min: Number.isFinite(xMin) ? xMin : undefined, max: Number.isFinite(xMax) ? xMax : undefined },
+    x: { title: plan.xTitle, min: Number.isFinite(xMin) ? xMin - pad : undefined, max: Number.isFinite(xMax) ? xMax + pad : undefined },
     y: { title: AXIS_Y, min: 0, max: top },
     series,
     csv: {

@@ -181,7 +181,7 @@ export function checkClaim(claim: Claim): ClaimResult {
   const geometryNumbers = () => {
     add('critical-angle', `Critical angle, chip → ${b.encapsulated ? 'encapsulant' : 'outside'}`, (b.criticalAngleRad * 180) / Math.PI, 'degrees');
     add('escape-cone-face', `Escape cone, one face, Fresnel-weighted (chip → ${b.encapsulated ? 'encapsulant' : 'outside'})`, b.exitFace.fresnel, 'fraction');
-    add('escape-cone-bare-face', 'Escape cone, one face, bare chip → outside', b.bareFace.fresnel, 'fraction');
+    if (b.encapsulated) add('escape-cone-bare-face', 'Escape cone, one face, bare chip → outside', b.bareFace.fresnel, 'fraction');
     add('bare-cuboid', `Bare chip, ${faces} face${faces === 1 ? '' : 's'}, single pass`, b.bareCuboid, 'fraction');
   };
 

@@ -19,7 +19,8 @@ function fmt(x: number, digits: number): string {
 export function rankingChart(ranking: EncapsulantRanking, points = 61): ChartSpec {
   const curve = extractionCurve(Math.max(ranking.nChip, 1.0001), ranking.nOut, points);
   const line = curve.n.map((n, i) => ({ x: n, y: curve.etaDome[i] * 100 }));
-  const top = Math.max(...line.map((p) => p.y), ...ranking.rows.map((r) => r.etaDome * 100)) * 1.08;
+  // y range up to the next multiple of 5 % above the highest point
+  const top = Math.ceil((Math.max(...line.map((p) => p.y), ...ranking.rows.map((r) => r.etaDome * 100)) * 1.02) / 5) * 5;
   const series: SeriesSpec[] = [{ label: 'Closed form η_dome(n), one face', points: line, color: 0 }];
   ranking.rows.forEach((r, i) => {
     series.push({

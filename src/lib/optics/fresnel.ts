@@ -257,7 +257,12 @@ export function reflectanceComplex(
   const dP = (pRe + eRe) * (pRe + eRe) + (pIm + eIm) * (pIm + eIm);
   const nP = (pRe - eRe) * (pRe - eRe) + (pIm - eIm) * (pIm - eIm);
 
-  // Index matched at grazing incidence gives 0/0; the limit is no reflection.
+  // Index matched: no interface at any angle (near grazing the sums below underflow to 0/0 or ε/ε).
+  if (etaI === nT && kT === 0) {
+    out[0] = 0;
+    out[1] = 0;
+    return out;
+  }
   out[0] = dS > 0 ? nS / dS : 0;
   out[1] = dP > 0 ? nP / dP : 0;
   return out;

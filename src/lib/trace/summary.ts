@@ -11,7 +11,8 @@
  * - beamAngleDeg: full angle at half maximum. Each bin's intensity is smoothed over ±2 bins (counts
  *   over solid angle of the 5° window, clipped at 0° and 180°); from the peak outward the first
  *   crossing below half the peak is interpolated linearly between bin centres; the full angle is
- *   twice that polar angle. null when nothing escaped or the intensity never falls to half.
+ *   twice that polar angle (so it exceeds 180° when the half-maximum lies below the horizon). null
+ *   when nothing escaped or the intensity never falls to half.
  * Sources: Lambertian I(θ) = I0 cos θ with Φ = π I0 and FWHM 120° (common practice); solid angle of a
  * polar zone 2π (cos θ1 − cos θ2) (common practice).
  */

@@ -102,6 +102,7 @@ let nOut = 1;
 let nAroundChip = 1;
 let emitterZ = 0;
 let volumeEmission = false;
+let absorbing = false;
 let track = false;
 let metalBase = false;
 let baseReflectance = 0;
@@ -136,6 +137,7 @@ function configure(pkg: TracePackage): void {
   nAroundChip = shape === SHAPE_NONE ? nOut : nEnc;
   emitterZ = emitterHeightMm(chip);
   volumeEmission = chip.emission === 'volume';
+  absorbing = alphaChip > 0 || (shape !== SHAPE_NONE && alphaEnc > 0);
   track = pkg.polarization === 'track';
   metalBase = pkg.base.kind === 'metal';
   if (pkg.base.kind === 'metal') {
@@ -168,8 +170,8 @@ function launch(): void {
   ray[4] = k * v;
   ray[5] = 1 - 2 * s;
   if (track) launchPolarization(direction, nextFloat());
-  // Optical depth to absorption, τ ~ Exp(1) by inverse transform (1 − u ∈ (0, 1])
-  ray[6] = -Math.log(1 - nextFloat());
+  // Optical depth to absorption, τ ~ Exp(1) by inverse transform (1 − u ∈ (0, 1]); none if nothing absorbs
+  ray[6] = absorbing ? -Math.log(1 - nextFloat()) : Infinity;
 }
 
 /**

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import {
   domeFarFieldChart,
+  farFieldExtentDeg,
   lambertianCurve,
   regroupFarField,
   type FarFieldSample
@@ -70,9 +71,19 @@ describe('domeFarFieldChart(input)', () => {
     expect(spec.ariaLabel).toMatch(/no light escaped/);
   });
 
-  it('widens the axis to 180° when light leaves below the horizon', () => {
-    const spec = domeFarFieldChart({ bins: lambertBins(), beamAngleDeg: 120, onAxisVsLambertian: 1, fullSphere: true });
+  it('widens the axis past 90° to the last bin holding light (rounded up to 10°) when light leaves below the horizon', () => {
+    const bins = lambertBins().map((b) => (b.thetaDeg > 90 && b.thetaDeg < 97 ? { ...b, relativeIntensity: 0.1 } : b));
+    expect(farFieldExtentDeg({ bins, beamAngleDeg: 120, onAxisVsLambertian: 1, fullSphere: true })).toBe(100);
+    expect(farFieldExtentDeg({ bins, beamAngleDeg: 120, onAxisVsLambertian: 1 })).toBe(90);
+    const everywhere = bins.map((b) => ({ ...b, relativeIntensity: 1 }));
+    const spec = domeFarFieldChart({ bins: everywhere, beamAngleDeg: 120, onAxisVsLambertian: 1, fullSphere: true });
     expect(spec.x.max).toBe(180);
     expect(spec.csv!.rows).toHaveLength(60);
+  });
+
+  it('tops the y axis at the next 0.2 above 1.1 × the peak (1.2 for a Lambertian)', () => {
+    expect(domeFarFieldChart({ bins: lambertBins(), beamAngleDeg: 120, onAxisVsLambertian: 1 }).y.max).toBe(1.2);
+    const tall = lambertBins().map((b) => ({ ...b, relativeIntensity: b.thetaDeg < 10 ? 3 : 0 }));
+    expect(domeFarFieldChart({ bins: tall, beamAngleDeg: 20, onAxisVsLambertian: 3 }).y.max).toBe(3.4);
   });
 });

@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { boxExit } from '../../../src/lib/trace/box-exit';
 import * as S from '../../../src/lib/trace/surfaces';
@@ -38,5 +39,26 @@ describe('boxExit(ray, box, hit)', () => {
     expect(boxExit(Float64Array.of(0.5 + 1e-16, 0, 0.05, 1, 0, 0), box, hit)).toBe(S.CHIP_X_POS);
     expect(hit[0]).toBe(0);
     expect(boxExit(Float64Array.of(0, 0, 0.05, 0, 0, 0), box, hit)).toBe(S.SURFACE_NONE);
+  });
+
+  it('agrees with t = min over axes of (wall − p)/d for random inside points and directions (1e-12 relative)', () => {
+    const coord = (h: number) => fc.double({ min: -h, max: h, noNaN: true });
+    const comp = fc.double({ min: -1, max: 1, noNaN: true });
+    fc.assert(
+      fc.property(coord(0.5), coord(0.25), fc.double({ min: 0, max: 0.1, noNaN: true }), comp, comp, comp, (x, y, z, a, b, c) => {
+        const n = Math.hypot(a, b, c);
+        fc.pre(n > 1e-3);
+        const r = Float64Array.of(x, y, z, a / n, b / n, c / n);
+        const walls = [
+          r[3] > 0 ? (0.5 - x) / r[3] : r[3] < 0 ? (-0.5 - x) / r[3] : Infinity,
+          r[4] > 0 ? (0.25 - y) / r[4] : r[4] < 0 ? (-0.25 - y) / r[4] : Infinity,
+          r[5] > 0 ? (0.1 - z) / r[5] : r[5] < 0 ? -z / r[5] : Infinity
+        ];
+        const tMin = Math.min(...walls);
+        boxExit(r, box, hit);
+        expect(Math.abs(hit[0] - tMin)).toBeLessThanOrEqual(1e-12 * Math.max(1, tMin));
+      }),
+      { seed: 7, numRuns: 2000 }
+    );
   });
 });

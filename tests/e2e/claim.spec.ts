@@ -1,0 +1,75 @@
+/**
+ * /claim: plain fields for a claim, a clearly labelled verdict with its reason and numbers. Verdicts
+ * checked are the physics of the decisions core: 85 % extraction for a planar GaN chip in silicone is
+ * beyond what light outside the escape cones allows (impossible); a 2.5× gain for planar GaN under
+ * n ≈ 1.5 is within the closed-form dome gain (≈ 2.6, computed) — consistent; a flat coating cannot widen
+ * the escape cone (n·sin θ conserved), so +40 % on bare GaN is impossible (limit +27.8 %, computed).
+ */
+import { expect, test } from '@playwright/test';
+
+test.beforeEach(async ({ page }) => {
+  await page.goto('/claim');
+  await expect(page.getByRole('heading', { level: 1, name: 'Claim check' })).toBeVisible();
+  await expect(page).toHaveURL(/[?&]s=1\./);
+});
+
+test('the default claim, 85 % extraction for the demo planar GaN chip in methyl silicone, is impossible', async ({ page }) => {
+  await expect(page.getByLabel('Claimed extraction')).toHaveValue('85');
+  await expect(page.getByTestId('verdict')).toHaveText(/Impossible/);
+  await expect(page.getByTestId('verdict-reason')).toContainText('85 %');
+  await expect(page.getByTestId('verdict-reason')).toContainText('trapped');
+  await expect(page.getByTestId('verdict-numbers')).toContainText('Ideal dome');
+  await expect(page.getByTestId('verdict-requires')).toBeVisible();
+  await expect(page.locator('main')).not.toContainText('NaN');
+});
+
+test('a 2.5× gain for planar GaN under a typed n = 1.5 encapsulant is consistent', async ({ page }) => {
+  await page.getByRole('radio', { name: /Gain from an encapsulant/ }).check();
+  await page.getByLabel('Claimed gain').fill('2.5');
+  await page.getByLabel('Encapsulant', { exact: true }).selectOption('typed');
+  await page.getByLabel('Encapsulant index n').fill('1.5');
+  await expect(page.getByTestId('verdict')).toHaveText(/Consistent/);
+  await expect(page.getByTestId('verdict-reason')).toContainText('2.5×');
+  await expect(page).toHaveURL(/[?&]kind=gain/);
+  await expect(page).toHaveURL(/[?&]enc=1\.5/);
+});
+
+test('a flat coating said to add 40 % on the bare chip is impossible: it cannot widen the escape cone', async ({ page }) => {
+  await page.getByRole('radio', { name: /flat coating/ }).check();
+  await page.getByLabel('Claimed increase').fill('40');
+  await page.getByLabel('Encapsulant', { exact: true }).selectOption('none');
+  await expect(page.getByTestId('verdict')).toHaveText(/Impossible/);
+  await expect(page.getByTestId('verdict-reason')).toContainText('cannot widen the escape cone');
+  await page.screenshot({ path: '/tmp/h8-claim.png', fullPage: true });
+});
+
+test('a thin-film chip above the best reported extraction is optimistic and cites its source', async ({ page }) => {
+  await page.getByLabel('Chip structure').selectOption('thin-film');
+  await page.getByLabel('Claimed extraction').fill('90');
+  await expect(page.getByTestId('verdict')).toHaveText(/Optimistic/);
+  await expect(page.getByRole('heading', { name: /Best reported figures/ })).toBeVisible();
+  await expect(page.locator('main')).toContainText('Appl. Phys. Lett. 89, 071109 (2006)');
+  await expect(page.locator('main')).toContainText('from memory');
+});
+
+test('bad input names the field and its range, and the last verdict stays', async ({ page }) => {
+  const field = page.getByLabel('Claimed extraction');
+  await field.fill('120');
+  await expect(page.getByRole('alert')).toContainText('Claimed extraction');
+  await expect(page.getByRole('alert')).toContainText('100');
+  await expect(page.getByTestId('verdict')).toHaveText(/Impossible/);
+  await field.fill('0');
+  await expect(page.getByRole('alert')).toContainText('(0, 1]');
+});
+
+test('the link reopens the same claim', async ({ page }) => {
+  await page.getByLabel('Chip structure').selectOption('unknown');
+  // 30 % is within the ideal single-pass dome bound for five faces (≈ 38 %, computed)
+  await page.getByLabel('Claimed extraction').fill('30');
+  await expect(page).toHaveURL(/[?&]value=30(&|$)/);
+  const url = page.url();
+  await page.goto(url);
+  await expect(page.getByLabel('Claimed extraction')).toHaveValue('30');
+  await expect(page.getByLabel('Chip structure')).toHaveValue('unknown');
+  await expect(page.getByTestId('verdict')).toHaveText(/Consistent/);
+});

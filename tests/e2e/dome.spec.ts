@@ -1,0 +1,167 @@
+/**
+ * The dome page in a real browser: closed form, the worker trace with progress and cancel, the charts,
+ * the sweeps and the export. Drives the page by role and label.
+ */
+import { expect, test, type Locator, type Page } from '@playwright/test';
+
+/** Opens /dome on the demo scenario and waits until the app has started (it writes the scenario into the link). */
+async function openDome(page: Page): Promise<void> {
+  await page.goto('/dome');
+  await expect(page).toHaveURL(/[?&]s=/);
+}
+
+/** The first number in an element's text ("7.525 %" → 7.525). */
+async function numberIn(locator: Locator): Promise<number> {
+  const text = (await locator.textContent()) ?? '';
+  const m = text.replace(/,/g, '').match(/-?\d+(\.\d+)?/);
+  return m ? Number(m[0]) : Number.NaN;
+}
+
+/** How many pixels of a canvas differ from its corner pixel (the chart's background). */
+async function drawnPixels(canvas: Locator): Promise<number> {
+  return canvas.evaluate((el) => {
+    const c = el as HTMLCanvasElement;
+    const data = c.getContext('2d')!.getImageData(0, 0, c.width, c.height).data;
+    let n = 0;
+    for (let i = 0; i < data.length; i += 4) {
+      if (data[i] !== data[0] || data[i + 1] !== data[1] || data[i + 2] !== data[2]) n++;
+    }
+    return n;
+  });
+}
+
+async function setRays(page: Page, rays: number): Promise<void> {
+  await page.getByLabel('Rays', { exact: true }).fill(String(rays));
+}
+
+test.describe('dome page', () => {
+  test('shows the closed form for the demo scenario', async ({ page }) => {
+    await openDome(page);
+    await expect(page.getByRole('heading', { name: 'Dome encapsulant', level: 1 })).toBeVisible();
+    await expect(page.getByTestId('closed-eta-dome')).toHaveText(/^\d+\.\d+ %$/);
+    // physics.md §4 (computed): GaN n 2.5 under a 1.41 / 1.50 dome gains 2.26 / 2.60; the demo's methyl
+    // silicone (n 1.419 at 450 nm) must lie between them.
+    const gain = await numberIn(page.getByTestId('closed-gain'));
+    expect(gain).toBeGreaterThan(2.26);
+    expect(gain).toBeLessThan(2.6);
+    // physics.md §4: a 1 × 1 mm chip under n 1.41 needs R ≥ 0.997 mm; n 1.419 needs a hair more (≤ 1.01 mm).
+    const minRadius = await numberIn(page.getByTestId('closed-min-radius'));
+    expect(minRadius).toBeGreaterThanOrEqual(0.997);
+    expect(minRadius).toBeLessThan(1.01);
+    await expect(page.getByTestId('closed-tir-mark')).toHaveText(/large enough/);
+  });
+
+  test('runs a trace in the workers with progress, then shows extraction ± error, findings and charts', async ({ page }) => {
+    await openDome(page);
+    await setRays(page, 2_000_000);
+    await page.getByRole('button', { name: 'Run trace' }).click();
+    const bar = page.getByRole('progressbar', { name: 'Trace progress' });
+    await expect(bar).toBeVisible();
+    await expect.poll(async () => Number(await bar.getAttribute('aria-valuenow')), { timeout: 30_000 }).toBeGreaterThan(0);
+    await expect(page.getByTestId('trace-extraction')).toHaveText(/^\d+\.\d+ % ± \d+(\.\d+)? %$/, { timeout: 90_000 });
+    await expect(bar).toBeHidden();
+    await expect(page.getByTestId('trace-rays')).toContainText('2,000,000');
+    await expect(page.getByTestId('trace-gain')).toHaveText(/\d ± \d/);
+    await expect(page.getByTestId('trace-speed')).toContainText('rays/s');
+
+    // A finite chip whose sides emit beats the one-face point-source closed form by far: the page says why.
+    await expect(page.getByTestId('gap-headline')).toContainText('higher than the closed form');
+    await expect(page.locator('[data-reason="finite-chip"]')).toBeVisible();
+
+    for (const name of ['Fate of every launched ray', 'Far field: intensity against polar angle', 'Far field: polar plot']) {
+      const canvas = page.locator('figure', { hasText: name }).locator('canvas');
+      await expect(canvas).toBeVisible();
+      expect(await drawnPixels(canvas), `${name} has something drawn`).toBeGreaterThan(1000);
+    }
+    await expect(page.getByTestId('beam-angle')).toHaveText(/^\d+(\.\d+)?°$/);
+    await expect(page.locator('main')).not.toContainText('NaN');
+  });
+
+  test('cancels a run, keeps the page usable, and the next run completes', async ({ page }) => {
+    await openDome(page);
+    await setRays(page, 5_000_000);
+    await page.getByRole('button', { name: 'Run trace' }).click();
+    const bar = page.getByRole('progressbar', { name: 'Trace progress' });
+    await expect(bar).toBeVisible();
+    await page.getByRole('button', { name: 'Cancel', exact: true }).click();
+    await expect(page.getByRole('status').filter({ hasText: 'Trace cancelled' })).toBeVisible();
+    await expect(bar).toBeHidden();
+    await expect(page.getByTestId('trace-extraction')).toHaveText('—');
+
+    await page.getByLabel('Re-run when the scenario changes').uncheck();
+    await setRays(page, 100_000);
+    await page.getByRole('button', { name: 'Run trace' }).click();
+    await expect(page.getByTestId('trace-extraction')).toContainText('±', { timeout: 60_000 });
+    await expect(page.getByTestId('trace-rays')).toContainText('100,000');
+  });
+
+  test('changing the encapsulant index updates the closed form at once', async ({ page }) => {
+    await openDome(page);
+    const eta = page.getByTestId('closed-eta-dome');
+    const before = await numberIn(eta);
+    await page.getByLabel('Encapsulant material').selectOption({ label: 'Typed index n + ik…' });
+    await page.getByLabel('Encapsulant index n').fill('1.53');
+    await expect(eta).not.toHaveText(`${before} %`);
+    expect(await numberIn(eta)).toBeGreaterThan(before);
+    // physics.md §4 (computed): GaN 2.5 under 1.50 gains 2.60 and under 1.53 gains 2.73 (±0.02 for n_chip 2.487).
+    const gain = await numberIn(page.getByTestId('closed-gain'));
+    expect(gain).toBeGreaterThan(2.6);
+    expect(gain).toBeLessThan(2.75);
+  });
+
+  test('bad input shows the panel error and keeps the last good numbers, never NaN', async ({ page }) => {
+    await openDome(page);
+    const eta = page.getByTestId('closed-eta-dome');
+    const before = await eta.textContent();
+    const radius = page.getByLabel('Encapsulant radius');
+    await radius.fill('abc');
+    await expect(page.getByRole('alert').filter({ hasText: 'Encapsulant radius must be' })).toBeVisible();
+    await radius.fill('0.5');
+    await expect(page.getByRole('alert').filter({ hasText: "chip's corners" })).toBeVisible();
+    await expect(eta).toHaveText(before!);
+    await expect(page.locator('main')).not.toContainText('NaN');
+  });
+
+  test('asks before a very large run, with an estimated time', async ({ page }) => {
+    await openDome(page);
+    await setRays(page, 10_000_000);
+    await page.getByRole('button', { name: 'Run trace' }).click();
+    const ask = page.getByRole('alertdialog');
+    await expect(ask).toContainText('10,000,000 rays is a large run');
+    await expect(ask).toContainText(/about \d/);
+    await ask.getByRole('button', { name: 'Not now' }).click();
+    await expect(ask).toBeHidden();
+    await expect(page.getByRole('progressbar', { name: 'Trace progress' })).toBeHidden();
+  });
+
+  test('runs a sweep in the background with progress, draws it, and cancels another', async ({ page }) => {
+    await openDome(page);
+    const sweep = page.getByTestId('sweep-index');
+    await page.getByLabel('Rays per point').fill('20000');
+    await sweep.getByRole('button', { name: /^Run sweep/ }).click();
+    await expect(sweep.getByRole('status')).toHaveText('11 points, 20,000 rays each.', { timeout: 60_000 });
+    expect(await drawnPixels(sweep.locator('canvas'))).toBeGreaterThan(1000);
+
+    const shape = page.getByTestId('sweep-shape');
+    await page.getByLabel('Rays per point').fill('400000');
+    await shape.getByRole('button', { name: /^Run sweep/ }).click();
+    await expect(shape.getByRole('progressbar')).toBeVisible();
+    await shape.getByRole('button', { name: /^Cancel sweep/ }).click();
+    await expect(shape.getByRole('status')).toContainText('Cancelled after');
+  });
+
+  test('exports the results with the scenario as JSON', async ({ page }) => {
+    await openDome(page);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Export results (JSON)' }).click()
+    ]);
+    const path = await download.path();
+    const { readFile } = await import('node:fs/promises');
+    const doc = JSON.parse(await readFile(path, 'utf8'));
+    expect(doc.view).toBe('dome');
+    expect(doc.scenario.encapsulant.shape).toBe('dome');
+    expect(doc.closedForm.etaDome).toBeGreaterThan(0);
+    expect(doc.trace).toBeNull();
+  });
+});
