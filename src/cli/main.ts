@@ -23,7 +23,8 @@ export async function main(argv: string[]): Promise<number> {
     process.stdout.write(usage() + '\n');
     return name ? 0 : 2;
   }
-  const command = commands[name];
+  // own keys only: '__proto__', 'constructor' and 'toString' are not commands
+  const command = Object.hasOwn(commands, name) ? commands[name] : undefined;
   if (!command) {
     process.stderr.write(`outcouple: unknown command '${name.slice(0, 40)}' (one of ${Object.keys(commands).join(', ')})\n`);
     return 2;

@@ -40,7 +40,7 @@ test('a flat coating said to add 40 % on the bare chip is impossible: it cannot 
   await page.getByLabel('Encapsulant', { exact: true }).selectOption('none');
   await expect(page.getByTestId('verdict')).toHaveText(/Impossible/);
   await expect(page.getByTestId('verdict-reason')).toContainText('cannot widen the escape cone');
-  await page.screenshot({ path: '/tmp/h8-claim.png', fullPage: true });
+  await page.screenshot({ path: test.info().outputPath('claim.png'), fullPage: true });
 });
 
 test('a thin-film chip above the best reported extraction is optimistic and cites its source', async ({ page }) => {

@@ -80,7 +80,7 @@ test('traces the top three, shows extraction ± standard error, and downloads an
   const [csv] = await Promise.all([page.waitForEvent('download'), first.getByRole('button', { name: /Download far-field CSV/ }).click()]);
   const csvText = await readFile((await csv.path())!, 'utf8');
   expect(csvText.split('\r\n')[0]).toBe('theta (deg),relative intensity,intensity (cd)');
-  await page.screenshot({ path: '/tmp/h8-compare.png', fullPage: true });
+  await page.screenshot({ path: test.info().outputPath('compare.png'), fullPage: true });
 });
 
 test('a long trace can be cancelled', async ({ page }) => {

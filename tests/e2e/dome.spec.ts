@@ -31,7 +31,7 @@ async function drawnPixels(canvas: Locator): Promise<number> {
 }
 
 async function setRays(page: Page, rays: number): Promise<void> {
-  await page.getByLabel('Rays', { exact: true }).fill(String(rays));
+  await page.getByRole('textbox', { name: 'Rays', exact: true }).fill(String(rays));
 }
 
 test.describe('dome page', () => {
@@ -95,12 +95,26 @@ test.describe('dome page', () => {
     await expect(page.getByTestId('trace-rays')).toContainText('100,000');
   });
 
+  test('after a first run, a changed scenario re-runs the trace by itself (modest ray count)', async ({ page }) => {
+    await openDome(page);
+    await setRays(page, 100_000);
+    await page.getByRole('button', { name: 'Run trace' }).click();
+    const extraction = page.getByTestId('trace-extraction');
+    await expect(extraction).toContainText('±', { timeout: 60_000 });
+    const first = await extraction.textContent();
+    // The alternative silicone of the demo: a higher index, so a different (higher) extraction.
+    await page.getByLabel('Encapsulant material').selectOption({ label: 'Phenyl silicone (n ≈ 1.53)' });
+    await expect(extraction).not.toHaveText(first!, { timeout: 60_000 });
+    await expect(extraction).toContainText('±');
+    await expect(page.getByText('The scenario has changed since this trace')).toBeHidden();
+  });
+
   test('changing the encapsulant index updates the closed form at once', async ({ page }) => {
     await openDome(page);
     const eta = page.getByTestId('closed-eta-dome');
     const before = await numberIn(eta);
     await page.getByLabel('Encapsulant material').selectOption({ label: 'Typed index n + ik…' });
-    await page.getByLabel('Encapsulant index n').fill('1.53');
+    await page.getByRole('textbox', { name: 'Encapsulant index n' }).fill('1.53');
     await expect(eta).not.toHaveText(`${before} %`);
     expect(await numberIn(eta)).toBeGreaterThan(before);
     // physics.md §4 (computed): GaN 2.5 under 1.50 gains 2.60 and under 1.53 gains 2.73 (±0.02 for n_chip 2.487).
@@ -113,7 +127,7 @@ test.describe('dome page', () => {
     await openDome(page);
     const eta = page.getByTestId('closed-eta-dome');
     const before = await eta.textContent();
-    const radius = page.getByLabel('Encapsulant radius');
+    const radius = page.getByRole('textbox', { name: 'Encapsulant radius' });
     await radius.fill('abc');
     await expect(page.getByRole('alert').filter({ hasText: 'Encapsulant radius must be' })).toBeVisible();
     await radius.fill('0.5');
@@ -137,13 +151,13 @@ test.describe('dome page', () => {
   test('runs a sweep in the background with progress, draws it, and cancels another', async ({ page }) => {
     await openDome(page);
     const sweep = page.getByTestId('sweep-index');
-    await page.getByLabel('Rays per point').fill('20000');
+    await page.getByRole('textbox', { name: 'Rays per point' }).fill('20000');
     await sweep.getByRole('button', { name: /^Run sweep/ }).click();
     await expect(sweep.getByRole('status')).toHaveText('11 points, 20,000 rays each.', { timeout: 60_000 });
     expect(await drawnPixels(sweep.locator('canvas'))).toBeGreaterThan(1000);
 
     const shape = page.getByTestId('sweep-shape');
-    await page.getByLabel('Rays per point').fill('400000');
+    await page.getByRole('textbox', { name: 'Rays per point' }).fill('400000');
     await shape.getByRole('button', { name: /^Run sweep/ }).click();
     await expect(shape.getByRole('progressbar')).toBeVisible();
     await shape.getByRole('button', { name: /^Cancel sweep/ }).click();

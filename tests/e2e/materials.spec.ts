@@ -6,6 +6,8 @@
  */
 import { expect, test, type Page } from '@playwright/test';
 import { readFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 
 /** Counts pixels that differ from the top-left pixel (the chart's opaque background). */
 async function inkedPixels(page: Page, index: number): Promise<number> {
@@ -223,7 +225,7 @@ test('without storage the page says it cannot save and keeps working', async ({ 
   await context.close();
 });
 
-test('screenshots at 1280×800 and 800×1000', async ({ page }) => {
+test('screenshots at 1280×800 and 800×1000 (saved to the temp folder), no sideways overflow', async ({ page }) => {
   for (const size of [
     { width: 1280, height: 800 },
     { width: 800, height: 1000 }
@@ -233,9 +235,9 @@ test('screenshots at 1280×800 and 800×1000', async ({ page }) => {
     await expect.poll(() => inkedPixels(page, 0)).toBeGreaterThan(2000);
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
     expect(overflow).toBeLessThanOrEqual(0);
-    await page.screenshot({ path: `/tmp/h6-materials-${size.width}x${size.height}.png`, fullPage: true });
+    await page.screenshot({ path: join(tmpdir(), `h6-materials-${size.width}x${size.height}.png`), fullPage: true });
   }
   await page.getByRole('button', { name: 'Add material' }).click();
   await page.getByRole('heading', { name: 'Add your own material' }).scrollIntoViewIfNeeded();
-  await page.screenshot({ path: '/tmp/h6-materials-800-errors.png' });
+  await page.screenshot({ path: join(tmpdir(), 'h6-materials-800-errors.png') });
 });

@@ -7,6 +7,8 @@
  */
 import { expect, test, type Page } from '@playwright/test';
 import { readFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 
 /** Counts pixels that differ from the top-left pixel (the chart's opaque background). */
 async function inkedPixels(page: Page, index: number): Promise<number> {
@@ -257,7 +259,7 @@ test('results export as JSON with the scenario; charts save PNG and CSV', async 
   expect(bytes.subarray(1, 4).toString('ascii')).toBe('PNG');
 });
 
-test('screenshots at 1280×800 and 800×1000', async ({ page }) => {
+test('screenshots at 1280×800 and 800×1000 (saved to the temp folder), no sideways overflow', async ({ page }) => {
   for (const size of [
     { width: 1280, height: 800 },
     { width: 800, height: 1000 }
@@ -267,8 +269,8 @@ test('screenshots at 1280×800 and 800×1000', async ({ page }) => {
     await expect.poll(() => inkedPixels(page, 0)).toBeGreaterThan(2000);
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
     expect(overflow).toBeLessThanOrEqual(0);
-    await page.screenshot({ path: `/tmp/h6-stack-${size.width}x${size.height}.png`, fullPage: true });
+    await page.screenshot({ path: join(tmpdir(), `h6-stack-${size.width}x${size.height}.png`), fullPage: true });
   }
   await page.getByLabel('Layer 1 thickness').fill('x');
-  await page.screenshot({ path: '/tmp/h6-stack-800-error.png' });
+  await page.screenshot({ path: join(tmpdir(), 'h6-stack-800-error.png') });
 });

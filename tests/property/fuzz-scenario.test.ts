@@ -18,7 +18,7 @@ import { check, deeplyNested, hostileValue, prototypePolluted, real, RUNS } from
 
 /** Words a scenario message uses to name its field (the schema's own field labels). */
 const FIELD_WORDS =
-  /scenario|version|name|emission|wavelength|spectrum|peak|width|chip|emitter|absorption|base|metal|reflectance|encapsulant|radius|height|length|outside|index|extinction|rays|seed|polari[sz]ation|material|medium|shape/i;
+  /scenario|version|name|emission|wavelength|spectrum|peak|width|chip|emitter|absorption|base|metal|reflectance|encapsulant|radius|height|length|outside|index|extinction|rays|seed|trace|polari[sz]ation|material|medium|shape/i;
 
 function expectNamesAField(message: unknown): void {
   expect(typeof message, 'message is text').toBe('string');
@@ -114,7 +114,11 @@ const validScenario: fc.Arbitrary<Scenario> = fc
       trace: { rays: g.rays, seed: g.seed, polarization: g.polarization }
     };
   })
-  .filter((s) => s.encapsulant.radiusMm <= LIMITS.sizeMm.max && s.encapsulant.heightMm <= LIMITS.sizeMm.max);
+  .filter((s) => {
+    const { radiusMm, heightMm } = s.encapsulant;
+    const { min, max } = LIMITS.sizeMm;
+    return radiusMm >= min && radiusMm <= max && heightMm >= min && heightMm <= max;
+  });
 
 describe('valid scenarios', () => {
   it(`parse, and round-trip exactly through JSON and through the link (${RUNS.fuzz} cases)`, () => {
@@ -212,12 +216,27 @@ describe('hostile scenario objects', () => {
           Object.defineProperty(at, key, { value: value === undefined ? null : value, enumerable: true, writable: true, configurable: true });
           const r = readScenario(JSON.parse(JSON.stringify(raw)));
           expect(r.ok, `extra key ${JSON.stringify(key)} at ${path.join('.') || 'top'} was accepted`).toBe(false);
-          if (!r.ok) expect(r.message.length).toBeGreaterThan(0);
+          if (!r.ok) expectNamesAField(r.message);
           expect(prototypePolluted()).toBe(false);
         }
       ),
       RUNS.fuzz
     );
+  });
+
+  it('regression: a part that is not an object, or has an unknown field, is named in the message', () => {
+    // found by the damaged-field property: zod's defaults said "Invalid input: expected object, received
+    // number" and "Unrecognized key: "extra"" without naming the part
+    const notObject = readScenario({ ...demoScenario(), chip: -1 });
+    expect(notObject.ok || notObject.message).toBe('Chip must be an object with named fields.');
+    const trace = readScenario({ ...demoScenario(), trace: null });
+    expect(trace.ok || trace.message).toBe('Trace settings must be an object with named fields.');
+    const s = demoScenario();
+    (s.chip.medium as Record<string, unknown>).extra = 1;
+    const extra = readScenario(s);
+    expect(extra.ok || extra.message).toBe('Chip medium has unknown field "extra".');
+    const many = readScenario({ ...demoScenario(), a: 1, b: 2, c: 3, d: 4 });
+    expect(many.ok || many.message).toBe('Scenario has unknown fields "a", "b", "c" and 1 more.');
   });
 
   it('survives a multi-megabyte name, deep nesting and a __proto__ payload', () => {

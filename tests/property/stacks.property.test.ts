@@ -140,3 +140,36 @@ describe.each(['coherent', 'incoherent'] as const)('%s stacks', (model) => {
     );
   });
 });
+
+/** Log-uniform in [min, max]. */
+const logUniform = (min: number, max: number) => real(Math.log10(min), Math.log10(max)).map((x) => 10 ** x);
+
+describe('stacks at the edges of what validation accepts', () => {
+  const wideLayer = fc.record({
+    n: logUniform(1e-6, 1e6),
+    k: fc.oneof(fc.constant(0), logUniform(1e-12, 1e6)),
+    thicknessNm: fc.oneof(fc.constant(0), logUniform(1e-9, 1e12))
+  });
+  it.each(['coherent', 'incoherent'] as const)(`%s: finite R, T, A in [0, 1] for indices 1e-6…1e6, thicknesses up to 1 km, any wavelength (${RUNS.many} cases)`, (model) => {
+    check(
+      `${model} wide range`,
+      fc.property(logUniform(1e-6, 1e6), fc.array(wideLayer, { maxLength: 5 }), logUniform(1e-6, 1e6), logUniform(1e-3, 1e9), angle, (nIn, layers, nOut, wl, theta) => {
+        for (const [pol, R, T, A] of triples(run(model)(nIn, layers, nOut, wl, theta))) {
+          expect(inUnit(R) && inUnit(T) && inUnit(A), `${pol}: R ${R}, T ${T}, A ${A}`).toBe(true);
+          expect(Math.abs(R + T + A - 1), `${pol}: R + T + A − 1`).toBeLessThanOrEqual(ENERGY_TOL);
+        }
+      }),
+      RUNS.many
+    );
+  });
+
+  it('regression: an index below 1e-6 is refused by name instead of giving NaN', () => {
+    // found by the command-line fuzzing: "stack --n-in 1e-320" printed "Rp NaN %"; the squared index
+    // underflows below about 1e-150
+    for (const f of [thinFilm, incoherentStack]) {
+      expect(() => f(1e-200, [], 1, 550, 0.3)).toThrow('nIn must be a finite number ≥ 1e-6 (got 1e-200)');
+      expect(() => f(2, [], 5e-324, 550, 0)).toThrow(/^nOut must be a finite number ≥ 1e-6/);
+      expect(() => f(2, [{ n: 1e-300, k: 0, thicknessNm: 100 }], 1, 550, 0)).toThrow(/^layers\[0\]\.n must be a finite number ≥ 1e-6/);
+    }
+  });
+});

@@ -61,8 +61,8 @@ export function regroupFarField(bins: readonly FarFieldSample[], group: number, 
 }
 
 /**
- * How far in θ the chart reaches (°): 90, or — with `fullSphere` — the upper edge of the last bin
- * holding light, rounded up to 10°, at most 180.
+ * How far in θ the chart reaches (°): 90; with `fullSphere`, 120 when the last bin holding light ends
+ * by 120°, else 180 (round numbers on a 20° or 30° grid).
  */
 export function farFieldExtentDeg(input: FarFieldInput): number {
   if (!input.fullSphere) return 90;
@@ -70,7 +70,7 @@ export function farFieldExtentDeg(input: FarFieldInput): number {
   const width = bins.length > 1 ? bins[1].thetaDeg - bins[0].thetaDeg : 1;
   let last = 0;
   for (const b of bins) if (b.relativeIntensity > 0 && Number.isFinite(b.relativeIntensity)) last = b.thetaDeg + width / 2;
-  return Math.min(180, Math.max(90, Math.ceil(last / 10 - 1e-9) * 10));
+  return last <= 90 + 1e-9 ? 90 : last <= 120 + 1e-9 ? 120 : 180;
 }
 
 /** Lambertian reference cos θ (relative to I0), sampled every `step` degrees from 0 to 90. */

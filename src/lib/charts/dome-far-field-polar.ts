@@ -1,10 +1,11 @@
 /**
- * The far field as a polar plot: the traced intensity mirrored about the normal (the trace averages
- * over azimuth, so left and right are the same), and a Lambertian of the same flux. Built on the
- * shared polar chart; pure.
+ * The far field as a polar plot of the upper half space: the traced intensity mirrored about the
+ * normal (the trace averages over azimuth, so left and right are the same), and a Lambertian of the
+ * same flux. Light heading below the horizon is left to the Cartesian chart. Built on the shared polar
+ * chart; pure.
  */
 import { polarChart } from './polar-chart';
-import { farFieldExtentDeg, regroupFarField, type FarFieldInput } from './dome-far-field-chart';
+import { regroupFarField, type FarFieldInput } from './dome-far-field-chart';
 import type { ChartSpec } from './spec';
 
 const RAD = Math.PI / 180;
@@ -25,12 +26,12 @@ function mirrored(thetaDeg: number[], values: number[]): { thetaRad: number[]; i
 }
 
 /**
- * Polar far-field chart in units of the Lambertian on-axis intensity I0 = Φ/π. The traced profile uses
- * zones of `group` bins (3° for 1° bins); the Lambertian cos θ is sampled every 3°.
+ * Polar far-field chart (0–90° from the normal) in units of the Lambertian on-axis intensity
+ * I0 = Φ/π. The traced profile uses zones of `group` bins (3° for 1° bins); the Lambertian cos θ is
+ * sampled every 3°.
  */
 export function domeFarFieldPolar(input: FarFieldInput, group = 3): ChartSpec {
-  const maxDeg = farFieldExtentDeg(input);
-  const zones = regroupFarField(input.bins, group, maxDeg);
+  const zones = regroupFarField(input.bins, group, 90);
   const traced = mirrored(
     zones.map((z) => z.thetaDeg),
     zones.map((z) => z.intensity)

@@ -16,6 +16,29 @@ function yTop(values: number[]): number {
   return Math.min(100, Math.max(10, Math.ceil((m + 5) / 10) * 10));
 }
 
+/** 1, 2 or 5 times a power of ten, nearest above x / 1.5 (a readable grid step for x > 0). */
+function niceStep(x: number): number {
+  const p = 10 ** Math.floor(Math.log10(x));
+  const f = x / p;
+  return (f < 1.5 ? 1 : f < 3.5 ? 2 : f < 7.5 ? 5 : 10) * p;
+}
+
+/**
+ * Axis bounds a little wider than the data (at least 2 % of the range each side, so end points and
+ * their error bars are not cut in half), on a grid of about a tenth of the range so the bound
+ * labels read as round numbers. Null when there is no finite range.
+ */
+export function paddedRange(xMin: number, xMax: number): { min: number; max: number } | null {
+  if (!Number.isFinite(xMin) || !Number.isFinite(xMax)) return null;
+  const range = xMax > xMin ? xMax - xMin : Math.abs(xMin) || 1;
+  const g = niceStep(range / 10);
+  const round = (v: number) => Number(v.toPrecision(12));
+  return {
+    min: round(Math.floor((xMin - 0.02 * range) / g) * g),
+    max: round(Math.ceil((xMax + 0.02 * range) / g) * g)
+  };
+}
+
 function vertical(x: number, top: number): ChartPoint[] {
   return [
     { x, y: 0 },
@@ -70,8 +93,7 @@ export function domeSweepChart(plan: SweepPlan, results: readonly SweepPointResu
   const xMin = Math.min(...xs, ...plan.closedFormLine.map((p) => p.x));
   const xMax = Math.max(...xs, ...plan.closedFormLine.map((p) => p.x));
   const range = Number.isFinite(xMin) && Number.isFinite(xMax) ? `${xMin} to ${xMax}` : 'no values';
-  // 3 % of the range on each side, so the end points and their error bars are not cut in half
-  const pad = Number.isFinite(xMax - xMin) && xMax > xMin ? 0.03 * (xMax - xMin) : 0.5;
+  const bounds = paddedRange(xMin, xMax);
   let traceText: string;
   if (traced.length === 0) {
     traceText = 'the trace has not been run yet';
@@ -93,7 +115,7 @@ export function domeSweepChart(plan: SweepPlan, results: readonly SweepPointResu
     kind: 'line',
     title: plan.title,
     ariaLabel: `Chart of extraction in percent against ${plan.xTitle.toLowerCase()}, ${range}: the closed form as a line and the Monte Carlo trace as points with error bars; ${traceText}.`,
-    x: { title: plan.xTitle, min: Number.isFinite(xMin) ? xMin - pad : undefined, max: Number.isFinite(xMax) ? xMax + pad : undefined },
+    x: { title: plan.xTitle, min: bounds?.min, max: bounds?.max },
     y: { title: AXIS_Y, min: 0, max: top },
     series,
     csv: {

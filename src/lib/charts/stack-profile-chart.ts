@@ -23,10 +23,16 @@ export interface StackProfileInput {
   unit: 'nm' | 'µm';
 }
 
-/** Depth shown for the chip and the exit medium on either side of the stack, in nm. */
+/**
+ * Depth shown for the chip and the exit medium on either side of the stack, in nm: about 15 % of the
+ * stack, at least 50 nm (500 nm for µm axes), rounded up to 1, 2 or 5 × 10ⁿ so the axis ends on a round number.
+ */
 export function profilePadNm(totalNm: number, unit: 'nm' | 'µm'): number {
   const floor = unit === 'nm' ? 50 : 500;
-  return Math.max(floor, 0.15 * totalNm);
+  const want = Math.max(floor, 0.15 * totalNm);
+  const decade = Math.pow(10, Math.floor(Math.log10(want)));
+  for (const step of [1, 2, 5, 10]) if (step * decade >= want * (1 - 1e-12)) return step * decade;
+  return want;
 }
 
 /**

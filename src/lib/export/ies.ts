@@ -291,6 +291,9 @@ export function parseIes(text: string): IesPhotometry {
     }
   }
   fluxLm *= candelaMultiplier;
+  if (!Number.isFinite(fluxLm)) {
+    throw new RangeError('IES candela values times the candela multiplier give a flux too large to represent');
+  }
 
   return {
     version,

@@ -119,7 +119,9 @@ export class UserMaterialStore {
     if (!text) return;
     const r = readUserMaterialsFile(text);
     if (r.ok) this.list = r.materials;
-    else this.loadMessage = `Your saved materials could not be read (${r.message}) They are left in storage untouched.`;
+    else {
+      this.loadMessage = `Your saved materials could not be read (${r.message}) They are left in storage untouched; materials you add now are kept for this visit only.`;
+    }
   }
 
   #save(): void {

@@ -21,11 +21,15 @@ const kField = num(` in [${K.min}, ${K.max}]`).min(K.min, { error: `must be in [
   error: `must be in [${K.min}, ${K.max}]`
 });
 
-const sellmeierTerm = z.strictObject({
-  B: num(''),
-  C: num(' ≥ 0').min(0, { error: 'must be ≥ 0' })
-});
-const poleTerm = z.strictObject({ B: num(''), C: num('') });
+const termError = { error: 'must be a {B, C} term of two numbers' };
+const sellmeierTerm = z.strictObject(
+  {
+    B: num(''),
+    C: num(' ≥ 0').min(0, { error: 'must be ≥ 0' })
+  },
+  termError
+);
+const poleTerm = z.strictObject({ B: num(''), C: num('') }, termError);
 const termsOf = <T extends z.ZodType>(term: T) =>
   z
     .array(term, { error: 'must be a list of {B, C} terms' })
@@ -81,19 +85,25 @@ const dispersionSchema = z.discriminatedUnion(
   { error: 'must name a model: sellmeier, sellmeier-glass, cauchy, formula or table' }
 );
 
-const rangeSchema = z.strictObject({
-  min: num(` in [${W.min}, ${W.max}] nm`).min(W.min, { error: `must be in [${W.min}, ${W.max}] nm` }).max(W.max, {
-    error: `must be in [${W.min}, ${W.max}] nm`
-  }),
-  max: num(` in [${W.min}, ${W.max}] nm`).min(W.min, { error: `must be in [${W.min}, ${W.max}] nm` }).max(W.max, {
-    error: `must be in [${W.min}, ${W.max}] nm`
-  })
-});
+const rangeSchema = z.strictObject(
+  {
+    min: num(` in [${W.min}, ${W.max}] nm`).min(W.min, { error: `must be in [${W.min}, ${W.max}] nm` }).max(W.max, {
+      error: `must be in [${W.min}, ${W.max}] nm`
+    }),
+    max: num(` in [${W.min}, ${W.max}] nm`).min(W.min, { error: `must be in [${W.min}, ${W.max}] nm` }).max(W.max, {
+      error: `must be in [${W.min}, ${W.max}] nm`
+    })
+  },
+  { error: `must be { min, max }, wavelengths in nm within [${W.min}, ${W.max}]` }
+);
 
-const noteSchema = z.strictObject({
-  text: z.string({ error: 'must be text' }).min(1, { error: 'must not be empty' }).max(2000, { error: 'must be at most 2000 characters' }),
-  tag: z.enum(PROVENANCES, { error: `must be one of: ${PROVENANCES.join(', ')}` })
-});
+const noteSchema = z.strictObject(
+  {
+    text: z.string({ error: 'must be text' }).min(1, { error: 'must not be empty' }).max(2000, { error: 'must be at most 2000 characters' }),
+    tag: z.enum(PROVENANCES, { error: `must be one of: ${PROVENANCES.join(', ')}` })
+  },
+  { error: 'must be a note { text, tag }' }
+);
 
 const scratch: NkSlot = { n: 0, k: 0 };
 
@@ -107,7 +117,9 @@ export const materialSchema: z.ZodType<Material> = z
       error: 'must be 1–120 characters'
     }),
     aliases: z
-      .array(z.string({ error: 'must be text' }).trim().min(1, { error: 'must not be empty' }).max(60, { error: 'must be at most 60 characters' }))
+      .array(z.string({ error: 'must be text' }).trim().min(1, { error: 'must not be empty' }).max(60, { error: 'must be at most 60 characters' }), {
+        error: 'must be a list of names'
+      })
       .max(20, { error: 'must hold at most 20 aliases' }),
     category: z.enum(MATERIAL_CATEGORIES, { error: `must be one of: ${MATERIAL_CATEGORIES.join(', ')}` }),
     dispersion: dispersionSchema,
@@ -116,19 +128,22 @@ export const materialSchema: z.ZodType<Material> = z
       error: 'must be at most 2000 characters'
     }),
     provenance: z.enum(PROVENANCES, { error: `must be one of: ${PROVENANCES.join(', ')}` }),
-    notes: z.array(noteSchema).max(20, { error: 'must hold at most 20 notes' }).optional(),
+    notes: z.array(noteSchema, { error: 'must be a list of notes { text, tag }' }).max(20, { error: 'must hold at most 20 notes' }).optional(),
     maxServiceTempC: num(' in [-50, 1000] °C').min(-50, { error: 'must be in [-50, 1000] °C' }).max(1000, {
       error: 'must be in [-50, 1000] °C'
     }).optional()
   })
   .superRefine((m, ctx) => {
     const { min, max } = m.validRangeNm;
+    // Range or table rows out of their limits are already reported by their own checks; stop here
+    if (!(min >= W.min && max <= W.max)) return;
     if (!(min < max)) {
       ctx.addIssue({ code: 'custom', path: ['validRangeNm', 'max'], message: `must be greater than validRangeNm.min (${min} nm)` });
       return;
     }
     const d = m.dispersion;
     if (d.model === 'table') {
+      if (d.rows.length < ROWS.min || d.rows.length > ROWS.max) return;
       for (let i = 1; i < d.rows.length; i++) {
         if (!(d.rows[i][0] > d.rows[i - 1][0])) {
           ctx.addIssue({

@@ -13,16 +13,22 @@ export type NkTableResult =
 
 /** Wavelength column values all below this are read as micrometres. */
 export const MICROMETRE_THRESHOLD = 20;
+/** Longest text accepted, characters: room for the most rows with comments (a longer paste took seconds). */
+export const MAX_TABLE_CHARS = 1_000_000;
 const MAX_ERRORS = 20;
 
 /**
- * Reads "wavelength_nm n k" rows from text. Limits: 2–5000 rows, finite numbers, λ > 0, n > 0,
+ * Reads "wavelength_nm n k" rows from text. Limits: at most 1 000 000 characters, 2–5000 rows, finite numbers, λ > 0, n > 0,
  * 0 ≤ k ≤ 50, distinct wavelengths (rows are sorted ascending). Errors carry 1-based line numbers;
  * at most 20 are reported.
  * @returns `{ ok: true, rows, unit, notes }` with rows in nm, ascending; or `{ ok: false, errors }`
  */
 export function parseNkTable(text: string): NkTableResult {
   if (typeof text !== 'string') return { ok: false, errors: [{ line: 0, message: 'the table must be text' }] };
+  if (text.length > MAX_TABLE_CHARS) {
+    const rows = MATERIAL_LIMITS.tableRows.max;
+    return { ok: false, errors: [{ line: 0, message: `the table is too long: at most ${MAX_TABLE_CHARS} characters and ${rows} rows are allowed` }] };
+  }
   const errors: { line: number; message: string }[] = [];
   const parsed: { line: number; row: NkRow }[] = [];
   const { min: minRows, max: maxRows } = MATERIAL_LIMITS.tableRows;

@@ -39,7 +39,7 @@ export function resolveIndex(spec: string, wavelengthNm: number, userMaterials?:
     const k = cx[3] === undefined ? 1 : Number(cx[3]);
     if (cx[2] === '-' && k !== 0) {
       throw new RangeError(
-        `index "${spec.trim()}": k must be ≥ 0 — write absorption as n + ki with k ≥ 0 (e.g. 2.4+0.01i)`
+        `index "${quoted(spec)}": k must be ≥ 0 — write absorption as n + ki with k ≥ 0 (e.g. 2.4+0.01i)`
       );
     }
     return typed(spec, Number(cx[1]), k);
@@ -54,11 +54,11 @@ export function resolveIndex(spec: string, wavelengthNm: number, userMaterials?:
   }
   if (/^[-+]?[\d.]/.test(compact) && /\d/.test(compact)) {
     throw new RangeError(
-      `index "${spec.trim()}" is not a number > 0 or a complex index n+ki (e.g. 1.41, 2.4+0.01i, 0.05+3.6i)`
+      `index "${quoted(spec)}" is not a number > 0 or a complex index n+ki (e.g. 1.41, 2.4+0.01i, 0.05+3.6i)`
     );
   }
   throw new RangeError(
-    `index "${spec.trim()}" is not a number, a complex index n+ki or a known material (e.g. 1.41, 2.4+0.01i, GaN, sapphire-o)`
+    `index "${quoted(spec)}" is not a number, a complex index n+ki or a known material (e.g. 1.41, 2.4+0.01i, GaN, sapphire-o)`
   );
 }
 
@@ -66,10 +66,16 @@ function typed(spec: string, n: number, k: number): ResolvedIndex {
   const N = MATERIAL_LIMITS.typedN;
   const K = MATERIAL_LIMITS.k;
   if (!(n > N.min && n <= N.max)) {
-    throw new RangeError(`index "${spec.trim()}": n must be > ${N.min} and ≤ ${N.max} (got ${n})`);
+    throw new RangeError(`index "${quoted(spec)}": n must be > ${N.min} and ≤ ${N.max} (got ${n})`);
   }
   if (!(k >= K.min && k <= K.max)) {
-    throw new RangeError(`index "${spec.trim()}": k must be in [${K.min}, ${K.max}] (got ${k})`);
+    throw new RangeError(`index "${quoted(spec)}": k must be in [${K.min}, ${K.max}] (got ${k})`);
   }
   return { n, k };
+}
+
+/** The user's text for a message: trimmed and cut to 40 characters, so a pasted essay stays out of it. */
+function quoted(spec: string): string {
+  const t = spec.trim();
+  return t.length > 40 ? `${t.slice(0, 40)}…` : t;
 }

@@ -34,6 +34,17 @@ export interface StackResult {
 export const MAX_LAYERS = 10000;
 
 /**
+ * Smallest index n accepted at the public edge. Metals reach n ≈ 0.01; below about 1e-150 the squared
+ * indices in the admittances underflow and R, T turn into NaN.
+ */
+export const MIN_INDEX = 1e-6;
+
+function requireIndex(field: string, n: number): void {
+  requirePositive(field, n);
+  if (n < MIN_INDEX) throw new RangeError(`${field} must be a finite number ≥ 1e-6 (got ${n})`);
+}
+
+/**
  * Checks the arguments shared by the stack functions; throws a RangeError naming the field.
  * Incident and exit media are lossless (real index); layers may absorb.
  */
@@ -44,8 +55,8 @@ export function validateStack(
   wavelengthNm: number,
   thetaInRad?: number
 ): void {
-  requirePositive('nIn', nIn);
-  requirePositive('nOut', nOut);
+  requireIndex('nIn', nIn);
+  requireIndex('nOut', nOut);
   requirePositive('wavelengthNm', wavelengthNm);
   if (thetaInRad !== undefined) requireInRange('thetaInRad', thetaInRad, 0, Math.PI / 2);
   if (!Array.isArray(layers)) throw new RangeError('layers must be an array of { n, k, thicknessNm }');
@@ -55,7 +66,7 @@ export function validateStack(
   for (let i = 0; i < layers.length; i++) {
     const l = layers[i];
     if (l === null || typeof l !== 'object') throw new RangeError(`layers[${i}] must be { n, k, thicknessNm }`);
-    requirePositive(`layers[${i}].n`, l.n);
+    requireIndex(`layers[${i}].n`, l.n);
     requireNonNegative(`layers[${i}].k`, l.k);
     requireNonNegative(`layers[${i}].thicknessNm`, l.thicknessNm);
   }

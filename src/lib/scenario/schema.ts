@@ -21,18 +21,37 @@ function materialId(field: string) {
     .regex(MATERIAL_ID_PATTERN, { error: `${field} must be a material id from the library.` });
 }
 
+/**
+ * Messages for an object's own problems — not an object, or fields it does not have — naming it
+ * (zod's defaults name neither the object nor where it sits).
+ */
+function objectMessages(field: string) {
+  return {
+    error: (issue: z.core.$ZodRawIssue) => {
+      if (issue.code !== 'unrecognized_keys') return `${field} must be an object with named fields.`;
+      const keys = issue.keys.slice(0, 3).map((k) => `"${k.slice(0, 40)}"`).join(', ');
+      const more = issue.keys.length > 3 ? ` and ${issue.keys.length - 3} more` : '';
+      return `${field} has unknown field${issue.keys.length > 1 ? 's' : ''} ${keys}${more}.`;
+    }
+  };
+}
+
 /** A medium: a library material (indices taken at the scenario wavelength) or a typed index n + ik. */
 function medium(field: string) {
+  const own = objectMessages(field.endsWith('medium') ? field : `${field} medium`);
   return z.discriminatedUnion(
     'kind',
     [
-      z.object({ kind: z.literal('material'), id: materialId(`${field} material`) }).strict(),
+      z.object({ kind: z.literal('material'), id: materialId(`${field} material`) }, own).strict(),
       z
-        .object({
-          kind: z.literal('index'),
-          n: num(`${field} index n`, LIMITS.indexN),
-          k: num(`${field} extinction k`, LIMITS.indexK)
-        })
+        .object(
+          {
+            kind: z.literal('index'),
+            n: num(`${field} index n`, LIMITS.indexN),
+            k: num(`${field} extinction k`, LIMITS.indexK)
+          },
+          own
+        )
         .strict()
     ],
     { error: `${field} must be a library material or a typed index.` }
@@ -42,13 +61,16 @@ function medium(field: string) {
 const emissionSchema = z.discriminatedUnion(
   'kind',
   [
-    z.object({ kind: z.literal('single'), wavelengthNm: num('Wavelength', LIMITS.wavelengthNm) }).strict(),
+    z.object({ kind: z.literal('single'), wavelengthNm: num('Wavelength', LIMITS.wavelengthNm) }, objectMessages('Emission')).strict(),
     z
-      .object({
-        kind: z.literal('gaussian'),
-        peakNm: num('Peak wavelength', LIMITS.wavelengthNm),
-        fwhmNm: num('Spectral width (FWHM)', LIMITS.fwhmNm)
-      })
+      .object(
+        {
+          kind: z.literal('gaussian'),
+          peakNm: num('Peak wavelength', LIMITS.wavelengthNm),
+          fwhmNm: num('Spectral width (FWHM)', LIMITS.fwhmNm)
+        },
+        objectMessages('Emission')
+      )
       .strict(),
     z
       .object({
@@ -59,7 +81,7 @@ const emissionSchema = z.discriminatedUnion(
           })
           .min(LIMITS.spectrumRows.min, { error: rangeMessage('Number of spectrum rows', LIMITS.spectrumRows) })
           .max(LIMITS.spectrumRows.max, { error: rangeMessage('Number of spectrum rows', LIMITS.spectrumRows) })
-      })
+      }, objectMessages('Emission'))
       .strict()
   ],
   { error: 'Emission must be a single wavelength, a Gaussian band or a table.' }
@@ -74,14 +96,14 @@ const chipSchema = z
     emitterZMm: num('Emitter height', LIMITS.emitterZMm),
     absorptionPerMm: num('Chip absorption', LIMITS.absorptionPerMm),
     emission: z.enum(['plane', 'volume'], { error: "Chip emission must be 'plane' or 'volume'." })
-  })
+  }, objectMessages('Chip'))
   .strict();
 
 const baseSchema = z.discriminatedUnion(
   'kind',
   [
-    z.object({ kind: z.literal('reflectance'), reflectance: num('Base reflectance', LIMITS.reflectance) }).strict(),
-    z.object({ kind: z.literal('metal'), id: materialId('Base metal') }).strict()
+    z.object({ kind: z.literal('reflectance'), reflectance: num('Base reflectance', LIMITS.reflectance) }, objectMessages('Base')).strict(),
+    z.object({ kind: z.literal('metal'), id: materialId('Base metal') }, objectMessages('Base')).strict()
   ],
   { error: 'Base must be a reflectance or a metal from the library.' }
 );
@@ -93,7 +115,7 @@ const encapsulantSchema = z
     radiusMm: num('Encapsulant radius', LIMITS.sizeMm),
     heightMm: num('Encapsulant height', LIMITS.sizeMm),
     absorptionPerMm: num('Encapsulant absorption', LIMITS.absorptionPerMm)
-  })
+  }, objectMessages('Encapsulant'))
   .strict();
 
 const traceSchema = z
@@ -101,7 +123,7 @@ const traceSchema = z
     rays: num('Rays', LIMITS.rays),
     seed: num('Seed', LIMITS.seed),
     polarization: z.enum(['average', 'track'], { error: "Polarisation must be 'average' or 'track'." })
-  })
+  }, objectMessages('Trace settings'))
   .strict();
 
 const nameSchema = z
@@ -120,7 +142,7 @@ const objectSchema = z
     encapsulant: encapsulantSchema,
     outside: medium('Outside medium'),
     trace: traceSchema
-  })
+  }, objectMessages('Scenario'))
   .strict();
 
 type ObjectScenario = z.infer<typeof objectSchema>;

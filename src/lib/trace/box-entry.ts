@@ -22,6 +22,10 @@ export function boxEntry(ray: Float64Array, box: Float64Array, hit: Float64Array
   const a = box[0];
   const b = box[1];
   const H = box[2];
+  // Quick miss: outside a slab and not moving toward it (a ray that just left the chip, mostly)
+  if ((px >= a && dx >= 0) || (px <= -a && dx <= 0)) return SURFACE_NONE;
+  if ((py >= b && dy >= 0) || (py <= -b && dy <= 0)) return SURFACE_NONE;
+  if (pz >= H && dz >= 0) return SURFACE_NONE;
   let tNear = -Infinity;
   let tFar = Infinity;
   let face = SURFACE_NONE;

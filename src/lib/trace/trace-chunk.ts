@@ -89,17 +89,20 @@ const fr = new Float64Array(3);
 // Chip box [a, b, H, self-hit eps] and encapsulant shell [R, h], mm
 const box = new Float64Array(4);
 const shell = new Float64Array(2);
-// Ray fates of the current chunk, indexed by step outcome
-const fates = new Float64Array(12);
+// Ray fates of the current chunk, indexed by step outcome; slots 12–14: lost, escaped below, events
+const fates = new Float64Array(15);
+
+// Media by number — chip, encapsulant, outside — so calls pass small integers, never boxed doubles
+const CHIP = 0;
+const ENCAPSULANT = 1;
+const OUTSIDE = 2;
+// Refractive index and absorption coefficient (1/mm) of each medium
+const indexOf = new Float64Array(3);
+const alphaOf = new Float64Array(3);
 
 // Package constants, set once per chunk by configure()
 let shape = SHAPE_NONE;
-let nChip = 1;
-let alphaChip = 0;
-let nEnc = 1;
-let alphaEnc = 0;
-let nOut = 1;
-let nAroundChip = 1;
+let aroundChip = OUTSIDE;
 let emitterZ = 0;
 let volumeEmission = false;
 let absorbing = false;
@@ -129,15 +132,15 @@ function configure(pkg: TracePackage): void {
   box[3] = 1e-12 * (box[0] + box[1] + box[2] + (shape === SHAPE_NONE ? 0 : shell[0] + shell[1]));
   invR2 = 1 / (shell[0] * shell[0]);
   invH2 = 1 / (shell[1] * shell[1]);
-  nChip = chip.n;
-  alphaChip = chip.absorptionPerMm;
-  nEnc = enc.n;
-  alphaEnc = enc.absorptionPerMm;
-  nOut = pkg.outsideN;
-  nAroundChip = shape === SHAPE_NONE ? nOut : nEnc;
+  indexOf[CHIP] = chip.n;
+  indexOf[ENCAPSULANT] = enc.n;
+  indexOf[OUTSIDE] = pkg.outsideN;
+  alphaOf[CHIP] = chip.absorptionPerMm;
+  alphaOf[ENCAPSULANT] = shape === SHAPE_NONE ? 0 : enc.absorptionPerMm;
+  aroundChip = shape === SHAPE_NONE ? OUTSIDE : ENCAPSULANT;
   emitterZ = emitterHeightMm(chip);
   volumeEmission = chip.emission === 'volume';
-  absorbing = alphaChip > 0 || (shape !== SHAPE_NONE && alphaEnc > 0);
+  absorbing = alphaOf[CHIP] > 0 || alphaOf[ENCAPSULANT] > 0;
   track = pkg.polarization === 'track';
   metalBase = pkg.base.kind === 'metal';
   if (pkg.base.kind === 'metal') {
@@ -175,10 +178,13 @@ function launch(): void {
 }
 
 /**
- * One dielectric interface at the current point, with `normal` facing the incident side: decides
- * reflection, total internal reflection or refraction, and replaces the ray's direction.
+ * One dielectric interface at the current point, with `normal` facing the incident side, from medium
+ * `from` into medium `to`: decides reflection, total internal reflection or refraction, and replaces
+ * the ray's direction.
  */
-function interfaceEvent(etaI: number, etaT: number): number {
+function interfaceEvent(from: number, to: number): number {
+  const etaI = indexOf[from];
+  const etaT = indexOf[to];
   let cosI = -(ray[3] * normal[0] + ray[4] * normal[1] + ray[5] * normal[2]);
   // A roundoff hit at t ≈ 0 can graze from the wrong side: treat as grazing incidence
   if (cosI < 0) cosI = 0;
@@ -207,7 +213,9 @@ function interfaceEvent(etaI: number, etaT: number): number {
  * components by η = etaI/etaT and sets the normal one to sign·cos θt (vector Snell's law on an axis;
  * the result is unit length by construction: η² sin²θi + cos²θt = 1).
  */
-function axisFaceEvent(k: number, sign: number, etaI: number, etaT: number): number {
+function axisFaceEvent(k: number, sign: number, from: number, to: number): number {
+  const etaI = indexOf[from];
+  const etaT = indexOf[to];
   const j = 3 + k;
   const cosI = sign * ray[j];
   // Handle total internal reflection
@@ -229,16 +237,17 @@ function axisFaceEvent(k: number, sign: number, etaI: number, etaT: number): num
 }
 
 /** The same face event for a polarisation-tracked ray: a general interface with normal −sign·ê_k. */
-function trackedAxisFace(k: number, sign: number, etaI: number, etaT: number): number {
+function trackedAxisFace(k: number, sign: number, from: number, to: number): number {
   normal[0] = 0;
   normal[1] = 0;
   normal[2] = 0;
   normal[k] = -sign;
-  return interfaceEvent(etaI, etaT);
+  return interfaceEvent(from, to);
 }
 
-/** The base mirror met going down from a medium of index etaI: true if reflected (direction replaced). */
-function baseEvent(etaI: number): boolean {
+/** The base mirror met going down from medium `from`: true if reflected (direction replaced). */
+function baseEvent(from: number): boolean {
+  const etaI = indexOf[from];
   const cosI = -ray[5];
   if (track) {
     normal[0] = 0;
@@ -266,8 +275,9 @@ function stepInChip(): number {
   if (face === SURFACE_NONE) return GEOMETRY_ERROR;
   const t = hit[0];
   // Beer–Lambert: absorbed on this segment if the optical depth runs out
-  if (alphaChip > 0) {
-    const depth = alphaChip * t;
+  const alpha = alphaOf[CHIP];
+  if (alpha > 0) {
+    const depth = alpha * t;
     if (depth >= ray[6]) return ABSORBED_CHIP;
     ray[6] -= depth;
   }
@@ -278,7 +288,7 @@ function stepInChip(): number {
   // Base under the chip
   if (face === CHIP_BOTTOM) {
     ray[2] = 0;
-    return baseEvent(nChip) ? GO_ON : ABSORBED_BASE;
+    return baseEvent(CHIP) ? GO_ON : ABSORBED_BASE;
   }
 
   // Chip face: snap onto it; outward normal along axis k with sign ±1
@@ -301,7 +311,7 @@ function stepInChip(): number {
     k = 1;
     sign = -1;
   }
-  const outcome = track ? trackedAxisFace(k, sign, nChip, nAroundChip) : axisFaceEvent(k, sign, nChip, nAroundChip);
+  const outcome = track ? trackedAxisFace(k, sign, CHIP, aroundChip) : axisFaceEvent(k, sign, CHIP, aroundChip);
   if (outcome === TIR) chipTir++;
   if (outcome !== TRANSMITTED) return GO_ON;
   if (shape !== SHAPE_NONE) return ENTER_ENCAPSULANT;
@@ -336,8 +346,9 @@ function stepInEncapsulant(): number {
   }
   if (surface === SURFACE_NONE || !(t < Infinity)) return GEOMETRY_ERROR;
   // Beer–Lambert in the encapsulant
-  if (alphaEnc > 0) {
-    const depth = alphaEnc * t;
+  const alpha = alphaOf[ENCAPSULANT];
+  if (alpha > 0) {
+    const depth = alpha * t;
     if (depth >= ray[6]) return ABSORBED_ENCAPSULANT;
     ray[6] -= depth;
   }
@@ -348,7 +359,7 @@ function stepInEncapsulant(): number {
   // Base plane beside the chip
   if (surface === BASE) {
     ray[2] = 0;
-    return baseEvent(nEnc) ? GO_ON : ABSORBED_BASE;
+    return baseEvent(ENCAPSULANT) ? GO_ON : ABSORBED_BASE;
   }
 
   normal[0] = 0;
@@ -372,7 +383,7 @@ function stepInEncapsulant(): number {
       ray[1] = -box[1];
       normal[1] = -1;
     }
-    return interfaceEvent(nEnc, nChip) === TRANSMITTED ? ENTER_CHIP : GO_ON;
+    return interfaceEvent(ENCAPSULANT, CHIP) === TRANSMITTED ? ENTER_CHIP : GO_ON;
   }
 
   // Outer surface, met from inside: the inward unit normal faces the ray
@@ -393,7 +404,7 @@ function stepInEncapsulant(): number {
     ray[2] = shell[1];
     normal[2] = -1;
   }
-  const outcome = interfaceEvent(nEnc, nOut);
+  const outcome = interfaceEvent(ENCAPSULANT, OUTSIDE);
   if (outcome === TIR) outerTir++;
   if (outcome !== TRANSMITTED) return GO_ON;
   return surface === DOME ? ESCAPED_DOME : surface === CYLINDER_TOP ? ESCAPED_CYLINDER_TOP : ESCAPED_CYLINDER_SIDE;
@@ -405,6 +416,51 @@ function polarBin(): number {
   const c = dz > 1 ? 1 : dz < -1 ? -1 : dz;
   const bin = Math.floor(Math.acos(c) * DEG_PER_RAD);
   return bin < POLAR_BINS ? bin : POLAR_BINS - 1;
+}
+
+// Extra slots of `fates` filled by the ray loop
+const LOST = 12;
+const ESCAPED_BELOW = 13;
+const EVENTS = 14;
+
+/**
+ * The ray loop proper: launches `rays` rays and follows each to its end, counting fates in `fates`.
+ * Kept apart from the tally bookkeeping so the optimised loop never meets code it has not yet run
+ * (which would throw it back to the interpreter at the end of every chunk).
+ */
+function runRays(rays: number, maxEvents: number, histogram: Float64Array, onProgress?: (raysDone: number) => void): void {
+  for (let i = 0; i < rays; i++) {
+    if (onProgress !== undefined && i > 0 && i % PROGRESS_EVERY === 0) onProgress(i);
+    launch();
+    let inChip = true;
+    let rayEvents = 0;
+    for (;;) {
+      // Event cap: the ray is lost
+      if (rayEvents === maxEvents) {
+        fates[LOST]++;
+        break;
+      }
+      rayEvents++;
+      const step = inChip ? stepInChip() : stepInEncapsulant();
+      if (step === GO_ON) continue;
+      if (step === ENTER_ENCAPSULANT) {
+        inChip = false;
+        continue;
+      }
+      if (step === ENTER_CHIP) {
+        inChip = true;
+        continue;
+      }
+      // The ray ends here: one ledger bin
+      fates[step]++;
+      if (step <= ESCAPED_CYLINDER_SIDE) {
+        histogram[polarBin()]++;
+        if (ray[5] < 0) fates[ESCAPED_BELOW]++;
+      }
+      break;
+    }
+    fates[EVENTS] += rayEvents;
+  }
 }
 
 /**
@@ -430,44 +486,8 @@ export function traceChunk(
   fates.fill(0);
   outerTir = 0;
   chipTir = 0;
-  let lost = 0;
-  let escapedBelow = 0;
-  let events = 0;
-  const histogram = tally.polarHistogram;
-
   seedChunk(seed, chunkIndex);
-  for (let i = 0; i < rays; i++) {
-    if (onProgress !== undefined && i > 0 && i % PROGRESS_EVERY === 0) onProgress(i);
-    launch();
-    let inChip = true;
-    let rayEvents = 0;
-    for (;;) {
-      // Event cap: the ray is lost
-      if (rayEvents === maxEvents) {
-        lost++;
-        break;
-      }
-      rayEvents++;
-      const step = inChip ? stepInChip() : stepInEncapsulant();
-      if (step === GO_ON) continue;
-      if (step === ENTER_ENCAPSULANT) {
-        inChip = false;
-        continue;
-      }
-      if (step === ENTER_CHIP) {
-        inChip = true;
-        continue;
-      }
-      // The ray ends here: one ledger bin
-      fates[step]++;
-      if (step <= ESCAPED_CYLINDER_SIDE) {
-        histogram[polarBin()]++;
-        if (ray[5] < 0) escapedBelow++;
-      }
-      break;
-    }
-    events += rayEvents;
-  }
+  runRays(rays, maxEvents, tally.polarHistogram, onProgress);
 
   const escChipTop = fates[ESCAPED_CHIP_TOP];
   const escChipSide = fates[ESCAPED_CHIP_SIDE];
@@ -477,13 +497,13 @@ export function traceChunk(
   const geometryErrors = fates[GEOMETRY_ERROR];
   tally.launched += rays;
   tally.escaped += escChipTop + escChipSide + escDome + escCylTop + escCylSide;
-  tally.escapedBelowHorizon += escapedBelow;
+  tally.escapedBelowHorizon += fates[ESCAPED_BELOW];
   tally.absorbedChip += fates[ABSORBED_CHIP];
   tally.absorbedEncapsulant += fates[ABSORBED_ENCAPSULANT];
   tally.absorbedBase += fates[ABSORBED_BASE];
-  tally.lost += lost + geometryErrors;
+  tally.lost += fates[LOST] + geometryErrors;
   tally.geometryErrors += geometryErrors;
-  tally.events += events;
+  tally.events += fates[EVENTS];
   tally.escapedChipTop += escChipTop;
   tally.escapedChipSide += escChipSide;
   tally.escapedDome += escDome;

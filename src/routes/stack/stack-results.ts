@@ -65,6 +65,15 @@ export function computeStack(doc: StackDoc, chip: StackMedium, exit: StackMedium
   if (chip.k > 0) notes.push(`The chip's extinction k = ${chip.k} is left out at its interface; only its n = ${chip.n} is used.`);
   if (exit.k > 0) notes.push(`The exit medium's extinction k = ${exit.k} is left out; only its n = ${exit.n} is used.`);
   const coreMode = doc.mode === 'thin' ? 'coherent' : 'incoherent';
+  if (doc.mode === 'thick') {
+    // The incoherent model takes interfaces from n alone and k only as bulk attenuation (k ≪ n).
+    const metal = layers.find((l) => l.k > 0.1 * l.n);
+    if (metal) {
+      notes.push(
+        `Layer ${metal.item + 1} has k = ${Number(metal.k.toPrecision(3))}, not small against n = ${Number(metal.n.toPrecision(3))}: thick-layer mode treats it as a bulk absorber with interfaces from n alone. Use thin-film mode for metal or strongly absorbing films.`
+      );
+    }
+  }
 
   const normal = doc.mode === 'thin' ? thinFilm(chip.n, layers, exit.n, wavelengthNm, 0) : incoherentStack(chip.n, layers, exit.n, wavelengthNm, 0);
   const extraction = stackExtraction(chip.n, layers, exit.n, wavelengthNm, coreMode);

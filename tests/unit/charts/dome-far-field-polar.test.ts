@@ -30,3 +30,13 @@ describe('domeFarFieldPolar(input)', () => {
     expect(spec.ariaLabel).toMatch(/no light escaped/);
   });
 });
+
+describe('domeFarFieldPolar(input) with light below the horizon', () => {
+  it('draws the upper half space only', () => {
+    const below = bins.map((b) => ({ ...b, relativeIntensity: 1 }));
+    const spec = domeFarFieldPolar({ bins: below, beamAngleDeg: 150, onAxisVsLambertian: 1, fullSphere: true });
+    expect(spec.y.min).toBe(0);
+    const trace = spec.series.find((s) => s.label === 'Monte Carlo trace')!;
+    for (const p of trace.points) expect(p.y).toBeGreaterThanOrEqual(0);
+  });
+});

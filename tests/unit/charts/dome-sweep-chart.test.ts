@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { domeSweepChart } from '../../../src/lib/charts/dome-sweep-chart';
+import { domeSweepChart, paddedRange } from '../../../src/lib/charts/dome-sweep-chart';
 import { chartTable } from '../../../src/lib/charts/csv';
 import type { SweepPlan } from '../../../src/lib/sweeps/sweep-plan';
 import type { SweepPointResult } from '../../../src/lib/sweeps/run-sweep';
@@ -78,5 +78,19 @@ describe('domeSweepChart(plan, results, raysPerPoint)', () => {
     expect(t.rows[0]).toEqual([1.2, 8, 37, 0.2, 50_000]);
     expect(t.rows[2]).toEqual([4, 8, '', '', '']);
     expect(t.rows[3][4]).toMatch(/skipped: too small/);
+  });
+});
+
+describe('paddedRange(xMin, xMax)', () => {
+  it('widens the range by at least 2 % each side onto a round grid of about a tenth of the range', () => {
+    expect(paddedRange(1, 2)).toEqual({ min: 0.9, max: 2.1 });
+    expect(paddedRange(0.3, 2)).toEqual({ min: 0.2, max: 2.2 });
+    expect(paddedRange(1.05, 4)).toEqual({ min: 0.8, max: 4.2 });
+    expect(paddedRange(1000, 5000)).toEqual({ min: 500, max: 5500 });
+  });
+
+  it('gives a small range around a single value, and null without a finite range', () => {
+    expect(paddedRange(1.5, 1.5)).toEqual({ min: 1.4, max: 1.6 });
+    expect(paddedRange(Infinity, -Infinity)).toBeNull();
   });
 });

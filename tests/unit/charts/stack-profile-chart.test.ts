@@ -65,3 +65,14 @@ describe('stackProfileChart(input)', () => {
     expect(spec.ariaLabel).toContain('0 layers');
   });
 });
+
+describe('profilePadNm(totalNm, unit)', () => {
+  it('pads about 15 % of the stack, rounded up to 1, 2 or 5 × 10ⁿ, with a floor', () => {
+    expect(profilePadNm(0, 'nm')).toBe(50);
+    expect(profilePadNm(150, 'nm')).toBe(50);
+    expect(profilePadNm(610, 'nm')).toBe(100); // 91.5 → 100
+    expect(profilePadNm(2000, 'nm')).toBe(500); // 300 → 500
+    expect(profilePadNm(0, 'µm')).toBe(500);
+    expect(profilePadNm(1e6, 'µm')).toBe(200_000); // 150 µm → 200 µm
+  });
+});

@@ -113,3 +113,14 @@ describe('reflectanceSpectrum(items, chipAt, exitAt, find, from, to, points)', (
     expect(Number.isNaN(s.R[5]) && Number.isNaN(s.bareR[6])).toBe(true);
   });
 });
+
+describe('computeStack notes', () => {
+  it('warns that thick-layer mode is the wrong model for a metal film, and not in thin-film mode', () => {
+    // Silver at 550 nm, n = 0.04382, k = 3.6101 (McPeak et al. 2015, physics notes §1)
+    const silver = typed(0.04382, 20, 3.6101);
+    const thick = computeStack(doc('thick', [silver]), medium(2.45), medium(1), 550, find);
+    expect(thick.ok && thick.results.notes.join(' ')).toMatch(/Use thin-film mode for metal/);
+    const thin = computeStack(doc('thin', [silver]), medium(2.45), medium(1), 550, find);
+    expect(thin.ok && thin.results.notes).toEqual([]);
+  });
+});

@@ -99,6 +99,7 @@ export function createNodeTracePool(threads: number): NodeTracePool {
     const plan = chunkPlan(options.rays);
     const maxEvents = options.maxEvents ?? DEFAULT_MAX_EVENTS;
     const total = createTally();
+    for (const worker of workers) worker.ref(); // keep the process alive while the run is under way
     try {
       await new Promise<void>((resolve, reject) => {
         let nextChunk = 0;
@@ -142,6 +143,7 @@ export function createNodeTracePool(threads: number): NodeTracePool {
       });
     } finally {
       current = null;
+      for (const worker of workers) worker.unref();
     }
     return total;
   };
