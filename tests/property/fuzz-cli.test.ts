@@ -22,6 +22,8 @@ import { checkAsync, deeplyNested, prototypePolluted, RUNS } from './support';
 
 /** Cases per command (trace gets fewer: each case traces up to 2000 rays). */
 const CASES = RUNS.fuzz / 3;
+/** Trace runs with only valid options (each traces 1000–2000 rays to the end). */
+const VALID_TRACE_CASES = 60;
 
 interface Run {
   code: number;
@@ -223,6 +225,37 @@ describe('main(argv) under generated argv', () => {
       'cli trace',
       fc.asyncProperty(traceArgv(), async (args) => expectContract('trace', ['trace', ...args], await runMain(['trace', ...args]))),
       CASES
+    );
+  });
+
+  it(`trace: valid options always run and print finite numbers (${VALID_TRACE_CASES} cases)`, async () => {
+    const validTrace = fc
+      .record({
+        chip: size,
+        chipIndex: fc.oneof(number(1, 4).map((n) => ['--n-chip', n]), fc.constantFrom(['--chip-material', 'GaN'], ['--chip-material', 'sapphire-o'])),
+        shape: fc.constantFrom('none', 'dome', 'cylinder'),
+        radius: number(3, 5),
+        height: number(3, 5),
+        enc: fc.oneof(number(1, 2).map((n) => ['--n-enc', n]), fc.constantFrom(['--enc-material', 'silicone-phenyl'], ['--enc-material', 'epoxy'])),
+        base: fc.oneof(number(0, 1).map((r) => ['--base-reflectance', r]), fc.constantFrom(['--base-material', 'ag'], ['--base-material', 'al'])),
+        polarization: fc.constantFrom('average', 'track'),
+        rays: fc.integer({ min: 1000, max: 2000 }),
+        seed: fc.integer({ min: 0, max: 4294967295 }),
+        json: fc.boolean()
+      })
+      .map((g) => [
+        '--chip', g.chip, ...g.chipIndex, '--shape', g.shape, '--radius', g.radius, '--height', g.height, ...g.enc, ...g.base,
+        '--polarization', g.polarization, '--rays', String(g.rays), '--seed', String(g.seed), '--threads', '1', '--max-events', '50',
+        ...(g.json ? ['--json'] : [])
+      ]);
+    await checkAsync(
+      'cli trace, valid options',
+      fc.asyncProperty(validTrace, async (args) => {
+        const r = await runMain(['trace', ...args]);
+        expect(r.code, r.stderr).toBe(0);
+        expectContract('trace', ['trace', ...args], r);
+      }),
+      VALID_TRACE_CASES
     );
   });
 

@@ -61,7 +61,8 @@ const REFLECTED = 0;
 const TIR = 1;
 const TRANSMITTED = 2;
 
-// Outcomes of one step (segment + surface); 3..11 end the ray and index `fates`
+// Outcomes of a step; 3..11 end the ray and index `fates`. A step moves the ray along one segment;
+// when it ends on an interface it returns AT_SURFACE and the surface's own event function follows.
 const GO_ON = 0;
 const ENTER_ENCAPSULANT = 1;
 const ENTER_CHIP = 2;
@@ -74,6 +75,7 @@ const ABSORBED_CHIP = 8;
 const ABSORBED_ENCAPSULANT = 9;
 const ABSORBED_BASE = 10;
 const GEOMETRY_ERROR = 11;
+const AT_SURFACE = 15;
 
 const DEG_PER_RAD = 180 / Math.PI;
 /** Rays between progress callbacks inside a chunk. */
@@ -86,8 +88,8 @@ const direction = ray.subarray(3, 6);
 const normal = new Float64Array(3);
 const hit = new Float64Array(1);
 const fr = new Float64Array(3);
-// Chip box [a, b, H, self-hit eps] and encapsulant shell [R, h], mm
-const box = new Float64Array(4);
+// Chip box [a, b, H, self-hit eps, emitter height] and encapsulant shell [R, h], mm
+const box = new Float64Array(5);
 const shell = new Float64Array(2);
 // Ray fates of the current chunk, indexed by step outcome; slots 12–14: lost, escaped below, events
 const fates = new Float64Array(15);
@@ -103,7 +105,6 @@ const alphaOf = new Float64Array(3);
 // Package constants, set once per chunk by configure()
 let shape = SHAPE_NONE;
 let aroundChip = OUTSIDE;
-let emitterZ = 0;
 let volumeEmission = false;
 let absorbing = false;
 let track = false;
@@ -115,6 +116,8 @@ let baseK = 0;
 let baseAmplitude = 0;
 let invR2 = 0;
 let invH2 = 0;
+// The surface the last step ended on (a constant from surfaces.ts)
+let surface = SURFACE_NONE;
 // Debug counters of total internal reflections
 let outerTir = 0;
 let chipTir = 0;
@@ -138,7 +141,7 @@ function configure(pkg: TracePackage): void {
   alphaOf[CHIP] = chip.absorptionPerMm;
   alphaOf[ENCAPSULANT] = shape === SHAPE_NONE ? 0 : enc.absorptionPerMm;
   aroundChip = shape === SHAPE_NONE ? OUTSIDE : ENCAPSULANT;
-  emitterZ = emitterHeightMm(chip);
+  box[4] = emitterHeightMm(chip);
   volumeEmission = chip.emission === 'volume';
   absorbing = alphaOf[CHIP] > 0 || alphaOf[ENCAPSULANT] > 0;
   track = pkg.polarization === 'track';
@@ -157,7 +160,7 @@ function launch(): void {
   // Position on the emitting plane or in the volume
   ray[0] = (nextFloat() - 0.5) * 2 * box[0];
   ray[1] = (nextFloat() - 0.5) * 2 * box[1];
-  ray[2] = volumeEmission ? nextFloat() * box[2] : emitterZ;
+  ray[2] = volumeEmission ? nextFloat() * box[2] : box[4];
   // Isotropic direction without trigonometry (Marsaglia 1972): (u, v) uniform in the unit disc,
   // s = u² + v²; then (2u√(1 − s), 2v√(1 − s), 1 − 2s) is uniform on the sphere
   let u = 0;
@@ -174,7 +177,8 @@ function launch(): void {
   ray[5] = 1 - 2 * s;
   if (track) launchPolarization(direction, nextFloat());
   // Optical depth to absorption, τ ~ Exp(1) by inverse transform (1 − u ∈ (0, 1]); none if nothing absorbs
-  ray[6] = absorbing ? -Math.log(1 - nextFloat()) : Infinity;
+  if (absorbing) ray[6] = -Math.log(1 - nextFloat());
+  else ray[6] = Infinity;
 }
 
 /**
@@ -269,7 +273,7 @@ function baseEvent(from: number): boolean {
   return true;
 }
 
-/** One step inside the chip: to the next wall, absorption on the way, then the wall's event. */
+/** One step inside the chip: to the next wall, with absorption on the way; the base reflects here. */
 function stepInChip(): number {
   const face = boxExit(ray, box, hit);
   if (face === SURFACE_NONE) return GEOMETRY_ERROR;
@@ -291,7 +295,14 @@ function stepInChip(): number {
     return baseEvent(CHIP) ? GO_ON : ABSORBED_BASE;
   }
 
-  // Chip face: snap onto it; outward normal along axis k with sign ±1
+  surface = face;
+  return AT_SURFACE;
+}
+
+/** The event at the chip wall the last chip step reached (from inside the chip). */
+function chipWallEvent(): number {
+  const face = surface;
+  // Snap onto the face; its outward normal is sign·ê_k
   let k = 2;
   let sign = 1;
   if (face === CHIP_TOP) {
@@ -318,33 +329,33 @@ function stepInChip(): number {
   return face === CHIP_TOP ? ESCAPED_CHIP_TOP : ESCAPED_CHIP_SIDE;
 }
 
-/** One step in the encapsulant: to the nearest of chip, base plane and outer surface. */
+/** One step in the encapsulant: to the nearest of chip, base plane and outer surface; the base reflects here. */
 function stepInEncapsulant(): number {
   let t = Infinity;
-  let surface = boxEntry(ray, box, hit);
-  if (surface !== SURFACE_NONE) t = hit[0];
+  let hitSurface = boxEntry(ray, box, hit);
+  if (hitSurface !== SURFACE_NONE) t = hit[0];
   const dz = ray[5];
   if (dz < 0) {
     const tBase = -ray[2] / dz;
     if (tBase < t) {
       t = tBase;
-      surface = BASE;
+      hitSurface = BASE;
     }
   }
   if (shape === SHAPE_DOME) {
     spheroidExit(ray, shell, hit);
     if (hit[0] < t) {
       t = hit[0];
-      surface = DOME;
+      hitSurface = DOME;
     }
   } else {
     const wall = cylinderExit(ray, shell, hit);
     if (wall !== SURFACE_NONE && hit[0] < t) {
       t = hit[0];
-      surface = wall;
+      hitSurface = wall;
     }
   }
-  if (surface === SURFACE_NONE || !(t < Infinity)) return GEOMETRY_ERROR;
+  if (hitSurface === SURFACE_NONE || !(t < Infinity)) return GEOMETRY_ERROR;
   // Beer–Lambert in the encapsulant
   const alpha = alphaOf[ENCAPSULANT];
   if (alpha > 0) {
@@ -357,26 +368,32 @@ function stepInEncapsulant(): number {
   ray[2] += t * dz;
 
   // Base plane beside the chip
-  if (surface === BASE) {
+  if (hitSurface === BASE) {
     ray[2] = 0;
     return baseEvent(ENCAPSULANT) ? GO_ON : ABSORBED_BASE;
   }
+  surface = hitSurface;
+  return AT_SURFACE;
+}
 
+/** The event at the surface the last encapsulant step reached: a chip face or the outer surface. */
+function encapsulantSurfaceEvent(): number {
+  const hitSurface = surface;
   normal[0] = 0;
   normal[1] = 0;
   normal[2] = 0;
   // Chip face seen from outside: snap onto it; the face's outward normal faces the ray
-  if (surface <= CHIP_Y_NEG) {
-    if (surface === CHIP_TOP) {
+  if (hitSurface <= CHIP_Y_NEG) {
+    if (hitSurface === CHIP_TOP) {
       ray[2] = box[2];
       normal[2] = 1;
-    } else if (surface === CHIP_X_POS) {
+    } else if (hitSurface === CHIP_X_POS) {
       ray[0] = box[0];
       normal[0] = 1;
-    } else if (surface === CHIP_X_NEG) {
+    } else if (hitSurface === CHIP_X_NEG) {
       ray[0] = -box[0];
       normal[0] = -1;
-    } else if (surface === CHIP_Y_POS) {
+    } else if (hitSurface === CHIP_Y_POS) {
       ray[1] = box[1];
       normal[1] = 1;
     } else {
@@ -387,7 +404,7 @@ function stepInEncapsulant(): number {
   }
 
   // Outer surface, met from inside: the inward unit normal faces the ray
-  if (surface === DOME) {
+  if (hitSurface === DOME) {
     // outward ∇(x²/R² + y²/R² + z²/h²) ∝ (x/R², y/R², z/h²)
     const gx = ray[0] * invR2;
     const gy = ray[1] * invR2;
@@ -396,7 +413,7 @@ function stepInEncapsulant(): number {
     normal[0] = gx * inv;
     normal[1] = gy * inv;
     normal[2] = gz * inv;
-  } else if (surface === CYLINDER_SIDE) {
+  } else if (hitSurface === CYLINDER_SIDE) {
     const inv = -1 / Math.sqrt(ray[0] * ray[0] + ray[1] * ray[1]);
     normal[0] = ray[0] * inv;
     normal[1] = ray[1] * inv;
@@ -407,7 +424,7 @@ function stepInEncapsulant(): number {
   const outcome = interfaceEvent(ENCAPSULANT, OUTSIDE);
   if (outcome === TIR) outerTir++;
   if (outcome !== TRANSMITTED) return GO_ON;
-  return surface === DOME ? ESCAPED_DOME : surface === CYLINDER_TOP ? ESCAPED_CYLINDER_TOP : ESCAPED_CYLINDER_SIDE;
+  return hitSurface === DOME ? ESCAPED_DOME : hitSurface === CYLINDER_TOP ? ESCAPED_CYLINDER_TOP : ESCAPED_CYLINDER_SIDE;
 }
 
 /** Histogram bin of an escape direction: ⌊θ in degrees⌋, θ = acos(dz), clamped to 0..179. */
@@ -441,7 +458,8 @@ function runRays(rays: number, maxEvents: number, histogram: Float64Array, onPro
         break;
       }
       rayEvents++;
-      const step = inChip ? stepInChip() : stepInEncapsulant();
+      let step = inChip ? stepInChip() : stepInEncapsulant();
+      if (step === AT_SURFACE) step = inChip ? chipWallEvent() : encapsulantSurfaceEvent();
       if (step === GO_ON) continue;
       if (step === ENTER_ENCAPSULANT) {
         inChip = false;
