@@ -4,10 +4,11 @@ import * as stack from './commands/stack';
 import * as dome from './commands/dome';
 import * as material from './commands/material';
 import * as trace from './commands/trace';
+import * as claim from './commands/claim';
 
 type Command = { summary: string; help: string; run: (argv: string[]) => Promise<void> | void };
 
-const commands: Record<string, Command> = { escape, stack, dome, material, trace };
+const commands: Record<string, Command> = { escape, stack, dome, material, trace, claim };
 
 function usage(): string {
   const lines = ['outcouple — LED package light extraction from the command line', '', 'Commands:'];

@@ -104,16 +104,17 @@ const value = (valid: fc.Arbitrary<string>) =>
 /** argv for one command: a random subset of its options with values, plus stray words and unknown options. */
 function argvFor(spec: Record<string, fc.Arbitrary<string> | null>, extra: fc.Arbitrary<string[]> = fc.constant([])): fc.Arbitrary<string[]> {
   const names = Object.keys(spec);
-  const pair = fc.constantFrom(...names).chain((name) => {
+  const pair: fc.Arbitrary<string[]> = fc.constantFrom(...names).chain((name): fc.Arbitrary<string[]> => {
     const arb = spec[name];
     return arb === null ? fc.constant([`--${name}`]) : arb.map((v) => [`--${name}`, v]);
   });
-  const stray = fc.oneof(
-    fc.constantFrom(['--nope'], ['-x'], ['--'], ['stray'], ['--json=1'], ['--rays'], ['--layer'], ['--__proto__', '1'], ['-'], ['--help']),
+  const stray: fc.Arbitrary<string[]> = fc.oneof(
+    fc.constantFrom<string[]>(['--nope'], ['-x'], ['--'], ['stray'], ['--json=1'], ['--rays'], ['--layer'], ['--__proto__', '1'], ['-'], ['--help']),
     fc.string({ maxLength: 6 }).map((s) => [s])
   );
+  const noStray: fc.Arbitrary<string[]> = fc.constant([]);
   return fc
-    .tuple(fc.array(pair, { maxLength: 6 }), fc.oneof({ weight: 4, arbitrary: fc.constant([]) }, { weight: 1, arbitrary: stray }), fc.boolean(), extra)
+    .tuple(fc.array(pair, { maxLength: 6 }), fc.oneof({ weight: 4, arbitrary: noStray }, { weight: 1, arbitrary: stray }), fc.boolean(), extra)
     .map(([pairs, strays, json, more]) => [...pairs.flat(), ...strays, ...(json ? ['--json'] : []), ...more]);
 }
 

@@ -14,11 +14,11 @@ export const SEED = 20_261_201;
 /** Run counts. Sized so the whole tier stays well under a minute on a 2-core machine. */
 export const RUNS = {
   /** Cheap closed-form checks (one Fresnel call, one stack). */
-  many: 5000,
+  many: 3000,
   /** Checks that integrate over angle or trace a few thousand rays. */
   some: 1000,
-  /** Fuzzing an entry point with generated hostile input. */
-  fuzz: 3000
+  /** Fuzzing an entry point with generated hostile input (several properties per entry point). */
+  fuzz: 2000
 } as const;
 
 /** Runs `property` with the tier's seed and `numRuns` cases and prints "property <name>: N cases". */

@@ -24,7 +24,7 @@ export const NAV_PAGES: readonly NavPage[] = [
     blurb: 'Gain from a dome encapsulant, the dome size that traps no light, and the package ray trace.'
   },
   { path: '/materials', label: 'Materials', blurb: 'The refractive index library, with sources and valid ranges.' },
-  { path: '/compare', label: 'Compare', blurb: 'Two or more package variants side by side.' },
+  { path: '/compare', label: 'Compare', blurb: 'Every encapsulant in the library ranked for this chip and dome.' },
   {
     path: '/claim',
     label: 'Claim check',
