@@ -1,9 +1,10 @@
 /**
  * The command line under generated argv, run in-process through main(argv) with stdout and stderr
- * captured. Contract (src/cli/main.ts): exit code 0 or 2, never 1 (unexpected failure); on 2 exactly
- * one line on stderr, "outcouple <command>: …", naming what was wrong, no stack trace; on 0 nothing on
- * stderr; never NaN or Infinity in the output (in JSON a non-finite number would print as null, so
- * nulls are allowed only where a field is documented as nullable).
+ * captured, for every command (escape, stack, dome, material, claim, trace). Contract (src/cli/main.ts):
+ * exit code 0 or 2, never 1 (unexpected failure); on 2 exactly one line on stderr, "outcouple <command>:
+ * …", naming what was wrong, no stack trace; on 0 nothing on stderr; never NaN or Infinity in the
+ * output (in JSON a non-finite number would print as null, so nulls are allowed only where a field is
+ * documented as nullable).
  *
  * Option values mix valid ones with hostile ones (NaN, ±Infinity, negative, huge, empty, 100 000
  * characters, control characters, prototype-pollution words, unknown options). Trace runs are kept
@@ -21,7 +22,7 @@ import { demoScenario } from '../../src/lib/scenario/defaults';
 import { checkAsync, deeplyNested, prototypePolluted, RUNS } from './support';
 
 /** Cases per command (trace gets fewer: each case traces up to 2000 rays). */
-const CASES = RUNS.fuzz / 3;
+const CASES = Math.round(RUNS.fuzz / 3);
 /** Trace runs with only valid options (each traces 1000–2000 rays to the end). */
 const VALID_TRACE_CASES = 60;
 
@@ -49,7 +50,7 @@ async function runMain(argv: string[]): Promise<Run> {
 }
 
 /** JSON fields a command documents as nullable (null means "not applicable", not a failed number). */
-const NULLABLE = new Set(['criticalAngleDeg', 'radiusMm', 'noTir', 'warning', 'beamAngleDeg', 'onAxisVsLambertian', 'trappedIn']);
+const NULLABLE = new Set(['criticalAngleDeg', 'radiusMm', 'noTir', 'warning', 'beamAngleDeg', 'onAxisVsLambertian', 'trappedIn', 'nEnc']);
 
 function nullsOutsideAllowList(value: unknown, key = '', out: string[] = []): string[] {
   if (value === null && !NULLABLE.has(key)) out.push(key);
@@ -75,15 +76,27 @@ function expectContract(command: string, argv: string[], r: Run): void {
     expect(r.stderr.endsWith('\n') && r.stderr.indexOf('\n') === r.stderr.length - 1, `${where}: one line on stderr, got ${JSON.stringify(r.stderr.slice(0, 300))}`).toBe(true);
     expect(r.stderr.startsWith(`outcouple ${command}: `), `${where}: ${r.stderr.slice(0, 200)}`).toBe(true);
     expect(r.stderr.length, `${where}: message length`).toBeLessThanOrEqual(400);
-    refusals.add(r.stderr.slice(`outcouple ${command}: `.length).split(/[ :]/)[0]);
+    const message = r.stderr.slice(`outcouple ${command}: `.length);
+    refusals.add(message.split(/[ :]/)[0]);
+    // what was wrong is named: an option, an argument ("<command>: unexpected argument …", unknown
+    // option), or the material the user named
+    const optionWords = argv.filter((a) => a.startsWith('--')).map((a) => a.slice(2));
+    const names =
+      /--[a-z]/.test(message) ||
+      message.startsWith(`${command}: `) ||
+      optionWords.some((w) => w !== '' && message.startsWith(`${w} `)) || // a core message naming the option's value ("value (…) must be")
+      /^material: |its dispersion formula|valid range/.test(message) ||
+      /no ray escaped/.test(message);
+    expect(names, `${where}: the message names no option: ${message.slice(0, 200)}`).toBe(true);
   } else {
     expect(r.stderr, `${where}: nothing on stderr on success`).toBe('');
   }
   expect(r.stdout, `${where}: stdout`).not.toMatch(/\bNaN\b|\bInfinity\b/);
-  // --json asks for JSON unless it comes after "--" (then it is a plain word) or help was asked for
+  // --json asks for JSON unless it comes after "--" (then it is a plain word); main shows help for
+  // --help or -h anywhere, even after "--"
   const end = argv.includes('--') ? argv.indexOf('--') : argv.length;
   const options = argv.slice(0, end);
-  if (r.code === 0 && options.includes('--json') && !options.includes('--help') && !options.includes('-h')) {
+  if (r.code === 0 && options.includes('--json') && !argv.includes('--help') && !argv.includes('-h')) {
     const parsed = JSON.parse(r.stdout);
     expect(nullsOutsideAllowList(parsed), `${where}: null numbers`).toEqual([]);
   }
@@ -132,6 +145,13 @@ const stackArgv = argvFor(
   { 'n-in': index, in: index, 'n-out': index, out: index, layer, wavelength, angle: value(number(0, 90)), incoherent: null, extraction: null, json: null },
   fc.array(layer, { maxLength: 4 }).map((ls) => ls.flatMap((l) => ['--layer', l]))
 );
+// the three options a claim needs come first, so generated ones (later on the line) override them
+const claimArgv = argvFor({
+  kind: value(fc.constantFrom('extraction', 'gain', 'coating')),
+  value: value(fc.oneof(number(0, 1), number(0, 10), number(-1, 2))),
+  'n-chip': index, 'chip-material': index, structure: value(fc.constantFrom('planar', 'textured', 'thin-film', 'unknown')),
+  'n-enc': index, 'enc-material': index, 'n-out': value(number(1, 3)), faces: value(fc.constantFrom('1', '5', '6')), wavelength, json: null
+}).map((argv) => ['--kind', 'extraction', '--value', '0.5', ...(argv.includes('--chip-material') ? [] : ['--n-chip', '2.45']), ...argv]);
 const materialArgv = fc
   .tuple(argvFor({ wavelength, list: null, json: null }), fc.array(value(fc.constantFrom('GaN', 'sio2', 'Ag', 'air', 'tio2-rutile', 'gaas')), { maxLength: 2 }))
   .map(([argv, names]) => [...names, ...argv]);
@@ -210,7 +230,8 @@ describe('main(argv) under generated argv', () => {
     ['escape', escapeArgv],
     ['dome', domeArgv],
     ['stack', stackArgv],
-    ['material', materialArgv]
+    ['material', materialArgv],
+    ['claim', claimArgv]
   ] as const) {
     it(`${command}: exits 0 or 2 with one clean line on stderr, never NaN (${CASES} cases)`, async () => {
       await checkAsync(
@@ -304,7 +325,9 @@ describe('command line limits', () => {
   it('regression: a denormal chip index is refused, not printed as "NaN %"', async () => {
     // found by fuzzing: "stack --n-in 1e-320" printed Rp, R, T and A as NaN
     const r = await runMain(['stack', '--n-in', '1e-320', '--layer', 'GaN:2.7e-322']);
-    expect(r).toEqual({ code: 2, stdout: '', stderr: 'outcouple stack: nIn must be a finite number ≥ 1e-6 (got 1e-320)\n' });
+    expect(r).toEqual({ code: 2, stdout: '', stderr: 'outcouple stack: --n-in must be a finite number ≥ 1e-6 (got 1e-320)\n' });
+    const layer = await runMain(['stack', '--n-in', '2.45', '--layer', '1.5:10', '--layer', '1e-300:10']);
+    expect(layer.stderr).toBe('outcouple stack: --layer 2 n must be a finite number ≥ 1e-6 (got 1e-300)\n');
   });
 
   it('regression: a 100 000-character index is quoted in at most 40 characters', async () => {

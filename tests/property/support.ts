@@ -21,14 +21,21 @@ export const RUNS = {
   fuzz: 2000
 } as const;
 
+/** fast-check never stops on a fractional run count (it counts up to exactly numRuns): refuse one. */
+function requireRuns(numRuns: number): void {
+  if (!Number.isInteger(numRuns) || numRuns < 1) throw new RangeError(`numRuns must be a whole number ≥ 1 (got ${numRuns})`);
+}
+
 /** Runs `property` with the tier's seed and `numRuns` cases and prints "property <name>: N cases". */
 export function check<Ts>(name: string, property: fc.IProperty<Ts>, numRuns: number): void {
+  requireRuns(numRuns);
   fc.assert(property, { seed: SEED, numRuns });
   console.log(`property ${name}: ${numRuns} cases, seed ${SEED}`);
 }
 
 /** Async version of {@link check}. */
 export async function checkAsync<Ts>(name: string, property: fc.IAsyncProperty<Ts>, numRuns: number): Promise<void> {
+  requireRuns(numRuns);
   await fc.assert(property, { seed: SEED, numRuns });
   console.log(`property ${name}: ${numRuns} cases, seed ${SEED}`);
 }

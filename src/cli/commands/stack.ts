@@ -49,7 +49,25 @@ function parseLayer(text: string, position: number, wavelengthNm: number, incohe
   return { n: index.n, k: index.k, thicknessNm: incoherent ? thickness * 1000 : thickness };
 }
 
+/** A core RangeError in the terms the user typed: nIn → --n-in, nOut → --n-out, layers[i].n → --layer i+1 n. */
+function inOptionTerms(error: unknown): unknown {
+  if (!(error instanceof RangeError)) return error;
+  const message = error.message
+    .replace(/\bnIn\b/g, '--n-in')
+    .replace(/\bnOut\b/g, '--n-out')
+    .replace(/\blayers\[(\d+)\]\.(\w+)/g, (_match, i: string, field: string) => `--layer ${Number(i) + 1} ${field === 'thicknessNm' ? 'thickness' : field}`);
+  return new CliError(message);
+}
+
 export function run(argv: string[]): void {
+  try {
+    compute(argv);
+  } catch (error) {
+    throw inOptionTerms(error);
+  }
+}
+
+function compute(argv: string[]): void {
   const { values, positionals } = parseOptions(argv, options, 'stack');
   if (positionals.length) throw new CliError(`stack: unexpected argument '${truncate(positionals[0])}'`);
   const wavelengthNm = numberOption(values, 'wavelength', 200, 2500, 550);

@@ -10,6 +10,7 @@ import { domeEstimate } from '../optics/index';
 import { indexAt } from '../materials/dispersion';
 import type { Material, MaterialCategory, MaterialNote, Provenance } from '../materials/types';
 import { weightedAverage, type Spectrum } from '../photometry/index';
+import { bandInterpolant } from '../photometry/band-interpolant';
 import { encapsulantNotes } from './encapsulant-notes';
 
 /** Where an index comes from: a fixed number (typed) or a material's dispersion. */
@@ -88,8 +89,6 @@ export interface EncapsulantRanking {
 }
 
 const SIZE_MAX_MM = 1000;
-/** Nodes at which η_dome is evaluated across a spectrum before linear interpolation. */
-const SPECTRAL_NODES = 17;
 
 function positive(field: string, value: unknown, max: number): number {
   if (typeof value !== 'number' || !(value > 0 && value <= max)) {
@@ -108,24 +107,6 @@ function indexOf(source: IndexSource, wavelengthNm: number, warnings: string[] |
     throw new RangeError(`${field} index must be a number in [1, 6] (got ${String(source.n)})`);
   }
   return source.n;
-}
-
-/**
- * f(λ) evaluated at SPECTRAL_NODES even nodes over the spectrum's span and interpolated linearly
- * between them: indices vary slowly with λ, so this keeps a 241-sample band cheap.
- */
-function smoothOverBand(spectrum: Spectrum, f: (nm: number) => number): (nm: number) => number {
-  const w = spectrum.wavelengthNm;
-  const lo = w[0];
-  const hi = w[w.length - 1];
-  if (w.length <= SPECTRAL_NODES || !(hi > lo)) return f;
-  const step = (hi - lo) / (SPECTRAL_NODES - 1);
-  const values = Array.from({ length: SPECTRAL_NODES }, (_, i) => f(i === SPECTRAL_NODES - 1 ? hi : lo + i * step));
-  return (nm) => {
-    const t = Math.min(SPECTRAL_NODES - 1, Math.max(0, (nm - lo) / step));
-    const i = Math.min(SPECTRAL_NODES - 2, Math.floor(t));
-    return values[i] + (t - i) * (values[i + 1] - values[i]);
-  };
 }
 
 /**
@@ -171,7 +152,7 @@ export function rankEncapsulants(input: RankInput): EncapsulantRanking {
       let luminous: number | null = null;
       if (spectrum) {
         // η_dome(λ) with every index at λ; warnings of the band are the design-wavelength ones plus the chip's
-        const f = smoothOverBand(spectrum, (nm) =>
+        const f = bandInterpolant(spectrum, (nm) =>
           dome(indexOf(input.chip, nm, null, 'Chip'), indexAt(material, nm).n, indexOf(input.outside, nm, null, 'Outside medium')).etaDome
         );
         radiometric = weightedAverage(spectrum, f, 'radiometric').value;
