@@ -11,7 +11,7 @@ export function parseOptions(argv: string[], options: OptionSpec, command: strin
     return { values: values as ParsedValues, positionals };
   } catch (error) {
     const message = error instanceof Error ? error.message.split('\n')[0] : String(error);
-    throw new CliError(`${command}: ${message.replace(/\. To specify.*$/, '')} (see 'outcouple ${command} --help')`);
+    throw new CliError(`${message.replace(/\. To specify.*$/, '')} (see 'outcouple ${command} --help')`);
   }
 }
 

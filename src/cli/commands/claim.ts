@@ -46,6 +46,7 @@ export function run(argv: string[]): void {
   const kind = choiceOption<ClaimKind>(values, 'kind', CLAIM_KINDS, 'extraction');
   const [min, max] = VALUE_RANGE[kind];
   const value = numberOption(values, 'value', min, max);
+  if (kind !== 'coating' && value === 0) throw new CliError(`--value must be above 0 and at most ${max} for a ${kind} claim (got 0)`);
   const structure = choiceOption<ChipStructure>(values, 'structure', CHIP_STRUCTURES, 'unknown');
   const wavelengthNm = numberOption(values, 'wavelength', 200, 2500, 450);
   const facesText = choiceOption(values, 'faces', ['1', '5', '6'] as const, '6');

@@ -6,15 +6,14 @@
 import { encapsulantCandidates, rankEncapsulants, type EncapsulantRanking, type IndexSource, type RankOrder } from '$lib/decisions';
 import { findMaterial, listMaterials } from '$lib/materials';
 import type { Material } from '$lib/materials/types';
-import { gaussianSpectrum, tableSpectrum, type Spectrum } from '$lib/photometry';
+import type { Spectrum } from '$lib/photometry';
+import { scenarioSpectrum } from '$lib/photometry/scenario-spectrum';
 import type { ResolvedScenario } from '$lib/scenario/resolve';
 import type { EmissionSpec, MediumSpec, Scenario } from '$lib/scenario/schema';
 
 /** The emission as a sampled spectrum, or null for a single wavelength (nothing to weight). */
 export function emissionSpectrum(emission: EmissionSpec): Spectrum | null {
-  if (emission.kind === 'gaussian') return gaussianSpectrum(emission.peakNm, emission.fwhmNm);
-  if (emission.kind === 'table') return tableSpectrum(emission.rows);
-  return null;
+  return emission.kind === 'single' ? null : scenarioSpectrum(emission);
 }
 
 function source(spec: MediumSpec, n: number): IndexSource {

@@ -54,6 +54,6 @@ describe('outcouple claim', () => {
     expect(() => capture(['--kind', 'gain', '--value', '2', '--n-chip', '2.45'])).toThrow(/--n-enc \(or --enc-material\) is required for a gain claim/);
     expect(() => capture(['--kind', 'gain', '--value', '2', '--n-chip', '2.45', '--n-enc', '1.4', '--faces', '4'])).toThrow(/--faces must be one of 1, 5, 6/);
     expect(() => capture(['--kind', 'extraction', '--value', '0.5', '--n-chip', '9'])).toThrow(CliError);
-    expect(() => capture(['--kind', 'extraction', '--value', '0', '--n-chip', '2.45'])).toThrow(RangeError);
+    expect(() => capture(['--kind', 'extraction', '--value', '0', '--n-chip', '2.45'])).toThrow(/--value must be above 0/);
   });
 });
