@@ -45,13 +45,15 @@ export function run(argv: string[]): void {
     normalReflectance: cone.normalReflectance,
     chipEscapeFraction: chipEscape.fraction,
     conesOverlap: chipEscape.conesOverlap,
-    warnings: [chip.warning, outside.warning, chipEscape.conesOverlap ? chipEscape.note : undefined].filter(Boolean)
+    warnings: [chip.warning, outside.warning, chipEscape.conesOverlap ? chipEscape.note : undefined,
+      outside.n >= chip.n ? 'the surrounding index is not below the chip index: no critical angle, and the small-angle form does not apply' : undefined
+    ].filter(Boolean)
   };
   const rows: Row[] = [
     ['chip index', chip.n], ['surrounding index', outside.n],
     ['critical angle', result.criticalAngleDeg === null ? 'none (no total internal reflection)' : result.criticalAngleDeg.toFixed(2), result.criticalAngleDeg === null ? '' : '°'],
     ['escape, geometric (1 − cos θc)/2', percent(cone.geometric)],
-    ['escape, small-angle n²out/4n²in', percent(cone.smallAngle)],
+    ['escape, small-angle n²out/4n²in', outside.n >= chip.n ? 'not applicable' : percent(cone.smallAngle)],
     ['escape, Fresnel-weighted', percent(cone.fresnel)],
     ['  s-polarised', percent(cone.fresnelS)], ['  p-polarised', percent(cone.fresnelP)],
     ['normal reflectance', percent(cone.normalReflectance)],

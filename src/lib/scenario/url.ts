@@ -6,27 +6,10 @@
 import { demoScenario } from './defaults';
 import { readScenario } from './read-scenario';
 import { SCENARIO_VERSION, type Scenario } from './schema';
+import { fromBase64Url, toBase64Url } from './base64url';
 
 /** Name of the query parameter that carries the scenario. */
 export const SCENARIO_PARAM = 's';
-
-/** Encodes UTF-8 bytes of a string as base64url without padding. */
-function toBase64Url(text: string): string {
-  const bytes = new TextEncoder().encode(text);
-  let binary = '';
-  for (let i = 0; i < bytes.length; i++) binary += String.fromCharCode(bytes[i]);
-  return btoa(binary).replace(/\+/g, '-').replace(/\//g, '_').replace(/=+$/, '');
-}
-
-/** Decodes base64url (padding optional) to a UTF-8 string; throws on bad input (caught by the caller). */
-function fromBase64Url(code: string): string {
-  if (!/^[A-Za-z0-9_-]*$/.test(code)) throw new Error('not base64url');
-  const b64 = code.replace(/-/g, '+').replace(/_/g, '/') + '==='.slice((code.length + 3) % 4);
-  const binary = atob(b64);
-  const bytes = new Uint8Array(binary.length);
-  for (let i = 0; i < binary.length; i++) bytes[i] = binary.charCodeAt(i);
-  return new TextDecoder('utf-8', { fatal: true }).decode(bytes);
-}
 
 /** The value of the `s` parameter for a scenario: "1.eyJ2ZXJzaW9uIjox…". */
 export function encodeScenarioParam(scenario: Scenario): string {

@@ -4,24 +4,9 @@
  * the stack to show instead.
  */
 import { checkStack, defaultStack, STACK_VERSION, type StackDoc } from './stack-doc';
+import { fromBase64Url, toBase64Url } from '$lib/scenario/base64url';
 
 export const STACK_PARAM = 'stack';
-
-function toBase64Url(text: string): string {
-  const bytes = new TextEncoder().encode(text);
-  let binary = '';
-  for (let i = 0; i < bytes.length; i++) binary += String.fromCharCode(bytes[i]);
-  return btoa(binary).replace(/\+/g, '-').replace(/\//g, '_').replace(/=+$/, '');
-}
-
-function fromBase64Url(code: string): string {
-  if (!/^[A-Za-z0-9_-]*$/.test(code)) throw new Error('not base64url');
-  const b64 = code.replace(/-/g, '+').replace(/_/g, '/') + '==='.slice((code.length + 3) % 4);
-  const binary = atob(b64);
-  const bytes = new Uint8Array(binary.length);
-  for (let i = 0; i < binary.length; i++) bytes[i] = binary.charCodeAt(i);
-  return new TextDecoder('utf-8', { fatal: true }).decode(bytes);
-}
 
 /** The `stack` parameter's value for a stack: "1.eyJ2ZXJzaW9uIjox…". */
 export function encodeStackParam(doc: StackDoc): string {
