@@ -3,7 +3,8 @@
  * chunks into one contiguous range per worker (navigator.hardwareConcurrency, at most 8), merges the
  * tallies — identical to traceSync for any worker count — and reports progress about 20 times a second.
  * cancel() terminates the workers at once and rejects with an AbortError; a failing worker rejects
- * with a message naming the failure, and the partial result is discarded.
+ * with a message naming the failure, and the partial result is discarded. A worker that dies silently
+ * (no error event, no message for STALL_MS) is treated as a failure too, so a run never hangs.
  */
 import { chunkPlan } from './chunk-plan';
 import { DEFAULT_MAX_EVENTS, validateTraceOptions, validateTracePackage, type TraceOptions, type TracePackage } from './package-spec';
@@ -19,6 +20,8 @@ export interface TraceJob {
 
 const MAX_WORKERS = 8;
 const PROGRESS_MS = 50;
+/** Silence after which a running trace counts as failed; a chunk of 16 384 rays takes well under a second. */
+const STALL_MS = 30_000;
 
 /**
  * Starts a trace on worker threads.
@@ -45,7 +48,12 @@ export function startTrace(
   let settle: { resolve(t: Tally): void; reject(e: Error): void } = { resolve() {}, reject() {} };
   const result = new Promise<Tally>((resolve, reject) => (settle = { resolve, reject }));
 
+  let lastHeard = Date.now();
+  const watchdog = setInterval(() => {
+    if (Date.now() - lastHeard > STALL_MS) stop(new Error(`trace worker failed: no progress for ${STALL_MS / 1000} s (the worker stopped)`));
+  }, 1000);
   const stop = (error: Error | null) => {
+    clearInterval(watchdog);
     // 'cancel' first: harmless before terminate, and it stops a worker that outlives terminate()
     pool.forEach((w, id) => (w.postMessage({ type: 'cancel', id } satisfies TraceRequest), w.terminate()));
     pool.length = 0;
@@ -55,6 +63,7 @@ export function startTrace(
     const worker = new Worker(new URL('./trace-worker.ts', import.meta.url), { type: 'module' });
     pool.push(worker);
     worker.onmessage = (event: MessageEvent<TraceReply>) => {
+      lastHeard = Date.now();
       const reply = event.data;
       if (reply.type === 'error') return stop(new Error(`trace worker failed: ${reply.message}`));
       progress[w] = reply.type === 'done' ? reply.tally.launched : reply.raysDone;
@@ -72,6 +81,7 @@ export function startTrace(
         settle.resolve(total);
       }
     };
+    worker.onmessageerror = () => stop(new Error('trace worker failed: a message could not be read'));
     worker.onerror = (event: ErrorEvent) => {
       event.preventDefault();
       stop(new Error(`trace worker failed: ${event.message || 'the worker script could not run'}`));
