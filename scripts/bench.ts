@@ -1,6 +1,6 @@
 /**
  * Benchmark of the Monte Carlo package tracer: three fixed packages (bare chip, hemispherical dome,
- * cylinder), each traced on one thread and on all cores. Prints rays/s and events/s, rays per CPU
+ * cylinder), and the dome again with polarisation tracked, each traced on one thread and on all cores. Prints rays/s and events/s, rays per CPU
  * second (one thread), and the extraction with its standard error. The all-core runs use a thread pool
  * started and warmed up before timing; its start-up time is printed once.
  *
@@ -18,13 +18,13 @@ import { traceSync } from '../src/lib/trace/trace';
 
 const TARGET_DOME_RAYS_PER_S = 2.5e6;
 
-function packageWith(encapsulant: TracePackage['encapsulant']): TracePackage {
+function packageWith(encapsulant: TracePackage['encapsulant'], polarization: TracePackage['polarization'] = 'average'): TracePackage {
   return {
     chip: { widthMm: 1, lengthMm: 1, heightMm: 0.15, n: 2.45, absorptionPerMm: 0.5, emitterZMm: 0.1, emission: 'plane' },
     base: { kind: 'reflectance', reflectance: 0.92 },
     encapsulant,
     outsideN: 1,
-    polarization: 'average'
+    polarization
   };
 }
 
@@ -37,6 +37,11 @@ const scenarios: { name: string; pkg: TracePackage }[] = [
   {
     name: 'cylinder',
     pkg: packageWith({ shape: 'cylinder', radiusMm: 2.5, heightMm: 1, n: 1.41, absorptionPerMm: 0.001 })
+  },
+  {
+    // The same dome with each ray's polarisation state followed through every event (slower, see DEVELOPERS.md)
+    name: 'dome, pol. tracked',
+    pkg: packageWith({ shape: 'dome', radiusMm: 2.5, heightMm: 2.5, n: 1.41, absorptionPerMm: 0.001 }, 'track')
   }
 ];
 

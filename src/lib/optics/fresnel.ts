@@ -81,6 +81,76 @@ export function fresnelReal(cosThetaI: number, etaI: number, etaT: number, out: 
   return true;
 }
 
+/** Length of the buffer {@link fresnelAmplitudesReal} fills. */
+export const FRESNEL_AMPLITUDES_LENGTH = 8;
+
+/**
+ * Complex amplitude coefficients of a lossless dielectric interface, including the phase shifts of
+ * total internal reflection. Hot path: allocates nothing; agrees with {@link fresnelComplex} for k = 0.
+ *
+ *   below the critical angle (all real): rs, rp as in fresnelReal,
+ *     ts = 2 etaI cosθi/(etaI cosθi + etaT cosθt),  tp = 2 etaI cosθi/(etaT cosθi + etaI cosθt)
+ *   beyond it, with a = etaI cosθi, q = √(etaI² sin²θi − etaT²), c = etaT² cosθi, e = etaI q:
+ *     rs = (a − iq)/(a + iq),  rp = (c − ie)/(c + ie)  (|rs| = |rp| = 1),  ts = tp = 0 (no travelling wave)
+ *
+ * @param cosThetaI cosine of the angle of incidence, [0, 1]
+ * @param etaI index on the incident side (> 0); @param etaT index on the far side (> 0)
+ * @param out receives Re rs, Im rs, Re rp, Im rp, Re ts, Im ts, Re tp, Im tp; length ≥ 8
+ * @returns true if light is transmitted; false on total internal reflection (exactly critical included)
+ * @example fresnelAmplitudesReal(1, 1, 1.5, out) // out[0] = −0.2, out[2] = +0.2 (rp = −rs at normal incidence)
+ * @see M. Born, E. Wolf, Principles of Optics, §1.5.2 (coefficients) and §1.5.4 (total reflection)
+ */
+export function fresnelAmplitudesReal(cosThetaI: number, etaI: number, etaT: number, out: Float64Array): boolean {
+  out[0] = cosThetaI;
+  out[1] = etaI;
+  out[2] = etaT;
+  return fresnelAmplitudesAt(out, out);
+}
+
+/**
+ * {@link fresnelAmplitudesReal} with its numbers in an array — inp = [cos θi, etaI, etaT] — so that a
+ * call the engine does not inline boxes nothing (the polarisation-tracking tracer's hot path).
+ * inp may be out.
+ */
+export function fresnelAmplitudesAt(inp: Float64Array, out: Float64Array): boolean {
+  const cosI = checkCos(inp[0]);
+  const etaI = inp[1];
+  const etaT = inp[2];
+  checkEta('etaI', etaI);
+  checkEta('etaT', etaT);
+  out[1] = out[3] = out[5] = out[7] = 0;
+  // Index matched: no interface (also the 0/0 limit at grazing incidence)
+  if (etaI === etaT) {
+    out[0] = out[2] = 0;
+    out[4] = out[6] = 1;
+    return true;
+  }
+  const sin2I = 1 - cosI * cosI;
+  const eta = etaI / etaT;
+  const sin2T = eta * eta * sin2I;
+  if (sin2T >= 1) {
+    const a = etaI * cosI;
+    const q = Math.sqrt(etaI * etaI * sin2I - etaT * etaT);
+    const c = etaT * etaT * cosI;
+    const e = etaI * q;
+    // (x − iy)/(x + iy) = (x² − y² − 2ixy)/(x² + y²)
+    out[0] = (a * a - q * q) / (a * a + q * q);
+    out[1] = (-2 * a * q) / (a * a + q * q);
+    out[2] = (c * c - e * e) / (c * c + e * e);
+    out[3] = (-2 * c * e) / (c * c + e * e);
+    out[4] = out[6] = 0;
+    return false;
+  }
+  const cosT = Math.sqrt(1 - sin2T);
+  const ds = etaI * cosI + etaT * cosT;
+  const dp = etaT * cosI + etaI * cosT;
+  out[0] = (etaI * cosI - etaT * cosT) / ds;
+  out[2] = (etaT * cosI - etaI * cosT) / dp;
+  out[4] = (2 * etaI * cosI) / ds;
+  out[6] = (2 * etaI * cosI) / dp;
+  return true;
+}
+
 const unpolScratch = new Float64Array(3);
 
 /**
@@ -234,37 +304,78 @@ export function reflectanceComplex(
   kT: number,
   out: Float64Array
 ): Float64Array {
-  const cosI = checkCos(cosThetaI);
+  mirrorIn[0] = cosThetaI;
+  mirrorIn[1] = etaI;
+  mirrorIn[2] = nT;
+  mirrorIn[3] = kT;
+  mirrorAmplitudesAt(mirrorIn, mirrorOut);
+  out[0] = mirrorOut[4];
+  out[1] = mirrorOut[5];
+  return out;
+}
+
+const mirrorIn = new Float64Array(4);
+const mirrorOut = new Float64Array(6);
+
+/** Length of the buffer {@link mirrorAmplitudesAt} fills. */
+export const MIRROR_AMPLITUDES_LENGTH = 6;
+
+/**
+ * Amplitude and power reflection coefficients of a lossless medium (index etaI) against an absorbing
+ * one N = nT + i·kT, with every number in an array — inp = [cos θi, etaI, nT, kT] — so that a call the
+ * engine does not inline boxes nothing (the tracer's metal base). Writes
+ * out = [Re rs, Im rs, Re rp, Im rp, Rs, Rp]. Same convention as {@link fresnelComplex}:
+ *
+ *   q = N cosθt = √(N² − etaI² sin²θi), the root with Im q ≥ 0 (the principal root, as Im N² ≥ 0)
+ *   rs = (etaI cosθi − q)/(etaI cosθi + q),  rp = (N² cosθi − etaI q)/(N² cosθi + etaI q)
+ *
+ * @returns out
+ * @see M. Born, E. Wolf, Principles of Optics, §1.5.2 and §14.2
+ */
+export function mirrorAmplitudesAt(inp: Float64Array, out: Float64Array): Float64Array {
+  const cosI = checkCos(inp[0]);
+  const etaI = inp[1];
+  const nT = inp[2];
+  const kT = inp[3];
   checkEta('etaI', etaI);
   checkEta('nT', nT);
   if (!(kT >= 0 && kT < Infinity)) {
     throw new RangeError(`kT must be a finite number ≥ 0 (got ${kT})`);
   }
-  propagationFactorInto(z, 14, nT, kT, etaI * Math.sqrt(1 - cosI * cosI), 0);
-  const qRe = z[14];
-  const qIm = z[15];
-
-  // s polarisation
+  // Index matched: no interface at any angle (near grazing the quotients below underflow to 0/0).
+  if (etaI === nT && kT === 0) {
+    out.fill(0);
+    return out;
+  }
+  // w = N² − etaI² sin²θi, Im w = 2 nT kT ≥ 0; principal square root, stable form (as in cSqrtInto)
+  const wRe = nT * nT - kT * kT - etaI * etaI * (1 - cosI * cosI);
+  const wIm = 2 * nT * kT;
+  const t = Math.sqrt((Math.sqrt(wRe * wRe + wIm * wIm) + Math.abs(wRe)) / 2);
+  let qRe = 0;
+  let qIm = 0;
+  if (t > 0) {
+    qRe = wRe >= 0 ? t : wIm / (2 * t);
+    qIm = wRe >= 0 ? wIm / (2 * t) : t;
+  }
+  // rs = (a − q)/(a + q) = (a − q)·conj(a + q)/|a + q|²
   const a = etaI * cosI;
   const dS = (a + qRe) * (a + qRe) + qIm * qIm;
-  const nS = (a - qRe) * (a - qRe) + qIm * qIm;
-
-  // p polarisation, multiplied through by N
+  const rsRe = dS > 0 ? (a * a - qRe * qRe - qIm * qIm) / dS : 0;
+  const rsIm = dS > 0 ? (-2 * a * qIm) / dS : 0;
+  // rp = (P − E)/(P + E) with P = N² cosθi, E = etaI q
   const pRe = (nT * nT - kT * kT) * cosI;
   const pIm = 2 * nT * kT * cosI;
   const eRe = etaI * qRe;
   const eIm = etaI * qIm;
   const dP = (pRe + eRe) * (pRe + eRe) + (pIm + eIm) * (pIm + eIm);
-  const nP = (pRe - eRe) * (pRe - eRe) + (pIm - eIm) * (pIm - eIm);
-
-  // Index matched: no interface at any angle (near grazing the sums below underflow to 0/0 or ε/ε).
-  if (etaI === nT && kT === 0) {
-    out[0] = 0;
-    out[1] = 0;
-    return out;
-  }
-  out[0] = dS > 0 ? nS / dS : 0;
-  out[1] = dP > 0 ? nP / dP : 0;
+  const rpRe = dP > 0 ? (pRe * pRe - eRe * eRe + pIm * pIm - eIm * eIm) / dP : 0;
+  const rpIm = dP > 0 ? (2 * (pIm * eRe - pRe * eIm)) / dP : 0;
+  out[0] = rsRe;
+  out[1] = rsIm;
+  out[2] = rpRe;
+  out[3] = rpIm;
+  out[4] = rsRe * rsRe + rsIm * rsIm;
+  out[5] = rpRe * rpRe + rpIm * rpIm;
   return out;
 }
 

@@ -20,8 +20,7 @@
  *   (event cap reached, or a geometry error — no surface found where one must exist — also counted in
  *   geometryErrors). One event = one segment ending on a surface (or in absorption).
  *
- * Speed: the loop allocates nothing per ray or event ('track' mode excepted: the core's complex
- * Fresnel coefficients come back as small objects). The ray lives in the module-scope Float64Array
+ * Speed: the loop allocates nothing per ray or event, in both polarisation modes. The ray lives in the module-scope Float64Array
  * `ray`; the loop's functions pass only small integers (media, faces, outcomes), never floating-point
  * numbers, which the engine would box into heap objects whenever it declines to inline a call. Each
  * step is split in two — the segment (stepInChip / stepInEncapsulant) and the surface event
@@ -32,7 +31,7 @@
  * reflection with probability R, §14.1; exponential free paths, §15.2); G. Marsaglia, "Choosing a
  * point from the surface of a sphere", Ann. Math. Stat. 43, 645 (1972) (isotropic directions).
  */
-import { fresnelComplex, fresnelReal, reflectanceComplex } from '../optics/fresnel';
+import { fresnelReal, MIRROR_AMPLITUDES_LENGTH, mirrorAmplitudesAt } from '../optics/fresnel';
 import { reflectDirection, refractDirection } from '../optics/snell';
 import { boxEntry } from './box-entry';
 import { boxExit } from './box-exit';
@@ -92,6 +91,11 @@ const direction = ray.subarray(3, 6);
 const normal = new Float64Array(3);
 const hit = new Float64Array(1);
 const fr = new Float64Array(3);
+// A metal base's inputs [cos θi, index above, n, k] and coefficients (layout of mirrorAmplitudesAt)
+const mirrorIn = new Float64Array(4);
+const mirror = new Float64Array(MIRROR_AMPLITUDES_LENGTH);
+// numbers handed to the polarisation functions (see polarization.ts: arrays, so nothing is boxed)
+const trackArgs = new Float64Array(5);
 // Chip box [a, b, H, self-hit eps, emitter height] and encapsulant shell [R, h], mm
 const box = new Float64Array(5);
 const shell = new Float64Array(2);
@@ -179,7 +183,10 @@ function launch(): void {
   ray[3] = k * u;
   ray[4] = k * v;
   ray[5] = 1 - 2 * s;
-  if (track) launchPolarization(direction, nextFloat());
+  if (track) {
+    trackArgs[0] = nextFloat();
+    launchPolarization(direction, trackArgs);
+  }
   // Optical depth to absorption, τ ~ Exp(1) by inverse transform (1 − u ∈ (0, 1]); none if nothing absorbs
   if (absorbing) ray[6] = -Math.log(1 - nextFloat());
   else ray[6] = Infinity;
@@ -198,7 +205,11 @@ function interfaceEvent(from: number, to: number): number {
   if (cosI < 0) cosI = 0;
   else if (cosI > 1) cosI = 1;
   if (track) {
-    const code = trackedInterface(direction, normal, cosI, etaI, etaT, nextFloat());
+    trackArgs[0] = cosI;
+    trackArgs[1] = etaI;
+    trackArgs[2] = etaT;
+    trackArgs[3] = nextFloat();
+    const code = trackedInterface(direction, normal, trackArgs);
     return code === TRACK_TRANSMITTED ? TRANSMITTED : code === TRACK_TIR ? TIR : REFLECTED;
   }
   // Handle total internal reflection
@@ -255,23 +266,25 @@ function trackedAxisFace(k: number, sign: number, from: number, to: number): num
 
 /** The base mirror met going down from medium `from`: true if reflected (direction replaced). */
 function baseEvent(from: number): boolean {
-  const etaI = indexOf[from];
-  const cosI = -ray[5];
+  if (metalBase) {
+    mirrorIn[0] = -ray[5];
+    mirrorIn[1] = indexOf[from];
+    mirrorIn[2] = baseN;
+    mirrorIn[3] = baseK;
+    mirrorAmplitudesAt(mirrorIn, mirror);
+  }
   if (track) {
     normal[0] = 0;
     normal[1] = 0;
     normal[2] = 1;
-    if (metalBase) {
-      const f = fresnelComplex(Math.sqrt(1 - cosI * cosI), etaI, 0, baseN, baseK);
-      return trackedMirror(direction, normal, f.rs.re, f.rs.im, f.rp.re, f.rp.im, nextFloat());
-    }
-    return trackedMirror(direction, normal, -baseAmplitude, 0, baseAmplitude, 0, nextFloat());
+    trackArgs[0] = metalBase ? mirror[0] : -baseAmplitude;
+    trackArgs[1] = metalBase ? mirror[1] : 0;
+    trackArgs[2] = metalBase ? mirror[2] : baseAmplitude;
+    trackArgs[3] = metalBase ? mirror[3] : 0;
+    trackArgs[4] = nextFloat();
+    return trackedMirror(direction, normal, trackArgs);
   }
-  let R = baseReflectance;
-  if (metalBase) {
-    reflectanceComplex(cosI, etaI, baseN, baseK, fr);
-    R = 0.5 * (fr[0] + fr[1]);
-  }
+  const R = metalBase ? 0.5 * (mirror[4] + mirror[5]) : baseReflectance;
   if (!(nextFloat() < R)) return false;
   ray[5] = -ray[5];
   return true;

@@ -4,6 +4,11 @@ import {
   fresnelReal,
   reflectanceUnpolarised,
   fresnelComplex,
+  fresnelAmplitudesAt,
+  fresnelAmplitudesReal,
+  FRESNEL_AMPLITUDES_LENGTH,
+  mirrorAmplitudesAt,
+  MIRROR_AMPLITUDES_LENGTH,
   reflectanceComplex,
   normalReflectance
 } from '../../../src/lib/optics/fresnel';
@@ -256,5 +261,73 @@ describe('normalReflectance(n1, k1, n2, k2)', () => {
   });
   it('rejects a zero index with a RangeError naming it', () => {
     expect(() => normalReflectance(0, 0, 1, 0)).toThrow(/n1.*> 0/);
+  });
+});
+
+describe('mirrorAmplitudesAt([cosThetaI, etaI, nT, kT], out)', () => {
+  const buf = new Float64Array(MIRROR_AMPLITUDES_LENGTH);
+
+  // fresnelComplex is the reference (checked against Born & Wolf above); lossless incident side, any far side.
+  it('agrees with fresnelComplex for dielectrics, absorbers and metals at any angle (1e-12)', () => {
+    fc.assert(
+      fc.property(angle, index, fc.double({ min: 0.03, max: 4, noNaN: true }), fc.double({ min: 0, max: 8, noNaN: true }), (t, a, n, k) => {
+        fc.pre(Math.abs(a - n) > 1e-6 || k > 1e-6);
+        const r = fresnelComplex(Math.sin(t), a, 0, n, k);
+        mirrorAmplitudesAt(Float64Array.of(Math.cos(t), a, n, k), buf);
+        const want = [r.rs.re, r.rs.im, r.rp.re, r.rp.im, r.Rs, r.Rp];
+        for (let i = 0; i < want.length; i++) assertInDelta(buf[i], want[i], 1e-12);
+      })
+    );
+  });
+
+  it('names the field and range of a bad input', () => {
+    expect(() => mirrorAmplitudesAt(Float64Array.of(0.5, 1, 0.5, -1), buf)).toThrow(/kT must be a finite number ≥ 0/);
+    expect(() => mirrorAmplitudesAt(Float64Array.of(1.5, 1, 0.5, 1), buf)).toThrow(/cosThetaI must be a number in \[0, 1\]/);
+  });
+});
+
+describe('fresnelAmplitudesReal(cosThetaI, etaI, etaT, out)', () => {
+  const amp = new Float64Array(FRESNEL_AMPLITUDES_LENGTH);
+
+  // The general complex-index function is the reference (itself checked against Born & Wolf above);
+  // indices closer than 1e-6 are skipped for the reason given there.
+  it('agrees with fresnelComplex for lossless media, below and beyond the critical angle (1e-12)', () => {
+    fc.assert(
+      fc.property(angle, index, index, (t, a, b) => {
+        fc.pre(Math.abs(a - b) > 1e-6);
+        const r = fresnelComplex(Math.sin(t), a, 0, b, 0);
+        const transmitted = fresnelAmplitudesReal(Math.cos(t), a, b, amp);
+        expect(transmitted).toBe(r.Ts > 0 || r.Tp > 0 || (a < b && t < Math.PI / 2));
+        const want = [r.rs.re, r.rs.im, r.rp.re, r.rp.im];
+        if (transmitted) want.push(r.ts.re, r.ts.im, r.tp.re, r.tp.im);
+        for (let i = 0; i < want.length; i++) assertInDelta(amp[i], want[i], 1e-12);
+      })
+    );
+  });
+
+  it('gives rs = −0.2 and rp = +0.2 at normal incidence air → 1.5 (Hecht, Optics, §4.6.2: rp = −rs at normal incidence in this sign convention)', () => {
+    expect(fresnelAmplitudesReal(1, 1, 1.5, amp)).toBe(true);
+    assertInDelta(amp[0], -0.2, 4 * EPS);
+    assertInDelta(amp[2], 0.2, 4 * EPS);
+    assertInDelta(amp[4], 0.8, 4 * EPS); // ts = 1 + rs
+  });
+
+  it('gives |rs| = |rp| = 1 and no transmitted amplitude beyond the critical angle', () => {
+    expect(fresnelAmplitudesReal(Math.cos(1), 2.45, 1.41, amp)).toBe(false);
+    assertInDelta(Math.hypot(amp[0], amp[1]), 1, 4 * EPS);
+    assertInDelta(Math.hypot(amp[2], amp[3]), 1, 4 * EPS);
+    expect(Array.from(amp.subarray(4))).toEqual([0, 0, 0, 0]);
+  });
+
+  it('transmits everything when the indices match, grazing incidence included', () => {
+    expect(fresnelAmplitudesReal(0, 1.5, 1.5, amp)).toBe(true);
+    expect(Array.from(amp)).toEqual([0, 0, 0, 0, 1, 0, 1, 0]);
+  });
+
+  it('reads its numbers from an array in the hot-path form, the same as the argument form', () => {
+    const other = new Float64Array(FRESNEL_AMPLITUDES_LENGTH);
+    fresnelAmplitudesReal(0.3, 2.45, 1.41, amp);
+    fresnelAmplitudesAt(Float64Array.of(0.3, 2.45, 1.41), other);
+    expect(Array.from(other)).toEqual(Array.from(amp));
   });
 });

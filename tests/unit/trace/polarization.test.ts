@@ -4,11 +4,18 @@ import {
   TRACK_TIR,
   TRACK_TRANSMITTED,
   field,
-  launchPolarization,
-  trackedInterface,
-  trackedMirror
+  launchPolarization as launchWith,
+  trackedInterface as interfaceWith,
+  trackedMirror as mirrorWith
 } from '../../../src/lib/trace/polarization';
 import { assertInDelta } from '../../support/assert';
+
+// The functions take their numbers in an array (no boxing in the tracer); these spell them out.
+const trackedInterface = (d: Float64Array, n: Float64Array, cosI: number, etaI: number, etaT: number, u: number) =>
+  interfaceWith(d, n, Float64Array.of(cosI, etaI, etaT, u));
+const trackedMirror = (d: Float64Array, n: Float64Array, rsRe: number, rsIm: number, rpRe: number, rpIm: number, u: number) =>
+  mirrorWith(d, n, Float64Array.of(rsRe, rsIm, rpRe, rpIm, u));
+const launchPolarization = (d: Float64Array, u: number) => launchWith(d, Float64Array.of(u));
 
 const up = Float64Array.of(0, 0, 1); // normal of the plane z = 0 facing a ray that comes down
 
@@ -32,7 +39,7 @@ function fieldDot(d: Float64Array): [number, number] {
   return [field[0] * d[0] + field[2] * d[1] + field[4] * d[2], field[1] * d[0] + field[3] * d[1] + field[5] * d[2]];
 }
 
-describe('trackedInterface(d, n, cosThetaI, etaI, etaT, u)', () => {
+describe('trackedInterface(d, n, [cosThetaI, etaI, etaT, u])', () => {
   // Brewster angle air → 1.5 is 56.31° with Rp = 0 and Rs = 0.1479 there (published: NCERT Physics XII;
   // R. Tatum, Physical Optics §2.4). Tolerance 5e-5: the published Rs has 4 digits.
   it('never reflects p light at the Brewster angle, and reflects s light with Rs = 0.1479', () => {
@@ -134,7 +141,7 @@ describe('trackedInterface(d, n, cosThetaI, etaI, etaT, u)', () => {
   });
 });
 
-describe('trackedMirror(d, n, rs, rp, u)', () => {
+describe('trackedMirror(d, n, [rs, rp, u])', () => {
   it('with rs = −1, rp = +1 (perfect conductor) reverses the field at normal incidence: E_r = −E_i', () => {
     // the tangential field vanishes at a perfect conductor (common practice)
     const E = [0.28, 0.1, -0.95, 0.05, 0, 0];
@@ -154,7 +161,7 @@ describe('trackedMirror(d, n, rs, rp, u)', () => {
   });
 });
 
-describe('launchPolarization(d, u)', () => {
+describe('launchPolarization(d, [u])', () => {
   it('starts a real, unit, transverse field whose azimuth turns with u', () => {
     const d = Float64Array.of(0.48, 0.6, 0.64);
     launchPolarization(d, 0);
