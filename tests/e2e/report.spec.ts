@@ -11,7 +11,7 @@ import { parseIes } from '../../src/lib/export/ies';
 test.beforeEach(async ({ page }) => {
   await page.goto('/report');
   await expect(page.getByRole('heading', { level: 1, name: /^Report: / })).toBeVisible();
-  await expect(page).toHaveURL(/[?&]s=1\./);
+  await expect(page).toHaveURL(/[?&]s=2\./);
 });
 
 test('lists the scenario, closed-form results, assumptions and cautions', async ({ page }) => {
@@ -32,11 +32,11 @@ test('lists the scenario, closed-form results, assumptions and cautions', async 
 });
 
 test('runs the trace on request and offers the IES file of its far field', async ({ page }) => {
-  // a small run keeps the test short: the link's scenario ("1." + base64url JSON) with 5000 rays
+  // a small run keeps the test short: the link's scenario ("2." + base64url JSON) with 5000 rays
   const param = new URL(page.url()).searchParams.get('s')!;
   const scenario = JSON.parse(Buffer.from(param.slice(2), 'base64url').toString('utf8'));
   scenario.trace.rays = 5000;
-  await page.goto(`/report?s=1.${Buffer.from(JSON.stringify(scenario)).toString('base64url')}`);
+  await page.goto(`/report?s=2.${Buffer.from(JSON.stringify(scenario)).toString('base64url')}`);
   await page.getByRole('button', { name: /Run the trace/ }).click();
   await expect(page.getByTestId('report-extraction')).toContainText('±', { timeout: 30_000 });
   await expect(page.getByTestId('report-trace')).toContainText('5,000 rays');

@@ -90,7 +90,7 @@ const validScenario: fc.Arbitrary<Scenario> = fc
     const h = g.H * g.heightFactor;
     const minR = g.shape === 'dome' ? rho / Math.sqrt(1 - (g.H * g.H) / (h * h)) : rho;
     return {
-      version: 1,
+      version: 2,
       name: g.name,
       emission: g.emission,
       chip: {

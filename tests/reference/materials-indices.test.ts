@@ -27,10 +27,10 @@ describe('dielectrics with published formulas', () => {
     expectWithin(n('fused-silica', 587.6), 1.45846, 1e-5);
   });
 
-  it('N-BK7 nd(587.56 nm) = 1.5168 and n(632.8 nm) = 1.51509', () => {
+  it('borosilicate crown glass nd(587.56 nm) = 1.5168 and n(632.8 nm) = 1.51509', () => {
     // published: SCHOTT optical glass data sheet N-BK7. Tolerances: half a unit in the last published digit.
-    expectWithin(n('n-bk7', 587.56), 1.5168, 5e-5);
-    expectWithin(n('n-bk7', 632.8), 1.51509, 5e-6);
+    expectWithin(n('borosilicate-crown', 587.56), 1.5168, 5e-5);
+    expectWithin(n('borosilicate-crown', 632.8), 1.51509, 5e-6);
   });
 
   it('sapphire ordinary n(632.8 nm) = 1.76590', () => {

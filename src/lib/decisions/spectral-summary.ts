@@ -7,13 +7,13 @@
  * each as radiometric ⟨f⟩ = Σ P(λ) f(λ) / Σ P(λ) and luminous ⟨f⟩ = Σ P V f / Σ P V
  * (photometry/weighted-average.ts; CIE 015:2018, V(λ) of CIE 1924, Km = 683 lm/W).
  */
-import { findMaterial, indexAt } from '../materials/index';
+import { indexAt } from '../materials/index';
 import type { Material } from '../materials/types';
 import { domeEstimate, escapeCone } from '../optics/index';
 import { bandInterpolant } from '../photometry/band-interpolant';
 import { weightedAverage, type Spectrum } from '../photometry/index';
 import { scenarioSpectrum } from '../photometry/scenario-spectrum';
-import { designWavelengthNm } from '../scenario/resolve';
+import { designWavelengthNm, mediumMaterial } from '../scenario/resolve';
 import type { MediumSpec, Scenario } from '../scenario/schema';
 
 /** One figure at the design wavelength and weighted over the spectrum (fractions of emitted light, [0, 1]). */
@@ -66,9 +66,7 @@ interface Figures {
 
 function part(spec: MediumSpec, field: string): Part {
   if (spec.kind === 'index') return { field, material: null, n: spec.n };
-  const material = findMaterial(spec.id);
-  if (!material) throw new RangeError(`${field} material '${spec.id}' is not in the material library.`);
-  return { field, material, n: NaN };
+  return { field, material: mediumMaterial(spec, field), n: NaN };
 }
 
 /** Real part of the index at a wavelength; a pole or unphysical value is re-thrown naming the part. */

@@ -30,22 +30,33 @@ export class UserMaterialStore {
   /** Set when the stored materials could not be read (they are left in storage untouched). */
   loadMessage: string | null = $state(null);
 
-  #started = false;
+  #users = 0;
+  #stopListening: (() => void) | null = null;
 
-  /** Reads the stored materials once and follows other tabs. Returns the cleanup. Safe to call again. */
+  /**
+   * Reads the stored materials and follows other tabs while at least one part of the page uses them.
+   * Returns that part's cleanup; the last cleanup stops following.
+   */
   start(): () => void {
-    if (!browser || this.#started) return () => {};
-    this.#started = true;
-    this.#load();
-    const onStorage = (e: StorageEvent) => {
-      if (e.key !== USER_MATERIALS_KEY) return;
-      const r = e.newValue ? readUserMaterialsFile(e.newValue) : { ok: true as const, materials: [] };
-      if (r.ok) this.list = r.materials;
-    };
-    window.addEventListener('storage', onStorage);
+    if (!browser) return () => {};
+    if (this.#users++ === 0) {
+      this.#load();
+      const onStorage = (e: StorageEvent) => {
+        if (e.key !== USER_MATERIALS_KEY) return;
+        const r = e.newValue ? readUserMaterialsFile(e.newValue) : { ok: true as const, materials: [] };
+        if (r.ok) this.list = r.materials;
+      };
+      window.addEventListener('storage', onStorage);
+      this.#stopListening = () => window.removeEventListener('storage', onStorage);
+    }
+    let done = false;
     return () => {
-      window.removeEventListener('storage', onStorage);
-      this.#started = false;
+      if (done) return;
+      done = true;
+      if (--this.#users === 0) {
+        this.#stopListening?.();
+        this.#stopListening = null;
+      }
     };
   }
 

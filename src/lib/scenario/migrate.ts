@@ -1,6 +1,9 @@
 /**
  * Lifts older scenario layouts to the current version before validation.
  *
+ * Version 1 differs from version 2 only in what a medium can be (no user materials), so it is read
+ * as version 2 unchanged.
+ *
  * Version 0 is the short hand-written draft layout (also what a scenario without a `version` field is
  * read as): one `wavelengthNm`; media written as a library id string or a bare index number; the base
  * as a reflectance number or a metal id string; optional fields filled from the demo scenario.
@@ -82,5 +85,7 @@ export function migrateScenario(raw: unknown): MigrateResult {
     };
   }
   if (version === SCENARIO_VERSION) return { ok: true, value: raw, from: version };
-  return { ok: true, value: fromV0(raw), from: 0 };
+  // Version 2 only added user-material media: a version-1 scenario is a version-2 one with its number raised.
+  const v1 = version === 0 ? fromV0(raw) : raw;
+  return { ok: true, value: { ...v1, version: SCENARIO_VERSION }, from: version };
 }

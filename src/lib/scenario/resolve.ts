@@ -3,6 +3,7 @@
  * library, with its range warnings) and the package description the Monte Carlo tracer takes.
  */
 import { findMaterial, indexAt } from '../materials/index';
+import type { Material } from '../materials/types';
 import type { TracePackage } from '../trace/package-spec';
 import type { BaseSpec, EmissionSpec, MediumSpec, Scenario } from './schema';
 
@@ -10,10 +11,14 @@ import type { BaseSpec, EmissionSpec, MediumSpec, Scenario } from './schema';
 export interface ResolvedMedium {
   n: number;
   k: number;
-  /** Short human label: the material's name or "typed index". */
+  /** Short human label: the material's name ("… (user)" for the user's own) or "typed index". */
   label: string;
-  /** Library id, or null for a typed index. */
+  /** Library or user-material id, or null for a typed index. */
   materialId: string | null;
+  /** The material itself (library or user), or null for a typed index. */
+  material: Material | null;
+  /** True for one of the user's own materials. */
+  user: boolean;
   /** False when the wavelength is outside the material's data range (the value is then a clamp or extrapolation). */
   inRange: boolean;
   /** The library's warning for this wavelength, if any. */
@@ -48,21 +53,33 @@ export function designWavelengthNm(emission: EmissionSpec): number {
 }
 
 /**
- * Index of a medium at a wavelength. A typed index is returned as typed. A library id that is not in
- * the library throws a RangeError naming the field (a validated scenario never has one).
+ * The material behind a medium: the library's entry, the user material the scenario carries, or null
+ * for a typed index. A library id that is not in the library throws a RangeError naming the field (a
+ * validated scenario never has one).
  */
-export function resolveMedium(spec: MediumSpec, wavelengthNm: number, field = 'Medium'): ResolvedMedium {
-  if (spec.kind === 'index') {
-    return { n: spec.n, k: spec.k, label: 'typed index', materialId: null, inRange: true, warning: null };
-  }
+export function mediumMaterial(spec: MediumSpec, field = 'Medium'): Material | null {
+  if (spec.kind === 'index') return null;
+  if (spec.kind === 'user') return spec.material;
   const material = findMaterial(spec.id);
   if (!material) throw new RangeError(`${field} material '${spec.id}' is not in the material library.`);
+  return material;
+}
+
+/** Index of a medium at a wavelength. A typed index is returned as typed. */
+export function resolveMedium(spec: MediumSpec, wavelengthNm: number, field = 'Medium'): ResolvedMedium {
+  if (spec.kind === 'index') {
+    return { n: spec.n, k: spec.k, label: 'typed index', materialId: null, material: null, user: false, inRange: true, warning: null };
+  }
+  const material = mediumMaterial(spec, field) as Material;
   const v = indexAt(material, wavelengthNm);
+  const user = spec.kind === 'user';
   return {
     n: v.n,
     k: v.k,
-    label: material.name,
+    label: user ? `${material.name} (user)` : material.name,
     materialId: material.id,
+    material,
+    user,
     inRange: v.inRange,
     warning: v.warning ?? null
   };

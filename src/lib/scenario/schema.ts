@@ -1,12 +1,13 @@
 /**
  * The scenario: one LED package description shared by every page, the URL and the command line.
- * Version 1. Older versions are lifted by `migrateScenario` before they reach this schema.
+ * Version 2 (adds media that carry a user's own material in full, so a link is self-contained).
+ * Older versions are lifted by `migrateScenario` before they reach this schema.
  */
 import { z } from 'zod';
-import { findMaterial } from '../materials/index';
+import { findMaterial, validateUserMaterial } from '../materials/index';
 import { LIMITS, MATERIAL_ID_PATTERN, type NumberLimit, rangeMessage } from './limits';
 
-export const SCENARIO_VERSION = 1;
+export const SCENARIO_VERSION = 2;
 
 /** A number field with a range message that names the field (zod rejects NaN and ±Infinity). */
 function num(field: string, limit: NumberLimit) {
@@ -36,13 +37,31 @@ function objectMessages(field: string) {
   };
 }
 
-/** A medium: a library material (indices taken at the scenario wavelength) or a typed index n + ik. */
+/**
+ * A user material carried inside the scenario, checked by the library's own user-material rules
+ * (the same as an imported file); the first problem is reported, naming the field.
+ */
+function userMaterial(field: string) {
+  return z.unknown().transform((raw, ctx) => {
+    const r = validateUserMaterial(raw);
+    if (r.ok) return r.material;
+    const e = r.errors[0];
+    ctx.addIssue({ code: 'custom', message: `${field} user material: ${e.message}.` });
+    return z.NEVER;
+  });
+}
+
+/**
+ * A medium: a library material (indices taken at the scenario wavelength), a typed index n + ik, or
+ * one of the user's own materials, carried in full.
+ */
 function medium(field: string) {
   const own = objectMessages(field.endsWith('medium') ? field : `${field} medium`);
   return z.discriminatedUnion(
     'kind',
     [
       z.object({ kind: z.literal('material'), id: materialId(`${field} material`) }, own).strict(),
+      z.object({ kind: z.literal('user'), material: userMaterial(field) }, own).strict(),
       z
         .object(
           {
@@ -54,7 +73,7 @@ function medium(field: string) {
         )
         .strict()
     ],
-    { error: `${field} must be a library material or a typed index.` }
+    { error: `${field} must be a library material, a typed index or a user material.` }
   );
 }
 
@@ -159,6 +178,13 @@ function checkMaterial(ctx: Ctx, path: (string | number)[], field: string, id: s
   }
 }
 
+/** A user material must not be a metal where a transparent medium is needed. */
+function checkUserMaterial(ctx: Ctx, path: (string | number)[], field: string, m: { id: string; category: string }): void {
+  if (m.category === 'metal') {
+    ctx.addIssue({ code: 'custom', path, message: `${field} must be a non-metal (dielectric or semiconductor); user material '${m.id}' is a metal.` });
+  }
+}
+
 function fmtMm(x: number): string {
   return `${Number(x.toPrecision(3))} mm`;
 }
@@ -169,6 +195,10 @@ function crossChecks(s: ObjectScenario, ctx: Ctx): void {
   if (s.encapsulant.medium.kind === 'material')
     checkMaterial(ctx, ['encapsulant', 'medium', 'id'], 'Encapsulant material', s.encapsulant.medium.id, false);
   if (s.outside.kind === 'material') checkMaterial(ctx, ['outside', 'id'], 'Outside medium material', s.outside.id, false);
+  if (s.chip.medium.kind === 'user') checkUserMaterial(ctx, ['chip', 'medium', 'material'], 'Chip material', s.chip.medium.material);
+  if (s.encapsulant.medium.kind === 'user')
+    checkUserMaterial(ctx, ['encapsulant', 'medium', 'material'], 'Encapsulant material', s.encapsulant.medium.material);
+  if (s.outside.kind === 'user') checkUserMaterial(ctx, ['outside', 'material'], 'Outside medium material', s.outside.material);
   if (s.base.kind === 'metal') checkMaterial(ctx, ['base', 'id'], 'Base metal', s.base.id, true);
 
   if (s.chip.emitterZMm > s.chip.heightMm) {
@@ -227,7 +257,7 @@ function crossChecks(s: ObjectScenario, ctx: Ctx): void {
   }
 }
 
-/** The version-1 scenario schema, including the checks that span fields. */
+/** The scenario schema (current version), including the checks that span fields. */
 export const scenarioSchema = objectSchema.superRefine(crossChecks);
 
 export type Scenario = z.infer<typeof scenarioSchema>;
@@ -244,7 +274,7 @@ export interface ScenarioIssue {
 
 export type ParseResult = { ok: true; scenario: Scenario } | { ok: false; issues: ScenarioIssue[] };
 
-/** Validates a version-1 scenario. Never throws; every issue names its field and allowed range. */
+/** Validates a scenario of the current version. Never throws; every issue names its field and allowed range. */
 export function parseScenario(input: unknown): ParseResult {
   const r = scenarioSchema.safeParse(input);
   if (r.success) return { ok: true, scenario: r.data };
@@ -254,7 +284,7 @@ export function parseScenario(input: unknown): ParseResult {
   };
 }
 
-/** Validates a version-1 scenario and throws a RangeError with the first issue (for the command line). */
+/** Validates a scenario of the current version and throws a RangeError with the first issue (for the command line). */
 export function assertScenario(input: unknown): Scenario {
   const r = parseScenario(input);
   if (!r.ok) throw new RangeError(r.issues[0].message);

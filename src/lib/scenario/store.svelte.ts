@@ -14,7 +14,11 @@ import { parseScenario, type ParseResult, type Scenario } from './schema';
 import { decodeScenarioParam, encodeScenarioParam, SCENARIO_PARAM } from './url';
 
 /** localStorage key; the number is the scenario version written under it. */
-export const STORAGE_KEY = 'outcouple.scenario.v1';
+export const STORAGE_KEY = 'outcouple.scenario.v2';
+/** Keys older versions wrote, newest first: read (and migrated) when the current key is empty, never written. */
+export const OLDER_STORAGE_KEYS = ['outcouple.scenario.v1'];
+/** Where a saved scenario that cannot be read is moved, untouched, before the key is written again. */
+export const UNREADABLE_KEY = `${STORAGE_KEY}.unreadable`;
 
 export const STORAGE_UNAVAILABLE =
   "Cannot save in this browser: the scenario is kept only in this tab's link.";
@@ -26,6 +30,8 @@ export class ScenarioStore {
   linkMessage: string | null = $state(null);
   /** Set when the browser refuses storage; the app keeps working without it. */
   storageMessage: string | null = $state(null);
+  /** Set when the saved scenario could not be read (it is kept under UNREADABLE_KEY), until dismissed. */
+  loadMessage: string | null = $state(null);
 
   /** The value of the `s` query parameter for the current scenario. */
   readonly param: string = $derived(encodeScenarioParam(this.scenario));
@@ -144,16 +150,43 @@ export class ScenarioStore {
     }
   }
 
+  /**
+   * The saved scenario: the current key, else the newest older key (migrated; the old entry stays for
+   * an older version of the app). One that cannot be read is copied to UNREADABLE_KEY before anything
+   * overwrites it, and loadMessage says so.
+   */
   #load(): Scenario | null {
     const s = this.#storage();
     if (!s) return null;
-    try {
-      const text = s.getItem(STORAGE_KEY);
-      if (!text) return null;
-      const r = readScenario(JSON.parse(text));
-      return r.ok ? r.scenario : null;
-    } catch {
+    for (const key of [STORAGE_KEY, ...OLDER_STORAGE_KEYS]) {
+      let text: string | null = null;
+      try {
+        text = s.getItem(key);
+      } catch {
+        return null;
+      }
+      if (!text) continue;
+      let reason: string;
+      try {
+        const r = readScenario(JSON.parse(text));
+        if (r.ok) return r.scenario;
+        reason = r.message;
+      } catch {
+        reason = 'it is not valid JSON.';
+      }
+      this.#keepUnreadable(s, key, text, reason);
       return null;
+    }
+    return null;
+  }
+
+  #keepUnreadable(s: Storage, key: string, text: string, reason: string): void {
+    try {
+      if (key === STORAGE_KEY) s.setItem(UNREADABLE_KEY, text);
+      const where = key === STORAGE_KEY ? UNREADABLE_KEY : key;
+      this.loadMessage = `Your saved scenario could not be read (${reason.replace(/\.$/, '')}); it is kept untouched in this browser's storage under "${where}". Showing the demo scenario.`;
+    } catch {
+      this.loadMessage = `Your saved scenario could not be read (${reason.replace(/\.$/, '')}), and the browser refused to keep a copy. Showing the demo scenario.`;
     }
   }
 

@@ -1,14 +1,14 @@
 /**
- * The scenario turned into a ranking input: chip and outside media (library material or typed index),
+ * The scenario turned into a ranking input: chip and outside media (library or user material, or typed index),
  * the current encapsulant, the emission spectrum for weighted figures, and the candidates (library plus
  * the user's own materials). Pure apart from its $lib imports.
  */
 import { encapsulantCandidates, rankEncapsulants, type EncapsulantRanking, type IndexSource, type RankOrder } from '$lib/decisions';
-import { findMaterial, listMaterials } from '$lib/materials';
+import { listMaterials } from '$lib/materials';
 import type { Material } from '$lib/materials/types';
 import type { Spectrum } from '$lib/photometry';
 import { scenarioSpectrum } from '$lib/photometry/scenario-spectrum';
-import type { ResolvedScenario } from '$lib/scenario/resolve';
+import { mediumMaterial, type ResolvedScenario } from '$lib/scenario/resolve';
 import type { EmissionSpec, MediumSpec, Scenario } from '$lib/scenario/schema';
 
 /** The emission as a sampled spectrum, or null for a single wavelength (nothing to weight). */
@@ -17,7 +17,7 @@ export function emissionSpectrum(emission: EmissionSpec): Spectrum | null {
 }
 
 function source(spec: MediumSpec, n: number): IndexSource {
-  const m = spec.kind === 'material' ? findMaterial(spec.id) : undefined;
+  const m = mediumMaterial(spec);
   return m ? { material: m } : { n };
 }
 

@@ -4,7 +4,6 @@
  * Pure apart from its $lib imports; the page only lays these out.
  */
 import { fmtNumber, fmtPercent, fmtPlain, fmtUnit } from '$lib/components/format';
-import { findMaterial } from '$lib/materials';
 import { domeEstimate, escapeCone } from '$lib/optics';
 import type { ResolvedScenario } from '$lib/scenario/resolve';
 import type { Scenario } from '$lib/scenario/schema';
@@ -82,8 +81,7 @@ export function cautions(s: Scenario, r: ResolvedScenario): string[] {
   const out = [
     'Eye safety: bright LEDs, blue ones above all, can injure the retina. Photobiological safety is assessed under IEC 62471; the risk group depends on radiance and exposure time. Do not look into a lit package at close range.'
   ];
-  const id = s.encapsulant.shape !== 'none' ? r.encapsulant.materialId : null;
-  const m = id ? findMaterial(id) : undefined;
+  const m = s.encapsulant.shape !== 'none' ? r.encapsulant.material : null;
   if (m?.maxServiceTempC !== undefined) {
     out.push(`Heat: ${m.name} is rated for continuous service up to about ${m.maxServiceTempC} °C (common practice); above it encapsulants yellow, crack or delaminate. These optical figures say nothing about junction or encapsulant temperature.`);
   } else {

@@ -27,7 +27,7 @@ const silica: Material = {
 // N-BK7, SCHOTT data sheet: glass-catalogue form, C in µm², valid 300–2500 nm.
 const bk7: Material = {
   id: 'bk7-test',
-  name: 'N-BK7',
+  name: 'Crown glass',
   aliases: [],
   category: 'optic',
   dispersion: {
@@ -92,8 +92,8 @@ describe('materialsIndexChart(curves, options)', () => {
 
   it('draws the valid range solid and the extrapolated part dashed, touching at the edge', () => {
     const spec = materialsIndexChart(curves, { quantity: 'n', extrapolated: true });
-    const solid = spec.series.find((s) => s.label === 'N-BK7')!;
-    const dashed = spec.series.find((s) => s.label === 'N-BK7, below its valid range')!;
+    const solid = spec.series.find((s) => s.label === 'Crown glass')!;
+    const dashed = spec.series.find((s) => s.label === 'Crown glass, below its valid range')!;
     expect(solid.points.map((p) => p.x)).toEqual([300, 350, 400]);
     expect(dashed.dashed).toBe(true);
     expect(dashed.points.map((p) => p.x)).toEqual([250, 300]);
@@ -103,7 +103,7 @@ describe('materialsIndexChart(curves, options)', () => {
   it('names which side of the valid range an extrapolated part lies on', () => {
     const wide = sampleMaterial(bk7, 200, 3000, 29);
     const labels = materialsIndexChart([wide], { quantity: 'n', extrapolated: true }).series.map((s) => s.label);
-    expect(labels).toEqual(['N-BK7', 'N-BK7, below its valid range', 'N-BK7, above its valid range']);
+    expect(labels).toEqual(['Crown glass', 'Crown glass, below its valid range', 'Crown glass, above its valid range']);
   });
 
   it('leaves the extrapolated parts out when asked', () => {
@@ -119,7 +119,7 @@ describe('materialsIndexChart(curves, options)', () => {
 
   it('exports every material with a valid-range flag per wavelength', () => {
     const t = chartTable(materialsIndexChart(curves, { quantity: 'n', extrapolated: false }));
-    expect(t.headers).toEqual(['wavelength (nm)', 'N-BK7 n', 'N-BK7 in valid range', 'Fused silica n', 'Fused silica in valid range']);
+    expect(t.headers).toEqual(['wavelength (nm)', 'Crown glass n', 'Crown glass in valid range', 'Fused silica n', 'Fused silica in valid range']);
     expect(t.rows).toHaveLength(4);
     expect(t.rows[0][2]).toBe('no');
     expect(t.rows[0][4]).toBe('yes');

@@ -8,7 +8,7 @@ function material(partial: Partial<Material> & Pick<Material, 'dispersion' | 'va
 }
 
 const silica = findMaterial('fused-silica')!;
-const bk7 = findMaterial('n-bk7')!;
+const bk7 = findMaterial('borosilicate-crown')!;
 
 describe('indexAt(material, wavelengthNm): the two Sellmeier forms', () => {
   it('resonance form with C in µm equals the glass form with C² in µm² to a few ulps', () => {
@@ -25,8 +25,8 @@ describe('indexAt(material, wavelengthNm): the two Sellmeier forms', () => {
     }
   });
 
-  it('N-BK7 read in the wrong (resonance) form gives a clearly wrong index', () => {
-    if (bk7.dispersion.model !== 'sellmeier-glass') throw new Error('N-BK7 is stored in glass form');
+  it('the borosilicate crown glass read in the wrong (resonance) form gives a clearly wrong index', () => {
+    if (bk7.dispersion.model !== 'sellmeier-glass') throw new Error('the crown glass is stored in glass form');
     const wrong = material({ dispersion: { ...bk7.dispersion, model: 'sellmeier' }, validRangeNm: bk7.validRangeNm });
     const right = indexAt(bk7, 587.56).n;
     // The catalogue value nd = 1.5168 (SCHOTT data sheet) is met by the right form only;

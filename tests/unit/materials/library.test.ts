@@ -6,7 +6,7 @@ const REQUIRED: Record<string, string> = {
   gan: 'semiconductor', gaas: 'semiconductor', gap: 'semiconductor', algainp: 'semiconductor',
   ingan: 'semiconductor', 'sic-4h': 'substrate', 'sapphire-o': 'substrate', 'sapphire-e': 'substrate',
   'silicone-methyl': 'encapsulant', 'silicone-phenyl': 'encapsulant', epoxy: 'encapsulant',
-  pmma: 'optic', polycarbonate: 'optic', 'n-bk7': 'optic', 'fused-silica': 'optic',
+  pmma: 'optic', polycarbonate: 'optic', 'borosilicate-crown': 'optic', 'fused-silica': 'optic',
   sio2: 'layer', si3n4: 'layer', 'tio2-rutile': 'layer', ito: 'layer', zno: 'layer', mgf2: 'layer',
   ag: 'metal', al: 'metal', au: 'metal', air: 'ambient'
 };
@@ -95,7 +95,7 @@ describe('findMaterial(idOrNameOrAlias)', () => {
     expect(findMaterial('GaN')?.id).toBe('gan');
     expect(findMaterial('  GALLIUM NITRIDE ')?.id).toBe('gan');
     expect(findMaterial('Sapphire (ordinary ray)')?.id).toBe('sapphire-o');
-    expect(findMaterial('bk7')?.id).toBe('n-bk7');
+    expect(findMaterial('crown glass')?.id).toBe('borosilicate-crown');
     expect(findMaterial('PC')?.id).toBe('polycarbonate');
   });
 

@@ -16,13 +16,13 @@ const V0 = {
 };
 
 describe('migrateScenario', () => {
-  it('lifts a version-0 draft to version 1, filling what it lacked', () => {
+  it('lifts a version-0 draft to the current version, filling what it lacked', () => {
     const r = readScenario(V0);
     expect(r.ok).toBe(true);
     if (!r.ok) return;
     expect(r.migratedFrom).toBe(0);
     const s = r.scenario;
-    expect(s.version).toBe(1);
+    expect(s.version).toBe(2);
     expect(s.emission).toEqual({ kind: 'single', wavelengthNm: 530 });
     expect(s.chip.medium).toEqual({ kind: 'index', n: 2.45, k: 0 });
     expect(s.chip.emitterZMm).toBe(0.1); // defaults to the top of the chip
@@ -44,18 +44,27 @@ describe('migrateScenario', () => {
     if (!r.ok) expect(r.message).toBe('Wavelength must be between 200 and 2500 nm.');
   });
 
-  it('passes version 1 through unchanged', () => {
+  it('passes the current version (2) through unchanged', () => {
     const s = demoScenario();
     const m = migrateScenario(s);
-    expect(m).toEqual({ ok: true, value: s, from: 1 });
+    expect(m).toEqual({ ok: true, value: s, from: 2 });
     const r = readScenario(s);
     expect(r.ok && r.migratedFrom).toBeNull();
   });
 
+  it('reads a version-1 scenario as version 2 with nothing else changed', () => {
+    const v1 = { ...demoScenario(), version: 1 };
+    const r = readScenario(v1);
+    expect(r.ok).toBe(true);
+    if (!r.ok) return;
+    expect(r.migratedFrom).toBe(1);
+    expect(r.scenario).toEqual(demoScenario());
+  });
+
   it('refuses a newer version with a message that names both versions', () => {
-    const m = migrateScenario({ ...demoScenario(), version: 2 });
+    const m = migrateScenario({ ...demoScenario(), version: 3 });
     expect(m.ok).toBe(false);
-    if (!m.ok) expect(m.message).toMatch(/newer version of Outcouple \(scenario version 2\); this one reads versions up to 1/);
+    if (!m.ok) expect(m.message).toMatch(/newer version of Outcouple \(scenario version 3\); this one reads versions up to 2/);
   });
 
   it('refuses non-objects and odd versions', () => {

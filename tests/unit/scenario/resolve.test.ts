@@ -48,6 +48,8 @@ describe('resolveScenario', () => {
       k: 0.001,
       label: 'typed index',
       materialId: null,
+      material: null,
+      user: false,
       inRange: true,
       warning: null
     });
