@@ -140,5 +140,5 @@ test('the link reopens the same view, and the JSON export carries inputs, result
   expect(doc.results.criticalAngleDeg).toBeCloseTo(23.578, 2); // computed: asin(1/2.5) = 23.578°
   expect(doc.results.onePlanarFace.fresnelUnpolarised).toBeCloseTo(0.03243, 4); // computed check value
   expect(doc.results.cuboidChip).toHaveLength(3);
-  expect(doc.scenario.version).toBe(1);
+  expect(doc.scenario.version).toBe(2);
 });

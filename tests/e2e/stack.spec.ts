@@ -219,7 +219,7 @@ test('results export as JSON with the scenario; charts save PNG and CSV', async 
   expect(json.name).toBe('outcouple-stack-results.json');
   const doc = JSON.parse(json.text);
   expect(doc.format).toBe('outcouple-stack-results');
-  expect(doc.scenario.version).toBe(1);
+  expect(doc.scenario.version).toBe(2);
   expect(doc.scenario.chip.medium).toEqual({ kind: 'index', n: 2.5, k: 0 });
   expect(doc.stack.items[0]).toEqual({ kind: 'layer', medium: { kind: 'index', n: 1.5, k: 0 }, thicknessNm: 100 });
   expect(`${(doc.results.extraction.stack.unpolarised * 100).toPrecision(4)} %`).toBe(shown);
