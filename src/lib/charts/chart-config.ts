@@ -69,9 +69,24 @@ function xyDataset(spec: ChartSpec, s: SeriesSpec, palette: ChartPalette): Chart
 }
 
 /**
+ * The canvas aspect ratio (width/height) that gives a plot area with equal units on both axes,
+ * keeping the canvas width and the space the axes and legend take (canvas minus plot area).
+ * @param canvasW canvas width, px; @param canvasH its height, px
+ * @param plotW plot area width, px; @param plotH its height, px
+ * @param xSpan x axis range, data units (> 0); @param ySpan y axis range (> 0)
+ * @returns the ratio, clamped to [0.5, 3] (a narrow canvas with a tall legend still gets a usable plot)
+ */
+export function equalUnitsAspectRatio(canvasW: number, canvasH: number, plotW: number, plotH: number, xSpan: number, ySpan: number): number {
+  const wantedH = canvasH - plotH + (plotW * ySpan) / xSpan;
+  const ratio = canvasW / wantedH;
+  return Number.isFinite(ratio) && ratio > 0 ? Math.max(0.5, Math.min(3, ratio)) : 2;
+}
+
+/**
  * The Chart.js configuration of a spec: 'line', 'scatter' and 'polar' become scatter charts with
  * per-series lines (numeric x axes); 'bar' a bar chart over `categories`. Animations are off so updates
- * while typing are immediate. Polar charts keep equal scales on both axes through their aspect ratio.
+ * while typing are immediate. Polar charts keep equal scales on both axes through their aspect ratio (estimated here, corrected
+ * after layout with equalUnitsAspectRatio).
  */
 export function chartConfig(spec: ChartSpec, palette: ChartPalette): ChartConfiguration {
   const legend = {

@@ -17,7 +17,7 @@ import {
   Tooltip,
   type Plugin
 } from 'chart.js';
-import { chartConfig, FALLBACK_PALETTE, seriesColor, type ChartPalette } from './chart-config';
+import { chartConfig, equalUnitsAspectRatio, FALLBACK_PALETTE, seriesColor, type ChartPalette } from './chart-config';
 import type { ChartSpec } from './spec';
 
 Chart.register(
@@ -102,6 +102,33 @@ function errorBarPlugin(live: Live): Plugin {
   };
 }
 
+/**
+ * Equal units on both axes of a polar chart, so a circle stays a circle: after each layout the plot
+ * area's height is compared with width × (y range / x range), and the canvas aspect ratio corrected
+ * (the axes, ticks and legend take a share of the canvas that the first estimate can only guess).
+ */
+function equalUnitsPlugin(live: Live): Plugin {
+  return {
+    id: 'outcoupleEqualUnits',
+    afterLayout(chart) {
+      const { kind, x, y } = live.spec;
+      if (kind !== 'polar' || x.min === undefined || x.max === undefined || y.min === undefined || y.max === undefined) return;
+      const area = chart.chartArea;
+      const plotW = area.right - area.left;
+      const plotH = area.bottom - area.top;
+      if (!(plotW > 0 && plotH > 0)) return;
+      const wanted = equalUnitsAspectRatio(chart.width, chart.height, plotW, plotH, x.max - x.min, y.max - y.min);
+      const current = chart.options.aspectRatio ?? 2;
+      if (Math.abs(wanted - current) / current < 0.005) return;
+      chart.options.aspectRatio = wanted;
+      // Not inside the layout pass: resize runs a layout of its own
+      setTimeout(() => {
+        if (chart.canvas) chart.resize();
+      }, 0);
+    }
+  };
+}
+
 export interface ChartHandle {
   /** Redraws with a new spec (same chart kind keeps the canvas; a different kind rebuilds it). */
   update(spec: ChartSpec): void;
@@ -115,7 +142,7 @@ export function mountChart(canvas: HTMLCanvasElement, spec: ChartSpec): ChartHan
   const live: Live = { spec, palette: readPalette(canvas) };
   const make = () => {
     const config = chartConfig(live.spec, live.palette);
-    config.plugins = [backgroundPlugin(live), errorBarPlugin(live)];
+    config.plugins = [backgroundPlugin(live), errorBarPlugin(live), equalUnitsPlugin(live)];
     return new Chart(canvas, config);
   };
   let chart = make();

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { chartConfig, FALLBACK_PALETTE, seriesColor } from '../../../src/lib/charts/chart-config';
+import { chartConfig, equalUnitsAspectRatio, FALLBACK_PALETTE, seriesColor } from '../../../src/lib/charts/chart-config';
 import { polarChart } from '../../../src/lib/charts/polar-chart';
 import type { ChartSpec } from '../../../src/lib/charts/spec';
 
@@ -56,5 +56,24 @@ describe('chartConfig', () => {
   it('log axes when asked', () => {
     const c = chartConfig({ ...line, y: { title: 'rays', log: true } }, FALLBACK_PALETTE) as any;
     expect(c.options.scales.y.type).toBe('logarithmic');
+  });
+});
+
+describe('equalUnitsAspectRatio(canvasW, canvasH, plotW, plotH, xSpan, ySpan)', () => {
+  it('gives a plot area whose pixels per unit are the same on both axes', () => {
+    // 400 × 300 canvas with a 340 × 200 plot: axes and legend take 60 px across and 100 px down
+    const ratio = equalUnitsAspectRatio(400, 300, 340, 200, 2.2, 1.1);
+    const plotH = 400 / ratio - 100;
+    expect(340 / 2.2).toBeCloseTo(plotH / 1.1, 9);
+  });
+
+  it('keeps an already square-unit layout as it is', () => {
+    expect(equalUnitsAspectRatio(400, 270, 340, 170, 2, 1)).toBeCloseTo(400 / 270, 12);
+  });
+
+  it('stays within [0.5, 3] and is finite for degenerate sizes', () => {
+    expect(equalUnitsAspectRatio(400, 300, 340, 200, 0.01, 10)).toBe(0.5);
+    expect(equalUnitsAspectRatio(400, 300, 340, 200, 100, 0.01)).toBe(3);
+    expect(equalUnitsAspectRatio(0, 0, 0, 0, 1, 1)).toBe(2);
   });
 });
