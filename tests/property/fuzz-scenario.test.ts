@@ -38,9 +38,21 @@ const nonMetals = listMaterials().filter((m) => m.category !== 'metal').map((m) 
 const metals = listMaterials().filter((m) => m.category === 'metal').map((m) => m.id);
 /** JSON writes −0 as 0: the same number, so −0 is generated as 0. */
 const num = (min: number, max: number) => real(min, max).map((x) => x + 0);
+/** A user's own material carried in the scenario (version 2), written in full so that it round-trips as is. */
+const userMaterial = fc.record({
+  id: fc.stringMatching(/^[a-z0-9-]{1,30}$/).map((s) => `u-${s}`),
+  name: fc.string({ minLength: 1, maxLength: 40 }).map((s) => s.trim()).filter((s) => s.length > 0),
+  aliases: fc.constant([] as string[]),
+  category: fc.constantFrom('encapsulant', 'layer', 'optic', 'substrate') as fc.Arbitrary<'encapsulant' | 'layer' | 'optic' | 'substrate'>,
+  dispersion: fc.record({ model: fc.constant('cauchy' as const), A: num(1, 3), B: num(0, 0.05), C: num(0, 0.001) }),
+  validRangeNm: fc.constant({ min: 200, max: 2500 }),
+  source: fc.constant('user supplied'),
+  provenance: fc.constant('user supplied' as const)
+});
 const medium = fc.oneof(
   fc.constantFrom(...nonMetals).map((id) => ({ kind: 'material' as const, id })),
-  fc.record({ kind: fc.constant('index' as const), n: num(LIMITS.indexN.min, LIMITS.indexN.max), k: num(0, LIMITS.indexK.max) })
+  fc.record({ kind: fc.constant('index' as const), n: num(LIMITS.indexN.min, LIMITS.indexN.max), k: num(0, LIMITS.indexK.max) }),
+  userMaterial.map((material) => ({ kind: 'user' as const, material }))
 );
 /** Names of any UTF-16 code units, lone surrogates included, already trimmed (the schema trims). */
 const name = fc
