@@ -2,6 +2,7 @@ import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { demoScenario as cliDemoScenario } from '../../../src/lib/scenario/defaults';
 import { runCli, runJson } from './run-cli';
 
 const demo = ['trace', '--n-chip', '2.45', '--chip', '1x1x0.15', '--emitter-z', '0.1', '--chip-absorption', '0.5', '--n-enc', '1.41',
@@ -35,6 +36,22 @@ describe('outcouple trace', () => {
     expect(out.package.encapsulant.shape).toBe('cylinder');
     expect(out.rays).toBe(5000);
     expect(out.seed).toBe(3);
+  });
+
+  it('--scenario reads an app scenario whose encapsulant is a user material carried in the file', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'outcouple-'));
+    const file = join(dir, 'scenario.json');
+    // Cauchy n = 1.5 + 0.004/λ² (λ in µm): 1.516 at 500 nm (exact arithmetic)
+    const material = { id: 'my-silicone', name: 'My silicone', category: 'encapsulant', dispersion: { model: 'cauchy', A: 1.5, B: 0.004, C: 0 }, validRangeNm: { min: 400, max: 800 } };
+    writeFileSync(file, JSON.stringify({ ...cliDemoScenario(), emission: { kind: 'single', wavelengthNm: 500 }, encapsulant: { medium: { kind: 'user', material }, shape: 'dome', radiusMm: 2.5, heightMm: 2.5, absorptionPerMm: 0.001 } }));
+    const out = runJson(['trace', '--scenario', file, '--threads', '1', '--rays', '5000']);
+    expect(out.package.encapsulant.n).toBeCloseTo(1.516, 12);
+    const bad = runCli(['trace', '--scenario', file.replace('scenario.json', 'bad.json')]);
+    expect(bad.code).toBe(2);
+    writeFileSync(join(dir, 'bad.json'), JSON.stringify({ ...cliDemoScenario(), encapsulant: { medium: { kind: 'user', material: { ...material, id: 'air' } }, shape: 'none', radiusMm: 1, heightMm: 1, absorptionPerMm: 0 } }));
+    const clash = runCli(['trace', '--scenario', join(dir, 'bad.json')]);
+    expect(clash.code).toBe(2);
+    expect(clash.stderr).toMatch(/--scenario: Encapsulant user material: id "air" belongs to a library material/);
   });
 
   it('--ies writes an IES LM-63 file scaled to --lumens', () => {
