@@ -76,6 +76,22 @@ export const ASSUMPTIONS: readonly string[] = [
   'Indices come from the material library at the design wavelength, each with its source and validity range.'
 ];
 
+/**
+ * The assumptions, with one line per user material in the scenario: its numbers are as the user
+ * entered them, not the library's published ones.
+ */
+export function assumptions(s: Scenario, r: ResolvedScenario): string[] {
+  const parts: [string, ResolvedScenario['chip'], boolean][] = [
+    ['chip', r.chip, true],
+    ['encapsulant', r.encapsulant, s.encapsulant.shape !== 'none'],
+    ['outside medium', r.outside, true]
+  ];
+  const own = parts
+    .filter(([, m, used]) => used && m.user && m.material)
+    .map(([part, m]) => `The ${part} is the user's own material ${m.material!.name} (source given: ${m.material!.source}); its index is as entered, not checked against a published source.`);
+  return [...ASSUMPTIONS, ...own];
+}
+
 /** Cautions: eye safety, the encapsulant's temperature limit when the library lists one, and estimates. */
 export function cautions(s: Scenario, r: ResolvedScenario): string[] {
   const out = [
