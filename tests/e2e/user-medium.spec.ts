@@ -90,3 +90,18 @@ test('a scenario saved by the previous version is read, and the old entry is lef
   expect(await page.evaluate(() => localStorage.getItem('outcouple.scenario.v1'))).toBe(v1);
   await expect.poll(() => page.evaluate(() => JSON.parse(localStorage.getItem('outcouple.scenario.v2') ?? '{}').version)).toBe(2);
 });
+
+test('a chip material with no index at the wavelength is refused beside the field, and the page keeps working', async ({ page }) => {
+  await page.goto('/dome');
+  const picker = page.getByLabel('Chip material');
+  await picker.selectOption({ label: 'GaAs (transparent region)' });
+  // GaAs's formula has a pole at 874.6 nm, between 450 nm and its data range (library entry)
+  await expect(page.getByRole('alert').filter({ hasText: /Chip material: GaAs .*pole at 874\.6 nm/ })).toBeVisible();
+  await expect(picker.locator('option:checked')).toHaveText('GaN (ordinary ray)');
+  await expect(panel(page)).toContainText('GaN (ordinary ray) n 2.487');
+  await page.getByLabel('Wavelength').fill('1000');
+  await page.getByLabel('Wavelength').press('Tab');
+  await picker.selectOption({ label: 'GaAs (transparent region)' });
+  await expect(panel(page)).toContainText('GaAs (transparent region) n 3.');
+  await expect(page.locator('main')).not.toContainText('NaN');
+});

@@ -12,6 +12,7 @@ import { readScenario } from '../../src/lib/scenario/read-scenario';
 import { parseScenario, type Scenario } from '../../src/lib/scenario/schema';
 import { DEMO_SCENARIO, demoScenario } from '../../src/lib/scenario/defaults';
 import { LIMITS } from '../../src/lib/scenario/limits';
+import { resolveScenario } from '../../src/lib/scenario/resolve';
 import { decodeScenarioParam, decodeScenarioQuery, encodeScenarioParam, SCENARIO_PARAM } from '../../src/lib/scenario/url';
 import { listMaterials } from '../../src/lib/materials';
 import { check, deeplyNested, hostileValue, prototypePolluted, real, RUNS } from './support';
@@ -72,7 +73,8 @@ const emission = fc.oneof(
     })
 );
 
-const validScenario: fc.Arbitrary<Scenario> = fc
+/** Scenarios valid field by field; a library formula may still have no index at the wavelength (GaAs below 875 nm). */
+const wellFormedScenario: fc.Arbitrary<Scenario> = fc
   .record({
     name,
     emission,
@@ -132,7 +134,30 @@ const validScenario: fc.Arbitrary<Scenario> = fc
     return radiusMm >= min && radiusMm <= max && heightMm >= min && heightMm <= max;
   });
 
+function resolves(s: Scenario): boolean {
+  try {
+    resolveScenario(s);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+const validScenario = wellFormedScenario.filter(resolves);
+
 describe('valid scenarios', () => {
+  it(`are accepted only when every material gives an index at the design wavelength (${RUNS.fuzz / 2} cases)`, () => {
+    check(
+      'scenario accepted implies resolvable',
+      fc.property(wellFormedScenario, (s) => {
+        const parsed = parseScenario(s);
+        expect(parsed.ok, 'accepted exactly when it resolves').toBe(resolves(s));
+        if (!parsed.ok) expectNamesAField(parsed.issues[0].message);
+      }),
+      RUNS.fuzz / 2
+    );
+  });
+
   it(`parse, and round-trip exactly through JSON and through the link (${RUNS.fuzz / 2} cases)`, () => {
     check(
       'scenario round trip',

@@ -4,7 +4,9 @@
  * Older versions are lifted by `migrateScenario` before they reach this schema.
  */
 import { z } from 'zod';
-import { findMaterial, validateUserMaterial } from '../materials/index';
+import { findMaterial, indexAt, validateUserMaterial } from '../materials/index';
+import type { Material } from '../materials/types';
+import { designWavelengthNm } from './resolve';
 import { LIMITS, MATERIAL_ID_PATTERN, type NumberLimit, rangeMessage } from './limits';
 
 export const SCENARIO_VERSION = 2;
@@ -166,6 +168,7 @@ const objectSchema = z
 
 type ObjectScenario = z.infer<typeof objectSchema>;
 type Ctx = z.RefinementCtx<ObjectScenario>;
+type MediumSpecIn = ObjectScenario['outside'];
 
 function checkMaterial(ctx: Ctx, path: (string | number)[], field: string, id: string, wantMetal: boolean): void {
   if (!MATERIAL_ID_PATTERN.test(id)) return; // already reported by the field's own check
@@ -185,6 +188,20 @@ function checkUserMaterial(ctx: Ctx, path: (string | number)[], field: string, m
   }
 }
 
+/**
+ * A material must give an index at the design wavelength: a formula with a pole between that wavelength
+ * and its data range cannot (the library's RangeError says why), and the scenario is refused there.
+ */
+function checkIndexExists(ctx: Ctx, path: (string | number)[], field: string, m: Material | undefined, wavelengthNm: number): void {
+  if (!m) return;
+  try {
+    indexAt(m, wavelengthNm);
+  } catch (error) {
+    const why = error instanceof Error ? error.message : String(error);
+    ctx.addIssue({ code: 'custom', path, message: `${field}: ${why.replace(/\.?$/, '.')}` });
+  }
+}
+
 function fmtMm(x: number): string {
   return `${Number(x.toPrecision(3))} mm`;
 }
@@ -199,6 +216,14 @@ function crossChecks(s: ObjectScenario, ctx: Ctx): void {
   if (s.encapsulant.medium.kind === 'user')
     checkUserMaterial(ctx, ['encapsulant', 'medium', 'material'], 'Encapsulant material', s.encapsulant.medium.material);
   if (s.outside.kind === 'user') checkUserMaterial(ctx, ['outside', 'material'], 'Outside medium material', s.outside.material);
+
+  const wl = designWavelengthNm(s.emission);
+  const library = (spec: { kind: string; id?: string }) => (spec.kind === 'material' && spec.id ? findMaterial(spec.id) : undefined);
+  const materialOf = (spec: MediumSpecIn) => (spec.kind === 'user' ? spec.material : library(spec));
+  checkIndexExists(ctx, ['chip', 'medium'], 'Chip material', materialOf(s.chip.medium), wl);
+  checkIndexExists(ctx, ['encapsulant', 'medium'], 'Encapsulant material', materialOf(s.encapsulant.medium), wl);
+  checkIndexExists(ctx, ['outside'], 'Outside medium material', materialOf(s.outside), wl);
+  if (s.base.kind === 'metal') checkIndexExists(ctx, ['base', 'id'], 'Base metal', findMaterial(s.base.id), wl);
   if (s.base.kind === 'metal') checkMaterial(ctx, ['base', 'id'], 'Base metal', s.base.id, true);
 
   if (s.chip.emitterZMm > s.chip.heightMm) {

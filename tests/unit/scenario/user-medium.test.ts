@@ -90,3 +90,14 @@ describe('a scenario carrying a user material', () => {
     expect(r.ok && r.migratedFrom).toBe(1);
   });
 });
+
+describe('a material with no index at the scenario wavelength', () => {
+  // GaAs's formula (the library's Skauli et al. entry) has a pole at 874.6 nm, below its 970 nm data range.
+  it('is refused where it is chosen, with the library’s reason, instead of failing later', () => {
+    const s = demoScenario() as unknown as Record<string, unknown> & Scenario;
+    s.chip.medium = { kind: 'material', id: 'gaas' };
+    expect(firstMessage(s)).toMatch(/^Chip material: GaAs \(transparent region\): its dispersion formula has a pole at 874\.6 nm/);
+    s.emission = { kind: 'single', wavelengthNm: 1000 };
+    expect(parseScenario(s).ok).toBe(true);
+  });
+});
