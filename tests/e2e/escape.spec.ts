@@ -142,3 +142,15 @@ test('the link reopens the same view, and the JSON export carries inputs, result
   expect(doc.results.cuboidChip).toHaveLength(3);
   expect(doc.scenario.version).toBe(2);
 });
+
+test('a library material with no index at the wavelength: a message beside the field, the scenario chip instead, no failure', async ({ page }) => {
+  const errors: string[] = [];
+  page.on('pageerror', (e) => errors.push(e.message));
+  await page.goto('/escape');
+  const withChip = (await page.getByTestId('critical-angle').textContent()) ?? '';
+  // GaAs's formula (library entry) has a pole at 874.6 nm, between 450 nm and its 970 nm data range
+  await page.getByLabel('Inside medium (light starts here)').selectOption({ label: 'GaAs (transparent region)' });
+  await expect(page.getByRole('alert').filter({ hasText: /pole at 874\.6 nm.*the scenario chip is used instead\./ })).toBeVisible();
+  await expect(page.getByTestId('critical-angle')).toHaveText(withChip); // the scenario chip's result, unchanged
+  expect(errors).toEqual([]);
+});

@@ -54,3 +54,20 @@ export function sideValue(side: Side, r: ResolvedScenario): SideValue {
   const m = side.kind === 'scenario' ? r[side.part] : resolveMedium({ kind: 'material', id: side.id }, r.wavelengthNm);
   return { n: m.n, label: m.label, warning: m.warning };
 }
+
+/**
+ * The side's value, or — when a library formula gives no index at this wavelength (a pole between it
+ * and the data range) — the value of a scenario part instead and the reason, so the page shows a
+ * message and keeps computing instead of failing.
+ */
+export function sideValueOr(side: Side, fallback: ScenarioPart, r: ResolvedScenario): { value: SideValue; error: string | null } {
+  try {
+    return { value: sideValue(side, r), error: null };
+  } catch (error) {
+    const why = error instanceof Error ? error.message : String(error);
+    return {
+      value: sideValue({ kind: 'scenario', part: fallback }, r),
+      error: `${why.replace(/\.?$/, '')}; the ${PART_NAMES[fallback].toLowerCase()} is used instead.`
+    };
+  }
+}
