@@ -42,7 +42,7 @@ test.beforeEach(async ({ page }) => {
   await page.goto('/stack');
   await expect(page.getByRole('heading', { level: 1, name: 'Layer stack' })).toBeVisible();
   // The page has started once the stack is in the link.
-  await expect(page).toHaveURL(/[?&]stack=1\./);
+  await expect(page).toHaveURL(/[?&]stack=2\./);
 });
 
 test('the starting stack shows R, T, A, extraction against bare, the trapped-light sentences and three drawn charts', async ({ page }) => {
@@ -183,7 +183,7 @@ test('the link reopens the same stack, and a reload keeps it', async ({ page, br
   await page.getByRole('button', { name: 'Add graded-index section' }).click();
   await page.getByLabel('Graded section 2 profile').selectOption('quintic');
   const extraction = await page.getByTestId('extraction').innerText();
-  await expect(page).toHaveURL(/stack=1\./);
+  await expect(page).toHaveURL(/stack=2\./);
   const url = page.url();
 
   const other = await browser.newContext();

@@ -105,3 +105,23 @@ test('a chip material with no index at the wavelength is refused beside the fiel
   await expect(panel(page)).toContainText('GaAs (transparent region) n 3.');
   await expect(page.locator('main')).not.toContainText('NaN');
 });
+
+test('a stack link carries the user material of its layer to a browser that does not have it', async ({ page, browser }) => {
+  await addCauchySilicone(page, 'Bench film');
+  await page.goto('/stack');
+  await page.getByLabel('Layer 1 material').selectOption({ label: 'Bench film (user)' });
+  // Cauchy n = 1.5 + 0.004/λ² (λ in µm) at 450 nm: 1.5198 (exact arithmetic), shown to four digits
+  await expect(page.getByText('n = 1.520 at 450 nm')).toBeVisible();
+  const link = page.url();
+
+  const other = await browser.newContext();
+  const receiver = await other.newPage();
+  await receiver.goto(link);
+  const picker = receiver.getByLabel('Layer 1 material');
+  await expect(picker.locator('option:checked')).toHaveText('Bench film (user)');
+  await expect(picker.locator('optgroup[label="In this stack only (user)"] option')).toHaveText(['Bench film (user)']);
+  await expect(receiver.getByText('n = 1.520 at 450 nm')).toBeVisible();
+  await expect(receiver.locator('main')).not.toContainText('Missing material');
+  await expect(receiver.locator('main')).not.toContainText('NaN');
+  await other.close();
+});

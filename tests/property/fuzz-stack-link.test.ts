@@ -36,10 +36,11 @@ const gradedItem: fc.Arbitrary<StackItem> = fc.record({
   sublayers: fc.integer({ min: 1, max: 12 })
 });
 const validDoc: fc.Arbitrary<StackDoc> = fc.record({
-  version: fc.constant(1 as const),
+  version: fc.constant(2 as const),
   mode: fc.constantFrom('thin', 'thick') as fc.Arbitrary<'thin' | 'thick'>,
   exit: fc.constantFrom('encapsulant', 'outside') as fc.Arbitrary<'encapsulant' | 'outside'>,
-  items: fc.array(fc.oneof({ weight: 3, arbitrary: layerItem }, { weight: 1, arbitrary: gradedItem }), { maxLength: 5 })
+  items: fc.array(fc.oneof({ weight: 3, arbitrary: layerItem }, { weight: 1, arbitrary: gradedItem }), { maxLength: 5 }),
+  userMaterials: fc.constant([])
 });
 
 function b64url(text: string): string {

@@ -4,10 +4,15 @@
  * the chip and the exit medium come from the scenario, the layers from here.
  */
 import { z } from 'zod';
+import { findMaterial, validateUserMaterial } from '$lib/materials';
+import type { Material } from '$lib/materials/types';
 import type { IndexProfile } from '$lib/optics';
 import { rangeMessage, type NumberLimit } from '$lib/scenario/limits';
 
-export const STACK_VERSION = 1;
+/** Version 2 added `userMaterials`; a version-1 stack is read as version 2 carrying none. */
+export const STACK_VERSION = 2;
+/** Most user materials one stack carries (one per layer at most). */
+const MAX_CARRIED = 200;
 
 /** Every limit of the stack page; messages quote these numbers. */
 export const STACK_LIMITS = {
@@ -60,6 +65,11 @@ export interface StackDoc {
   exit: ExitChoice;
   /** Layers from the chip outwards. */
   items: StackItem[];
+  /**
+   * The user's own materials the layers use, in full, so that a link works in a browser that does not
+   * have them (see {@link carryUserMaterials}).
+   */
+  userMaterials: Material[];
 }
 
 export const PROFILES: readonly IndexProfile[] = ['linear', 'quintic', 'exponential'];
@@ -70,8 +80,27 @@ export function defaultStack(): StackDoc {
     version: STACK_VERSION,
     mode: 'thin',
     exit: 'encapsulant',
-    items: [{ kind: 'layer', medium: { kind: 'material', id: 'sio2' }, thicknessNm: 100 }]
+    items: [{ kind: 'layer', medium: { kind: 'material', id: 'sio2' }, thicknessNm: 100 }],
+    userMaterials: []
   };
+}
+
+/**
+ * The stack with `userMaterials` set to the definitions of exactly the non-library materials its layers
+ * use, taken from `lookup` (the user's own list) or else from what the stack already carries; ids found
+ * in neither stay unresolved (the page says the material is missing).
+ */
+export function carryUserMaterials(doc: StackDoc, lookup: (id: string) => Material | undefined): StackDoc {
+  const carried = new Map(doc.userMaterials.map((m) => [m.id, m]));
+  const out = new Map<string, Material>();
+  for (const it of doc.items) {
+    if (it.kind !== 'layer' || it.medium.kind !== 'material' || out.has(it.medium.id)) continue;
+    const id = it.medium.id;
+    if (findMaterial(id)?.id === id) continue;
+    const m = lookup(id) ?? carried.get(id);
+    if (m) out.set(id, m);
+  }
+  return { ...doc, userMaterials: [...out.values()] };
 }
 
 function num(field: string, limit: NumberLimit) {
@@ -107,12 +136,26 @@ const itemSchema = z.discriminatedUnion(
   { error: 'A stack item is a layer or a graded-index section.' }
 );
 
-const docSchema = z.strictObject({
-  version: z.literal(STACK_VERSION, { error: `Stack version must be ${STACK_VERSION}.` }),
-  mode: z.enum(['thin', 'thick'], { error: "Mode must be 'thin' or 'thick'." }),
-  exit: z.enum(['encapsulant', 'outside'], { error: "Exit medium must be 'encapsulant' or 'outside'." }),
-  items: z.array(itemSchema, { error: 'Items must be a list of layers.' })
+/** A carried user material, checked by the same rules as an imported user-materials file. */
+const carriedMaterial = z.unknown().transform((raw, ctx) => {
+  const r = validateUserMaterial(raw);
+  if (r.ok) return r.material;
+  ctx.addIssue({ code: 'custom', message: `User material in the stack: ${r.errors[0].message}.` });
+  return z.NEVER;
 });
+
+const docSchema = z
+  .strictObject({
+    version: z.union([z.literal(1), z.literal(STACK_VERSION)], { error: `Stack version must be 1 or ${STACK_VERSION}.` }),
+    mode: z.enum(['thin', 'thick'], { error: "Mode must be 'thin' or 'thick'." }),
+    exit: z.enum(['encapsulant', 'outside'], { error: "Exit medium must be 'encapsulant' or 'outside'." }),
+    items: z.array(itemSchema, { error: 'Items must be a list of layers.' }),
+    userMaterials: z
+      .array(carriedMaterial, { error: 'User materials must be a list of materials.' })
+      .max(MAX_CARRIED, { error: `A stack carries at most ${MAX_CARRIED} user materials.` })
+      .optional()
+  })
+  .transform((d): StackDoc => ({ ...d, version: STACK_VERSION, userMaterials: d.userMaterials ?? [] }));
 
 /** Number of layers the stack is computed with: one per layer, `sublayers` per graded section. */
 export function expandedCount(items: readonly StackItem[]): number {
@@ -151,7 +194,7 @@ export function checkStack(input: unknown): StackCheck {
     const at = issue.path[0] === 'items' && typeof issue.path[1] === 'number' ? `Item ${issue.path[1] + 1}: ` : '';
     return { ok: false, message: at + issue.message };
   }
-  const doc = r.data as StackDoc;
+  const doc = r.data;
   const count = layerCountProblem(doc.items);
   if (count) return { ok: false, message: count };
   if (doc.mode === 'thin') {

@@ -6,11 +6,16 @@
 import { browser } from '$app/environment';
 import { replaceState } from '$app/navigation';
 import { page } from '$app/state';
-import { checkStack, defaultStack, type StackDoc } from './stack-doc';
+import { userMaterials } from '$lib/materials-user';
+import { carryUserMaterials, checkStack, defaultStack, type StackDoc } from './stack-doc';
 import { decodeStackParam, encodeStackParam, STACK_PARAM } from './stack-url';
 
 /** localStorage key; the number is the stack version written under it. */
-export const STACK_KEY = 'outcouple.stack.v1';
+export const STACK_KEY = 'outcouple.stack.v2';
+/** The key version 1 wrote: read (and lifted) when the current one is empty, never written. */
+const OLDER_STACK_KEY = 'outcouple.stack.v1';
+
+const userLookup = (id: string) => userMaterials.list.find((m) => m.id === id);
 
 export class StackStore {
   /** The current, always valid stack. Replace it through `set`. */
@@ -37,6 +42,8 @@ export class StackStore {
     } else {
       this.doc = fallback;
     }
+    // A stack saved before stacks carried user materials gets their definitions now
+    this.doc = carryUserMaterials(this.doc, userLookup);
     this.#save();
     this.writeUrl();
     return () => {
@@ -44,9 +51,12 @@ export class StackStore {
     };
   }
 
-  /** Makes `next` the stack if it is valid (saved and put in the link). Returns null, or the message naming the problem. */
+  /**
+   * Makes `next` the stack if it is valid (saved and put in the link), carrying the definitions of the
+   * user materials its layers use. Returns null, or the message naming the problem.
+   */
   set(next: StackDoc): string | null {
-    const r = checkStack(next);
+    const r = checkStack(carryUserMaterials(next, userLookup));
     if (!r.ok) return r.message;
     this.doc = r.doc;
     this.#save();
@@ -85,7 +95,7 @@ export class StackStore {
     const s = this.#storage();
     if (!s) return null;
     try {
-      const text = s.getItem(STACK_KEY);
+      const text = s.getItem(STACK_KEY) ?? s.getItem(OLDER_STACK_KEY);
       if (!text) return null;
       const r = checkStack(JSON.parse(text));
       return r.ok ? r.doc : null;

@@ -3,6 +3,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
+  carryUserMaterials,
   checkStack,
   defaultStack,
   expandedCount,
@@ -71,13 +72,14 @@ describe('nmToUm / umToNm', () => {
 
 describe('encodeStackParam / decodeStackParam', () => {
   const doc: StackDoc = {
-    version: 1,
+    version: 2,
     mode: 'thick',
     exit: 'outside',
     items: [
       { kind: 'layer', medium: { kind: 'index', n: 1.8, k: 0.01 }, thicknessNm: 1234.5 },
       { kind: 'graded', fromN: 2.4, toN: 1.41, thicknessNm: 50_000, profile: 'quintic', sublayers: 20 }
-    ]
+    ],
+    userMaterials: []
   };
 
   it('round-trips a stack exactly', () => {
@@ -99,5 +101,49 @@ describe('encodeStackParam / decodeStackParam', () => {
     const d = decodeStackParam(bad, fallback);
     expect(d.doc).toBe(fallback);
     expect(d.message).toMatch(/not valid: Item 1: Number of sublayers must be a whole number between 1 and 200 sublayers\./);
+  });
+});
+
+describe('user materials carried by a stack (version 2)', () => {
+  // A user's film as a Cauchy formula: n = 1.9 + 0.01/λ² (λ in µm).
+  const film = { id: 'my-film', name: 'My film', aliases: [], category: 'layer' as const, dispersion: { model: 'cauchy' as const, A: 1.9, B: 0.01, C: 0 }, validRangeNm: { min: 400, max: 800 }, source: 'user supplied', provenance: 'user supplied' as const };
+  const withFilm: StackDoc = {
+    ...defaultStack(),
+    items: [
+      { kind: 'layer', medium: { kind: 'material', id: 'sio2' }, thicknessNm: 100 },
+      { kind: 'layer', medium: { kind: 'material', id: 'my-film' }, thicknessNm: 80 },
+      { kind: 'layer', medium: { kind: 'material', id: 'my-film' }, thicknessNm: 40 }
+    ]
+  };
+
+  it('carries exactly the non-library materials the layers use, once each', () => {
+    const carried = carryUserMaterials(withFilm, (id) => (id === 'my-film' ? film : undefined));
+    expect(carried.userMaterials).toEqual([film]);
+    const none = carryUserMaterials({ ...withFilm, items: withFilm.items.slice(0, 1) }, () => film);
+    expect(none.userMaterials).toEqual([]);
+  });
+
+  it('keeps a carried definition when this browser does not have the material', () => {
+    const fromLink = { ...withFilm, userMaterials: [film] };
+    expect(carryUserMaterials(fromLink, () => undefined).userMaterials).toEqual([film]);
+  });
+
+  it('round-trips through a link with the definition, so the receiver can compute the layer', () => {
+    const carried = carryUserMaterials(withFilm, () => film);
+    const d = decodeStackParam(encodeStackParam(carried));
+    expect(d.message).toBeNull();
+    expect(d.doc.userMaterials).toEqual([film]);
+  });
+
+  it('reads a version-1 stack as version 2 carrying nothing', () => {
+    const { userMaterials: _none, ...v1 } = { ...defaultStack(), version: 1 };
+    const r = checkStack(v1);
+    expect(r.ok && r.doc).toEqual(defaultStack());
+  });
+
+  it('refuses a carried material that breaks the user-material rules, naming it', () => {
+    const r = checkStack({ ...withFilm, userMaterials: [{ ...film, id: 'sio2' }] });
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.message).toMatch(/^User material in the stack: id "sio2" belongs to a library material/);
   });
 });

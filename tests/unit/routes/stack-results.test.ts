@@ -9,7 +9,7 @@ import { assertInDelta } from '../../support/assert';
 
 const find = (id: string) => findMaterial(id);
 const typed = (n: number, thicknessNm: number, k = 0): StackItem => ({ kind: 'layer', medium: { kind: 'index', n, k }, thicknessNm });
-const doc = (mode: 'thin' | 'thick', items: StackItem[]): StackDoc => ({ version: 1, mode, exit: 'outside', items });
+const doc = (mode: 'thin' | 'thick', items: StackItem[]): StackDoc => ({ version: 2, mode, exit: 'outside', items, userMaterials: [] });
 const medium = (n: number, label = 'typed') => ({ label, n, k: 0 });
 
 function results(d: StackDoc, nChip: number, nExit: number, wavelengthNm = 450) {
