@@ -19,6 +19,6 @@ export { listMaterials, findMaterial } from './library';
 export { indexAt } from './dispersion';
 export { polesNm } from './poles';
 export { resolveIndex } from './resolve-index';
-export { validateUserMaterial, type UserMaterialResult } from './user-material';
+export { userMaterialField, validateUserMaterial, type UserMaterialResult } from './user-material';
 export { parseNkTable, type NkTableResult, MICROMETRE_THRESHOLD } from './nk-table';
 export { materialSchema } from './material-schema';

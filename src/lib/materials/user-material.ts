@@ -2,6 +2,7 @@
  * Checks a material the user supplies as JSON (a file, a pasted object, or a table wrapped by the
  * page) and returns it ready for `indexAt`, or a list of field errors naming the allowed ranges.
  */
+import { z } from 'zod';
 import { listMaterials } from './library';
 import { materialSchema } from './material-schema';
 import type { FieldError, Material } from './types';
@@ -55,4 +56,18 @@ function tableSpan(dispersion: unknown): { min: number; max: number } | undefine
   const last = Array.isArray(d.rows[d.rows.length - 1]) ? d.rows[d.rows.length - 1][0] : undefined;
   if (typeof first !== 'number' || typeof last !== 'number') return undefined;
   return { min: first, max: last };
+}
+
+/**
+ * A schema field holding a user material carried inside another document (a scenario, a stack),
+ * checked by {@link validateUserMaterial}; the first problem is reported as "<where>: <problem>.".
+ * @param where names the field in the message, e.g. "Encapsulant user material"
+ */
+export function userMaterialField(where: string) {
+  return z.unknown().transform((raw, ctx) => {
+    const r = validateUserMaterial(raw);
+    if (r.ok) return r.material;
+    ctx.addIssue({ code: 'custom', message: `${where}: ${r.errors[0].message}.` });
+    return z.NEVER;
+  });
 }

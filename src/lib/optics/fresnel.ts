@@ -81,36 +81,25 @@ export function fresnelReal(cosThetaI: number, etaI: number, etaT: number, out: 
   return true;
 }
 
-/** Length of the buffer {@link fresnelAmplitudesReal} fills. */
+/** Length of the buffer {@link fresnelAmplitudesAt} fills. */
 export const FRESNEL_AMPLITUDES_LENGTH = 8;
 
 /**
  * Complex amplitude coefficients of a lossless dielectric interface, including the phase shifts of
- * total internal reflection. Hot path: allocates nothing; agrees with {@link fresnelComplex} for k = 0.
+ * total internal reflection. Hot path: allocates nothing, and takes its numbers in an array so that a
+ * call the engine does not inline boxes nothing (the polarisation-tracking tracer); agrees with
+ * {@link fresnelComplex} for k = 0.
  *
  *   below the critical angle (all real): rs, rp as in fresnelReal,
  *     ts = 2 etaI cosθi/(etaI cosθi + etaT cosθt),  tp = 2 etaI cosθi/(etaT cosθi + etaI cosθt)
  *   beyond it, with a = etaI cosθi, q = √(etaI² sin²θi − etaT²), c = etaT² cosθi, e = etaI q:
  *     rs = (a − iq)/(a + iq),  rp = (c − ie)/(c + ie)  (|rs| = |rp| = 1),  ts = tp = 0 (no travelling wave)
  *
- * @param cosThetaI cosine of the angle of incidence, [0, 1]
- * @param etaI index on the incident side (> 0); @param etaT index on the far side (> 0)
+ * @param inp [cos θi in [0, 1], index on the incident side (> 0), index on the far side (> 0)]; may be out
  * @param out receives Re rs, Im rs, Re rp, Im rp, Re ts, Im ts, Re tp, Im tp; length ≥ 8
  * @returns true if light is transmitted; false on total internal reflection (exactly critical included)
- * @example fresnelAmplitudesReal(1, 1, 1.5, out) // out[0] = −0.2, out[2] = +0.2 (rp = −rs at normal incidence)
+ * @example fresnelAmplitudesAt(Float64Array.of(1, 1, 1.5), out) // out[0] = −0.2, out[2] = +0.2 (rp = −rs at normal incidence)
  * @see M. Born, E. Wolf, Principles of Optics, §1.5.2 (coefficients) and §1.5.4 (total reflection)
- */
-export function fresnelAmplitudesReal(cosThetaI: number, etaI: number, etaT: number, out: Float64Array): boolean {
-  out[0] = cosThetaI;
-  out[1] = etaI;
-  out[2] = etaT;
-  return fresnelAmplitudesAt(out, out);
-}
-
-/**
- * {@link fresnelAmplitudesReal} with its numbers in an array — inp = [cos θi, etaI, etaT] — so that a
- * call the engine does not inline boxes nothing (the polarisation-tracking tracer's hot path).
- * inp may be out.
  */
 export function fresnelAmplitudesAt(inp: Float64Array, out: Float64Array): boolean {
   const cosI = checkCos(inp[0]);

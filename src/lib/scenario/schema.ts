@@ -4,7 +4,7 @@
  * Older versions are lifted by `migrateScenario` before they reach this schema.
  */
 import { z } from 'zod';
-import { findMaterial, indexAt, validateUserMaterial } from '../materials/index';
+import { findMaterial, indexAt, userMaterialField } from '../materials/index';
 import type { Material } from '../materials/types';
 import { designWavelengthNm } from './resolve';
 import { LIMITS, MATERIAL_ID_PATTERN, type NumberLimit, rangeMessage } from './limits';
@@ -40,20 +40,6 @@ function objectMessages(field: string) {
 }
 
 /**
- * A user material carried inside the scenario, checked by the library's own user-material rules
- * (the same as an imported file); the first problem is reported, naming the field.
- */
-function userMaterial(field: string) {
-  return z.unknown().transform((raw, ctx) => {
-    const r = validateUserMaterial(raw);
-    if (r.ok) return r.material;
-    const e = r.errors[0];
-    ctx.addIssue({ code: 'custom', message: `${field} user material: ${e.message}.` });
-    return z.NEVER;
-  });
-}
-
-/**
  * A medium: a library material (indices taken at the scenario wavelength), a typed index n + ik, or
  * one of the user's own materials, carried in full.
  */
@@ -63,7 +49,7 @@ function medium(field: string) {
     'kind',
     [
       z.object({ kind: z.literal('material'), id: materialId(`${field} material`) }, own).strict(),
-      z.object({ kind: z.literal('user'), material: userMaterial(field) }, own).strict(),
+      z.object({ kind: z.literal('user'), material: userMaterialField(`${field} user material`) }, own).strict(),
       z
         .object(
           {
@@ -218,8 +204,8 @@ function crossChecks(s: ObjectScenario, ctx: Ctx): void {
   if (s.outside.kind === 'user') checkUserMaterial(ctx, ['outside', 'material'], 'Outside medium material', s.outside.material);
 
   const wl = designWavelengthNm(s.emission);
-  const library = (spec: { kind: string; id?: string }) => (spec.kind === 'material' && spec.id ? findMaterial(spec.id) : undefined);
-  const materialOf = (spec: MediumSpecIn) => (spec.kind === 'user' ? spec.material : library(spec));
+  // A library id that is not in the library was reported above; here it has no material to check.
+  const materialOf = (spec: MediumSpecIn) => (spec.kind === 'user' ? spec.material : spec.kind === 'material' ? findMaterial(spec.id) : undefined);
   checkIndexExists(ctx, ['chip', 'medium'], 'Chip material', materialOf(s.chip.medium), wl);
   checkIndexExists(ctx, ['encapsulant', 'medium'], 'Encapsulant material', materialOf(s.encapsulant.medium), wl);
   checkIndexExists(ctx, ['outside'], 'Outside medium material', materialOf(s.outside), wl);

@@ -4,7 +4,7 @@
  * the chip and the exit medium come from the scenario, the layers from here.
  */
 import { z } from 'zod';
-import { findMaterial, validateUserMaterial } from '$lib/materials';
+import { findMaterial, userMaterialField } from '$lib/materials';
 import type { Material } from '$lib/materials/types';
 import type { IndexProfile } from '$lib/optics';
 import { rangeMessage, type NumberLimit } from '$lib/scenario/limits';
@@ -136,14 +136,6 @@ const itemSchema = z.discriminatedUnion(
   { error: 'A stack item is a layer or a graded-index section.' }
 );
 
-/** A carried user material, checked by the same rules as an imported user-materials file. */
-const carriedMaterial = z.unknown().transform((raw, ctx) => {
-  const r = validateUserMaterial(raw);
-  if (r.ok) return r.material;
-  ctx.addIssue({ code: 'custom', message: `User material in the stack: ${r.errors[0].message}.` });
-  return z.NEVER;
-});
-
 const docSchema = z
   .strictObject({
     version: z.union([z.literal(1), z.literal(STACK_VERSION)], { error: `Stack version must be 1 or ${STACK_VERSION}.` }),
@@ -151,7 +143,7 @@ const docSchema = z
     exit: z.enum(['encapsulant', 'outside'], { error: "Exit medium must be 'encapsulant' or 'outside'." }),
     items: z.array(itemSchema, { error: 'Items must be a list of layers.' }),
     userMaterials: z
-      .array(carriedMaterial, { error: 'User materials must be a list of materials.' })
+      .array(userMaterialField('User material in the stack'), { error: 'User materials must be a list of materials.' })
       .max(MAX_CARRIED, { error: `A stack carries at most ${MAX_CARRIED} user materials.` })
       .optional()
   })
