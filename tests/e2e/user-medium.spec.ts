@@ -77,6 +77,20 @@ async function demoFromLink(browser: Browser): Promise<Record<string, unknown>> 
   return JSON.parse(Buffer.from(param.slice(2), 'base64url').toString('utf8'));
 }
 
+test('a saved layer stack that cannot be read is set aside too, and the starting stack shown', async ({ page }) => {
+  await page.addInitScript(() => {
+    if (sessionStorage.getItem('seeded')) return;
+    sessionStorage.setItem('seeded', '1');
+    localStorage.setItem('outcouple.stack.v2', '{"version": 2, "mode": "sideways"}');
+  });
+  await page.goto('/stack');
+  const alert = page.getByRole('alert').filter({ hasText: 'Your saved layer stack could not be read' });
+  await expect(alert).toContainText('outcouple.stack.v2.unreadable');
+  await expect(alert).toContainText('Showing the starting stack.');
+  expect(await page.evaluate(() => localStorage.getItem('outcouple.stack.v2.unreadable'))).toBe('{"version": 2, "mode": "sideways"}');
+  await expect(page.getByLabel('Layer 1 thickness')).toHaveValue('100');
+});
+
 test('a scenario saved by the previous version is read, and the old entry is left in place', async ({ page, browser }) => {
   const v1 = JSON.stringify({ ...(await demoFromLink(browser)), version: 1, name: 'Saved before the upgrade' });
   // Seeded before the app's first script runs, once (an init script runs on every navigation)

@@ -8,6 +8,7 @@ import { browser } from '$app/environment';
 import { replaceState } from '$app/navigation';
 import { page } from '$app/state';
 import { DEMO_SCENARIO, demoScenario } from './defaults';
+import { loadSaved } from '$lib/components/saved-item';
 import { readScenario } from './read-scenario';
 import { resolveScenario, type ResolvedScenario } from './resolve';
 import { parseScenario, type ParseResult, type Scenario } from './schema';
@@ -17,8 +18,6 @@ import { decodeScenarioParam, encodeScenarioParam, SCENARIO_PARAM } from './url'
 export const STORAGE_KEY = 'outcouple.scenario.v2';
 /** Keys older versions wrote, newest first: read (and migrated) when the current key is empty, never written. */
 export const OLDER_STORAGE_KEYS = ['outcouple.scenario.v1'];
-/** Where a saved scenario that cannot be read is moved, untouched, before the key is written again. */
-export const UNREADABLE_KEY = `${STORAGE_KEY}.unreadable`;
 
 export const STORAGE_UNAVAILABLE =
   "Cannot save in this browser: the scenario is kept only in this tab's link.";
@@ -30,7 +29,7 @@ export class ScenarioStore {
   linkMessage: string | null = $state(null);
   /** Set when the browser refuses storage; the app keeps working without it. */
   storageMessage: string | null = $state(null);
-  /** Set when the saved scenario could not be read (it is kept under UNREADABLE_KEY), until dismissed. */
+  /** Set when the saved scenario could not be read (it is set aside, see loadSaved), until dismissed. */
   loadMessage: string | null = $state(null);
 
   /** The value of the `s` query parameter for the current scenario. */
@@ -150,44 +149,17 @@ export class ScenarioStore {
     }
   }
 
-  /**
-   * The saved scenario: the current key, else the newest older key (migrated; the old entry stays for
-   * an older version of the app). One that cannot be read is copied to UNREADABLE_KEY before anything
-   * overwrites it, and loadMessage says so.
-   */
+  /** The saved scenario (current key, else an older one, migrated); one that cannot be read is set aside and reported. */
   #load(): Scenario | null {
     const s = this.#storage();
     if (!s) return null;
-    for (const key of [STORAGE_KEY, ...OLDER_STORAGE_KEYS]) {
-      let text: string | null = null;
-      try {
-        text = s.getItem(key);
-      } catch {
-        return null;
-      }
-      if (!text) continue;
-      let reason: string;
-      try {
-        const r = readScenario(JSON.parse(text));
-        if (r.ok) return r.scenario;
-        reason = r.message;
-      } catch {
-        reason = 'it is not valid JSON.';
-      }
-      this.#keepUnreadable(s, key, text, reason);
-      return null;
-    }
-    return null;
-  }
-
-  #keepUnreadable(s: Storage, key: string, text: string, reason: string): void {
-    try {
-      if (key === STORAGE_KEY) s.setItem(UNREADABLE_KEY, text);
-      const where = key === STORAGE_KEY ? UNREADABLE_KEY : key;
-      this.loadMessage = `Your saved scenario could not be read (${reason.replace(/\.$/, '')}); it is kept untouched in this browser's storage under "${where}". Showing the demo scenario.`;
-    } catch {
-      this.loadMessage = `Your saved scenario could not be read (${reason.replace(/\.$/, '')}), and the browser refused to keep a copy. Showing the demo scenario.`;
-    }
+    const read = (raw: unknown) => {
+      const r = readScenario(raw);
+      return r.ok ? { ok: true as const, value: r.scenario } : r;
+    };
+    const loaded = loadSaved(s, [STORAGE_KEY, ...OLDER_STORAGE_KEYS], read, 'scenario', 'the demo scenario');
+    this.loadMessage = loaded.message;
+    return loaded.value;
   }
 
   #save(): void {

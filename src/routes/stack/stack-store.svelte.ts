@@ -6,6 +6,7 @@
 import { browser } from '$app/environment';
 import { replaceState } from '$app/navigation';
 import { page } from '$app/state';
+import { loadSaved } from '$lib/components/saved-item';
 import { userMaterials } from '$lib/materials-user';
 import { carryUserMaterials, checkStack, defaultStack, type StackDoc } from './stack-doc';
 import { decodeStackParam, encodeStackParam, STACK_PARAM } from './stack-url';
@@ -24,6 +25,8 @@ export class StackStore {
   linkMessage: string | null = $state(null);
   /** Set when the browser refuses storage. */
   storageMessage: string | null = $state(null);
+  /** Set when the saved stack could not be read (it is set aside, see loadSaved), until dismissed. */
+  loadMessage: string | null = $state(null);
   readonly param: string = $derived(encodeStackParam(this.doc));
 
   #started = false;
@@ -91,17 +94,17 @@ export class StackStore {
     }
   }
 
+  /** The saved stack (current key, else version 1's); one that cannot be read is set aside and reported. */
   #load(): StackDoc | null {
     const s = this.#storage();
     if (!s) return null;
-    try {
-      const text = s.getItem(STACK_KEY) ?? s.getItem(OLDER_STACK_KEY);
-      if (!text) return null;
-      const r = checkStack(JSON.parse(text));
-      return r.ok ? r.doc : null;
-    } catch {
-      return null;
-    }
+    const read = (raw: unknown) => {
+      const r = checkStack(raw);
+      return r.ok ? { ok: true as const, value: r.doc } : r;
+    };
+    const loaded = loadSaved(s, [STACK_KEY, OLDER_STACK_KEY], read, 'layer stack', 'the starting stack');
+    this.loadMessage = loaded.message;
+    return loaded.value;
   }
 
   #save(): void {
