@@ -22,6 +22,18 @@ async function addCauchySilicone(page: Page, name: string) {
   await expect(page.getByRole('status').filter({ hasText: `Added ${name}` })).toBeVisible();
 }
 
+/** Puts `value` under `key` before the app's first script runs, once (an init script runs on every navigation). */
+async function seedStorageOnce(page: Page, key: string, value: string) {
+  await page.addInitScript(
+    ([k, v]) => {
+      if (sessionStorage.getItem('seeded')) return;
+      sessionStorage.setItem('seeded', '1');
+      localStorage.setItem(k, v);
+    },
+    [key, value]
+  );
+}
+
 function panel(page: Page) {
   return page.getByRole('region', { name: 'Scenario', exact: true });
 }
@@ -52,11 +64,7 @@ test('a user material is chosen as encapsulant, travels in a link and can be kep
 });
 
 test('a saved scenario that cannot be read is set aside, not overwritten, and the user is told', async ({ page }) => {
-  await page.addInitScript(() => {
-    if (sessionStorage.getItem('seeded')) return;
-    sessionStorage.setItem('seeded', '1');
-    localStorage.setItem('outcouple.scenario.v2', '{"version": 2, "name": 42}');
-  });
+  await seedStorageOnce(page, 'outcouple.scenario.v2', '{"version": 2, "name": 42}');
   await page.goto('/');
   const alert = panel(page).getByRole('alert').filter({ hasText: 'Your saved scenario could not be read' });
   await expect(alert).toContainText('outcouple.scenario.v2.unreadable');
@@ -78,11 +86,7 @@ async function demoFromLink(browser: Browser): Promise<Record<string, unknown>> 
 }
 
 test('a saved layer stack that cannot be read is set aside too, and the starting stack shown', async ({ page }) => {
-  await page.addInitScript(() => {
-    if (sessionStorage.getItem('seeded')) return;
-    sessionStorage.setItem('seeded', '1');
-    localStorage.setItem('outcouple.stack.v2', '{"version": 2, "mode": "sideways"}');
-  });
+  await seedStorageOnce(page, 'outcouple.stack.v2', '{"version": 2, "mode": "sideways"}');
   await page.goto('/stack');
   const alert = page.getByRole('alert').filter({ hasText: 'Your saved layer stack could not be read' });
   await expect(alert).toContainText('outcouple.stack.v2.unreadable');
@@ -93,12 +97,7 @@ test('a saved layer stack that cannot be read is set aside too, and the starting
 
 test('a scenario saved by the previous version is read, and the old entry is left in place', async ({ page, browser }) => {
   const v1 = JSON.stringify({ ...(await demoFromLink(browser)), version: 1, name: 'Saved before the upgrade' });
-  // Seeded before the app's first script runs, once (an init script runs on every navigation)
-  await page.addInitScript((old) => {
-    if (sessionStorage.getItem('seeded')) return;
-    sessionStorage.setItem('seeded', '1');
-    localStorage.setItem('outcouple.scenario.v1', old);
-  }, v1);
+  await seedStorageOnce(page, 'outcouple.scenario.v1', v1);
   await page.goto('/');
   await expect(panel(page)).toContainText('Saved before the upgrade');
   expect(await page.evaluate(() => localStorage.getItem('outcouple.scenario.v1'))).toBe(v1);
