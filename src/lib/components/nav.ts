@@ -24,6 +24,11 @@ export const NAV_PAGES: readonly NavPage[] = [
     blurb: 'Gain from a dome encapsulant, the dome size that traps no light, and the package ray trace.'
   },
   { path: '/materials', label: 'Materials', blurb: 'The refractive index library, with sources and valid ranges.' },
+  {
+    path: '/variants',
+    label: 'Variants',
+    blurb: 'Kept variants of the scenario side by side: traced extraction, ratio to the first, ledgers and far fields.'
+  },
   { path: '/compare', label: 'Compare', blurb: 'Every encapsulant in the library ranked for this chip and dome.' },
   {
     path: '/claim',
