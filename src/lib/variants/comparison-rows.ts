@@ -12,6 +12,8 @@ export interface ComparisonCell {
   value: number;
   /** Standard error in the row's unit, or null for a figure without one. */
   sigma: number | null;
+  /** Decimal places the value and σ are given to (null: significant digits, shortest text). */
+  decimals: number | null;
 }
 
 export interface ComparisonRow {
@@ -32,11 +34,11 @@ const TRACE_PENDING = 'trace not finished';
 function est(e: Estimate | null | undefined, scale: number): ComparisonCell | null {
   if (!e || !Number.isFinite(e.value)) return null;
   const r = roundWithSigma(e.value * scale, e.sigma * scale);
-  return { value: r.value, sigma: r.sigma };
+  return { value: r.value, sigma: r.sigma, decimals: r.decimals };
 }
 
 function plain(x: number | null | undefined, digits: number): ComparisonCell | null {
-  return x === null || x === undefined || !Number.isFinite(x) ? null : { value: roundSignificant(x, digits), sigma: null };
+  return x === null || x === undefined || !Number.isFinite(x) ? null : { value: roundSignificant(x, digits), sigma: null, decimals: null };
 }
 
 /**
@@ -66,12 +68,12 @@ export function comparisonRows(variants: readonly VariantFigures[]): ComparisonR
     `Ratio to ${variants[0]?.name ?? 'the first variant'} (traced extraction)`,
     '×',
     'traced',
-    (f, i) => (i === 0 && f.traced ? { value: 1, sigma: null } : f.traced && first ? est(ratioWithSigma(f.traced.extraction, first), 1) : null),
+    (f, i) => (i === 0 && f.traced ? { value: 1, sigma: null, decimals: null } : f.traced && first ? est(ratioWithSigma(f.traced.extraction, first), 1) : null),
     (f) => (!f.traced || !variants[0]?.traced ? TRACE_PENDING : 'first variant extracts nothing')
   );
   add('bare', 'Bare chip on the same base, traced', '%', 'traced', (f) => est(f.traced?.bare, 100), pending);
   add('gain', 'Gain of the encapsulant (package ÷ bare chip)', '×', 'traced', (f) => est(f.traced?.gain, 1), pending);
-  add('rays', 'Rays traced (package)', 'rays', 'traced', (f) => (f.traced ? { value: f.traced.rays, sigma: null } : null), pending);
+  add('rays', 'Rays traced (package)', 'rays', 'traced', (f) => (f.traced ? { value: f.traced.rays, sigma: null, decimals: null } : null), pending);
 
   const cfWhy = (f: VariantFigures) => f.closedFormError ?? 'not defined';
   add('ideal', 'Ideal one-face reference under a dome (closed form)', '%', 'closed form', (f) => plain(f.closedForm && f.closedForm.idealOneFace * 100, 4), cfWhy);

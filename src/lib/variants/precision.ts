@@ -22,18 +22,23 @@ export function roundDecimals(x: number, decimals: number): number {
 
 /**
  * A value and its standard error at the error's precision: σ to two significant digits, the value to
- * the same decimal. 0.386374 ± 0.000973 → 0.38637 ± 0.00097. A σ of 0 or non-finite leaves the value
- * at `digits` significant digits.
+ * the same decimal, and that decimal (for text that keeps trailing zeros: 0.10 not 0.1).
+ * 38.6374 ± 0.0973 → 38.637 ± 0.097 (3 decimals); 46.1243 ± 0.0997 → 46.12 ± 0.10 (2 decimals).
+ * A σ of 0 or non-finite leaves the value at `digits` significant digits and `decimals` null.
  */
-export function roundWithSigma(value: number, sigma: number, digits = 4): { value: number; sigma: number } {
-  if (!(sigma > 0) || !Number.isFinite(sigma) || !Number.isFinite(value)) return { value: roundSignificant(value, digits), sigma };
-  // decimal of σ's second significant digit
-  const decimals = 1 - Math.floor(Math.log10(sigma));
+export function roundWithSigma(value: number, sigma: number, digits = 4): { value: number; sigma: number; decimals: number | null } {
+  if (!(sigma > 0) || !Number.isFinite(sigma) || !Number.isFinite(value)) return { value: roundSignificant(value, digits), sigma, decimals: null };
   const s = roundSignificant(sigma, 2);
-  return { value: roundDecimals(value, decimals), sigma: roundDecimals(s, decimals) };
+  // decimal of the rounded σ's second significant digit (σ = 0.0997 rounds to 0.10: two decimals)
+  const decimals = 1 - Math.floor(Math.log10(s));
+  return { value: roundDecimals(value, decimals), sigma: roundDecimals(s, decimals), decimals };
 }
 
-/** Decimal text of a rounded number (shortest form; powers of ten only beyond ±1e21 or below 1e-6). */
-export function decimalText(x: number): string {
-  return Number.isFinite(x) ? String(x) : '';
+/**
+ * Decimal text of a rounded number: with `decimals` (≥ 0) that many places, trailing zeros kept;
+ * otherwise the shortest form. Non-finite values give ''.
+ */
+export function decimalText(x: number, decimals: number | null = null): string {
+  if (!Number.isFinite(x)) return '';
+  return decimals !== null && decimals >= 0 ? x.toFixed(Math.min(decimals, 20)) : String(x);
 }

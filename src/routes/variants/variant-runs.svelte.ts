@@ -1,21 +1,17 @@
 /**
  * Background traces of the kept variants: each variant's package, then its bare chip on the same
- * base, VARIANT_RAYS rays each with the scenario's seed, one job at a time on the browser worker pool.
+ * base (variant-plan.ts), one job at a time on the browser worker pool.
  * Every call to the pool is in this file. Results are kept per scenario (a renamed variant is not
  * traced again); a removed variant's job is cancelled. Browser only (the pool starts Web Workers).
  */
-import { resolveScenario, toTracePackage } from '$lib/scenario/resolve';
 import type { Scenario } from '$lib/scenario/schema';
 import { encodeScenarioParam } from '$lib/scenario/url';
-import { bareChip } from '$lib/sweeps/vary-package';
 import type { TracePackage } from '$lib/trace/package-spec';
 import { startTrace } from '$lib/trace/trace-pool';
 import { summarize } from '$lib/trace/summary';
 import type { Variant } from '$lib/variants/variants-doc';
+import { variantPlan } from '$lib/variants/variant-plan';
 import { variantTrace, type VariantResult, type VariantTrace } from '$lib/variants/variant-result';
-
-/** Rays of each trace of a variant (package and bare chip): σ of an extraction near 40 % is about 0.1 %. */
-export const VARIANT_RAYS = 250_000;
 
 export type VariantRunStatus = 'queued' | 'running' | 'done' | 'error';
 
@@ -89,21 +85,19 @@ export class VariantRuns {
     const run = this.runs[job.key];
     run.status = 'running';
     try {
-      const pkg = toTracePackage(job.scenario, resolveScenario(job.scenario));
-      const seed = job.scenario.trace.seed;
-      const hasEncapsulant = pkg.encapsulant.shape !== 'none';
-      const parts = hasEncapsulant ? 2 : 1;
+      const plan = variantPlan(job.scenario);
+      const parts = plan.bare ? 2 : 1;
       const trace = (p: TracePackage, part: number): Promise<VariantTrace> => {
-        const handle = startTrace(p, { rays: VARIANT_RAYS, seed }, (done, total) => {
+        const handle = startTrace(p, { rays: plan.rays, seed: plan.seed }, (done, total) => {
           run.progress = (part + (total > 0 ? done / total : 1)) / parts;
         });
         cancelTrace = handle.cancel;
         if (cancelled) handle.cancel();
         return handle.result.then((tally) => variantTrace(summarize(tally)));
       };
-      const pack = await trace(pkg, 0);
-      const bare = hasEncapsulant ? await trace(bareChip(pkg), 1) : null;
-      run.result = { seed, package: pack, bareChip: bare };
+      const pack = await trace(plan.pkg, 0);
+      const bare = plan.bare ? await trace(plan.bare, 1) : null;
+      run.result = { seed: plan.seed, package: pack, bareChip: bare };
       run.progress = 1;
       run.status = 'done';
     } catch (error) {
