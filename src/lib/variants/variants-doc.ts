@@ -11,6 +11,8 @@ import { migrateScenario } from '../scenario/migrate';
 import { scenarioSchema, type Scenario } from '../scenario/schema';
 
 export const VARIANTS_VERSION = 1;
+/** Browser storage key; the number is the variants version written under it. */
+export const VARIANTS_STORAGE_KEY = 'outcouple.variants.v1';
 /** Most variants kept at once: one chart colour each (the palette has six). */
 export const MAX_VARIANTS = 6;
 /** Characters in a variant's name. */

@@ -9,12 +9,9 @@ import { replaceState } from '$app/navigation';
 import { page } from '$app/state';
 import { loadSaved } from '$lib/components/saved-item';
 import type { Scenario } from '$lib/scenario/schema';
-import { emptyVariants, readVariants, type VariantsDoc } from './variants-doc';
+import { emptyVariants, readVariants, VARIANTS_STORAGE_KEY, type VariantsDoc } from './variants-doc';
 import { keepVariant, removeVariant, renameVariant, type EditResult } from './variants-edit';
 import { decodeVariantsParam, encodeVariantsParam, VARIANTS_PARAM } from './variants-url';
-
-/** localStorage key; the number is the variants version written under it. */
-export const VARIANTS_STORAGE_KEY = 'outcouple.variants.v1';
 
 export class VariantsStore {
   /** The kept variants. Replace through the edit methods, never mutate. */
