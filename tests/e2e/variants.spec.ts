@@ -59,6 +59,7 @@ test('two kept variants are traced side by side with the ratio to the first, and
   expect(png.suggestedFilename()).toBe('variants-a-vs-b-charts.png');
   const bytes = await readFile((await png.path())!);
   expect(bytes.readUInt32BE(16)).toBe(1600); // PNG IHDR width
+  await png.saveAs('test-results/variants-charts.png');
 });
 
 test('rename, load into the panel, remove; a reload keeps the variants', async ({ page }) => {
@@ -98,5 +99,6 @@ for (const [w, h] of [[1366, 900], [390, 844]] as const) {
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
     expect(overflow).toBeLessThanOrEqual(0);
     await page.screenshot({ path: `test-results/variants-${w}x${h}.png`, fullPage: true });
+    await page.locator('section', { has: page.getByRole('heading', { name: 'Headline figures' }) }).screenshot({ path: `test-results/variants-table-${w}x${h}.png` });
   });
 }
