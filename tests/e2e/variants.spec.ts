@@ -79,6 +79,21 @@ test('rename, load into the panel, remove; a reload keeps the variants', async (
   await expect(page.getByTestId('variant-column')).toContainText('Phenyl');
 });
 
+test('the link carries the variants to another browser; kept variants it replaces can be brought back', async ({ page, browser }) => {
+  await keepAandB(page);
+  const link = page.url();
+  const other = await browser.newContext();
+  const there = await other.newPage();
+  await there.goto('/dome');
+  await keeper(there).getByRole('button', { name: 'Keep as variant A' }).click();
+  await there.goto(link);
+  await expect(there.getByTestId('variant-column')).toHaveCount(2);
+  await expect(there.getByRole('note').filter({ hasText: 'replace the 1 you had kept (A)' })).toBeVisible();
+  await there.getByRole('button', { name: 'Bring back my variants' }).click();
+  await expect(there.getByTestId('variant-column')).toHaveCount(1);
+  await other.close();
+});
+
 test('an unreadable saved set is set aside with a message', async ({ page }) => {
   await page.addInitScript(() => {
     if (sessionStorage.getItem('seeded')) return;

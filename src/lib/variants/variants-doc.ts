@@ -108,7 +108,7 @@ export function readVariants(raw: unknown): ReadVariantsResult {
   return { ok: true, value: p.data as VariantsDoc };
 }
 
-/** An empty document. */
+/** No variants kept. */
 export function emptyVariants(): VariantsDoc {
   return { version: VARIANTS_VERSION, variants: [] };
 }

@@ -8,7 +8,7 @@ import type { ComparisonRow } from './comparison-rows';
 import { VARIANTS_VERSION, type Variant } from './variants-doc';
 import type { VariantResult } from './variant-result';
 
-/** Format version of the comparison document. */
+/** Format version of the exported comparison file. */
 export const COMPARISON_FORMAT_VERSION = 1;
 
 /** CSV: figure, unit, then a value and a ± column per variant. An empty cell says why in the last column. */

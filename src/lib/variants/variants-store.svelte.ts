@@ -22,6 +22,8 @@ export class VariantsStore {
   linkMessage: string | null = $state(null);
   /** Set when the browser refuses storage. */
   storageMessage: string | null = $state(null);
+  /** The variants a link replaced (the user may bring them back), or null. */
+  replaced: VariantsDoc | null = $state.raw(null);
 
   readonly param: string = $derived(encodeVariantsParam(this.doc));
 
@@ -54,6 +56,8 @@ export class VariantsStore {
     if (!param || param === this.param) return;
     const d = decodeVariantsParam(param);
     if (d.ok) {
+      // The user's own kept variants are never dropped silently: they can be brought back.
+      if (this.doc.variants.length > 0) this.replaced = this.doc;
       this.doc = d.doc;
       this.#save();
     } else {
@@ -73,6 +77,14 @@ export class VariantsStore {
     } catch {
       history.replaceState(history.state, '', url);
     }
+  }
+
+  /** Brings back the variants a link replaced. */
+  restoreReplaced(): void {
+    if (!this.replaced) return;
+    this.doc = this.replaced;
+    this.replaced = null;
+    this.#save();
   }
 
   keep(scenario: Scenario, name?: string): EditResult {

@@ -9,7 +9,7 @@ import { readVariants, VARIANTS_VERSION, type VariantsDoc } from './variants-doc
 /** Name of the query parameter that carries the variants. */
 export const VARIANTS_PARAM = 'v';
 
-/** The value of the `v` parameter for a document. */
+/** The value of the `v` parameter for a set of variants: "1.eyJ2…". */
 export function encodeVariantsParam(doc: VariantsDoc): string {
   return `${doc.version}.${toBase64Url(JSON.stringify(doc))}`;
 }
