@@ -25,7 +25,9 @@ export interface ColorSummary {
   y: number;
   uPrime: number;
   vPrime: number;
+  /** Correlated colour temperature, K; null beyond 1000–100000 K or |Duv| > 0.05. */
   cctK: number | null;
+  /** Signed distance from the Planckian locus (CIE 1960 u, v); null only beyond 1000–100000 K. */
   duv: number | null;
   ra: number | null;
   /** R1…R14 (index 0 is R1; R9 is r[8]), or null. */
@@ -44,10 +46,12 @@ export function colorOfSpectrum(spectrum: ColorSpectrum): ColorSummary {
   const xy = xyOf(t);
   const uv = uvOf(t);
   const warnings: string[] = [];
-  const cct = cctOhno(uv);
-  if (!cct) warnings.push(`no CCT: the chromaticity is beyond the Planckian locus's ${CCT_RANGE_K.min}–${CCT_RANGE_K.max} K`);
-  else if (Math.abs(cct.duv) > CCT_DUV_LIMIT) {
-    warnings.push(`|Duv| = ${Math.abs(cct.duv).toFixed(4)} exceeds ${CCT_DUV_LIMIT}: the light is not white and its CCT means little (CIE 015:2018)`);
+  const nearest = cctOhno(uv);
+  // CCT is defined only near the locus (|Duv| ≤ 0.05); beyond it neither CCT nor a colour rendering index exists
+  const cct = nearest && Math.abs(nearest.duv) <= CCT_DUV_LIMIT ? nearest : null;
+  if (!nearest) warnings.push(`no CCT: the chromaticity is beyond the Planckian locus's ${CCT_RANGE_K.min}–${CCT_RANGE_K.max} K`);
+  else if (!cct) {
+    warnings.push(`no CCT: |Duv| = ${Math.abs(nearest.duv).toFixed(4)} exceeds ${CCT_DUV_LIMIT}, the light is not white (CIE 015:2018)`);
   }
   const cr = cct ? colorRendering(samples) : null;
   if (cct && !cr) warnings.push(`no colour rendering index: CCT outside ${CRI_CCT_RANGE_K.min}–${CRI_CCT_RANGE_K.max} K, where CIE 13.3 gives no reference illuminant`);
@@ -58,7 +62,7 @@ export function colorOfSpectrum(spectrum: ColorSpectrum): ColorSummary {
     X: t.X, Y: t.Y, Z: t.Z,
     x: xy.x, y: xy.y, uPrime: uv.u, vPrime: 1.5 * uv.v,
     cctK: cct ? cct.cctK : null,
-    duv: cct ? cct.duv : null,
+    duv: nearest ? nearest.duv : null,
     ra: cr ? cr.ra : null,
     r: cr ? cr.r : null,
     lerLmPerW: luminousEfficacyOfRadiation(t, spectrum),

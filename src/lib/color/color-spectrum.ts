@@ -20,9 +20,13 @@ export const COLOR_SPECTRUM_LIMITS = {
  * Checks rows [wavelength nm, spectral power] and builds a ColorSpectrum.
  * @param rows 2–100 000 rows; wavelengths in [100, 20000] nm, strictly ascending; power finite ≥ 0,
  *   with some power between 360 and 830 nm (where the CIE 1931 observer sees)
+ * @param rowName how errors name row i (0-based): "spectrum row i+1" by default; a file reader passes its line numbers
  * @throws RangeError naming the row (1-based) and the field
  */
-export function colorSpectrum(rows: ReadonlyArray<readonly [number, number]>): ColorSpectrum {
+export function colorSpectrum(
+  rows: ReadonlyArray<readonly [number, number]>,
+  rowName: (i: number) => string = (i) => `spectrum row ${i + 1}`
+): ColorSpectrum {
   const { min: rMin, max: rMax } = COLOR_SPECTRUM_LIMITS.rows;
   if (!Array.isArray(rows) || rows.length < rMin || rows.length > rMax) {
     throw new RangeError(`spectrum must have ${rMin} to ${rMax} rows of wavelength_nm, value (got ${Array.isArray(rows) ? rows.length : 'none'})`);
@@ -34,13 +38,13 @@ export function colorSpectrum(rows: ReadonlyArray<readonly [number, number]>): C
   for (let i = 0; i < rows.length; i++) {
     const [w, p] = rows[i];
     if (typeof w !== 'number' || !(w >= wMin && w <= wMax)) {
-      throw new RangeError(`spectrum row ${i + 1}: wavelength_nm must be a number from ${wMin} to ${wMax} nm (got ${String(w)})`);
+      throw new RangeError(`${rowName(i)}: wavelength_nm must be a number from ${wMin} to ${wMax} nm (got ${String(w)})`);
     }
     if (i > 0 && !(w > wavelengthNm[i - 1])) {
-      throw new RangeError(`spectrum row ${i + 1}: wavelength_nm must be above the previous row's ${wavelengthNm[i - 1]} nm (rows sorted, no repeats)`);
+      throw new RangeError(`${rowName(i)}: wavelength_nm must be above the previous row's ${wavelengthNm[i - 1]} nm (rows sorted, no repeats)`);
     }
     if (typeof p !== 'number' || !(p >= 0 && p < Infinity)) {
-      throw new RangeError(`spectrum row ${i + 1}: value must be a finite number ≥ 0 (got ${String(p)})`);
+      throw new RangeError(`${rowName(i)}: value must be a finite number ≥ 0 (got ${String(p)})`);
     }
     wavelengthNm[i] = w;
     power[i] = p;

@@ -1,6 +1,7 @@
 /**
  * Colorimetry of spectra (pure, synchronous). The API:
  * - `colorSpectrum(rows)` checks [wavelength nm, power] rows (RangeError naming the row) → ColorSpectrum;
+ * - `parseSpectrumCsv(text)` reads a wavelength_nm,value file the same way (errors name the line);
  * - `colorOfSpectrum(spectrum)` → { X, Y, Z, x, y, uPrime, vPrime, cctK, duv, ra, r, lerLmPerW, warnings };
  * - parts: `spectralSamples`, `tristimulus`, `xyOf`, `uvOf`, `cctOhno`, `cctRobertson`, `colorRendering`,
  *   `daylightSpectrum`, `planckRadiance`, `planckianUv`, `luminousEfficacyOfRadiation`;
@@ -8,6 +9,7 @@
  * Data: the CIE tables in data/cie (© CIE, CC BY-SA 4.0), read only by cie-tables.ts.
  */
 export { colorSpectrum, powerAt, COLOR_SPECTRUM_LIMITS, type ColorSpectrum } from './color-spectrum';
+export { parseSpectrumCsv } from './spectrum-csv';
 export { colorOfSpectrum, CCT_DUV_LIMIT, type ColorSummary } from './color-of-spectrum';
 export { spectralSamples, gridSamples, type SpectralSamples } from './spectral-samples';
 export { tristimulus, type Tristimulus } from './tristimulus';
