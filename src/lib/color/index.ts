@@ -18,7 +18,7 @@ export { cctOhno, type CctDuv } from './cct-ohno';
 export { cctRobertson, ROBERTSON_MIRED } from './cct-robertson';
 export { colorRendering, CRI_DC_LIMIT, CRI_CCT_RANGE_K, type ColorRendering } from './color-rendering';
 export { daylightSpectrum, daylightXy, DAYLIGHT_RANGE_K } from './daylight';
-export { planckRadiance, planckianUv, C2_NM_K, CCT_RANGE_K, type PlanckianPoint } from './planck';
+export { planckRadiance, planckianUv, planckianUvOnly, C2_NM_K, CCT_RANGE_K, type PlanckianPoint } from './planck';
 export { luminousEfficacyOfRadiation, radiantPower } from './luminous-efficacy-of-radiation';
 export { planckianLocus, type PlanckianLocus, type Isotherm } from './planckian-locus';
 export { spectralLocus } from './spectral-locus';

@@ -21,6 +21,24 @@ export function planckRadiance(wavelengthNm: number, temperatureK: number): numb
   return 1 / (um ** 5 * Math.expm1(C2_NM_K / (wavelengthNm * temperatureK)));
 }
 
+/** (λ/µm)⁵ on the observer's 1 nm grid, precomputed: the power is the costly part of a Planck sum. */
+const UM5 = Float64Array.from({ length: CMF_END_NM - CMF_START_NM + 1 }, (_, i) => ((CMF_START_NM + i) * 1e-3) ** 5);
+
+/**
+ * CIE 1960 u, v of the Planckian radiator at T (no derivatives; the CCT searches call this often).
+ * @param temperatureK temperature, K, in (0, ∞)
+ */
+export function planckianUvOnly(temperatureK: number): Uv {
+  let X = 0, Y = 0, Z = 0;
+  const n = UM5.length;
+  for (let i = 0; i < n; i++) {
+    const m = 1 / (UM5[i] * Math.expm1(C2_NM_K / ((CMF_START_NM + i) * temperatureK)));
+    X += m * CMF_X.values[i]; Y += m * CMF_Y.values[i]; Z += m * CMF_Z.values[i];
+  }
+  const D = X + 15 * Y + 3 * Z;
+  return { u: (4 * X) / D, v: (6 * Y) / D };
+}
+
 /** Planckian chromaticity with the derivative along temperature. */
 export interface PlanckianPoint extends Uv {
   /** du/dT and dv/dT, 1/K. */
@@ -40,7 +58,7 @@ export function planckianUv(temperatureK: number): PlanckianPoint {
     const nm = CMF_START_NM + i;
     const x = C2_NM_K / (nm * temperatureK);
     const em1 = Math.expm1(x);
-    const m = 1 / ((nm * 1e-3) ** 5 * em1);
+    const m = 1 / (UM5[i] * em1);
     const dm = x > 700 ? 0 : (m * (x / temperatureK) * (em1 + 1)) / em1;
     const xb = CMF_X.values[i], yb = CMF_Y.values[i], zb = CMF_Z.values[i];
     X += m * xb; Y += m * yb; Z += m * zb;
