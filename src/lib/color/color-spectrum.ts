@@ -48,7 +48,8 @@ export function colorSpectrum(
     }
     wavelengthNm[i] = w;
     power[i] = p;
-    if (w >= CMF_START_NM && w <= CMF_END_NM) visible += p;
+    // power on a stretch of positive length inside (360, 830) nm, where the observer sees
+    if (i > 0 && Math.min(w, CMF_END_NM) > Math.max(wavelengthNm[i - 1], CMF_START_NM)) visible += power[i - 1] + p;
   }
   if (!(visible > 0)) throw new RangeError(`spectrum has no power between ${CMF_START_NM} and ${CMF_END_NM} nm, so it has no colour`);
   return { wavelengthNm, power };

@@ -98,3 +98,11 @@ describe('chromaticity-diagram datasets', () => {
     expect(() => spectralLocus(0)).toThrow(/stepNm/);
   });
 });
+
+describe('edge spectra', () => {
+  it('refuses a spectrum that touches 360–830 nm only at a point (no power the observer sees)', () => {
+    expect(() => colorSpectrum([[830, 1], [900, 1]])).toThrow(/no power between 360 and 830 nm/);
+    expect(() => colorSpectrum([[300, 1], [360, 0]])).toThrow(/no power between 360 and 830 nm/);
+    expect(colorOfSpectrum(colorSpectrum([[829, 0], [830, 1], [900, 1]])).x).toBeGreaterThan(0.7);
+  });
+});
