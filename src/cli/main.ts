@@ -6,10 +6,12 @@ import * as material from './commands/material';
 import * as trace from './commands/trace';
 import * as claim from './commands/claim';
 import * as variants from './commands/variants';
+import * as color from './commands/color';
+import * as mie from './commands/mie';
 
 type Command = { summary: string; help: string; run: (argv: string[]) => Promise<void> | void };
 
-const commands: Record<string, Command> = { escape, stack, dome, material, trace, claim, variants };
+const commands: Record<string, Command> = { escape, stack, dome, material, trace, claim, variants, color, mie };
 
 function usage(): string {
   const lines = ['outcouple — LED package light extraction from the command line', '', 'Commands:'];
