@@ -1,0 +1,199 @@
+/**
+ * Ray intersection with a surface of revolution given as a sampled meridian polyline (see profile.ts):
+ * each segment, rotated about the z axis, is a cone frustum (a flat annulus when Δz = 0, a cylinder when
+ * Δr = 0). Built once per surface; the intersection itself allocates nothing (hot path of a tracer).
+ *
+ * Cone of segment i: x² + y² = ρ(z)², ρ(z) = r0 + k (z − z0), k = Δr/Δz, ρ ≥ 0, z in the segment's band.
+ * With the ray p = o + t d this is a quadratic in t — the ray–cone intersection as in M. Pharr, W. Jakob,
+ * G. Humphreys, Physically Based Rendering, 3rd ed., §3.8 (cones), solved in the cancellation-free form
+ * q = −½(b + sign(b)√disc), t = q/a, c/q (W. H. Press et al., Numerical Recipes, 3rd ed., §5.6).
+ *
+ * Fast rejections: the ray's closest approach to the axis beyond the widest point of a segment (or of the
+ * whole profile), and the t-interval in which the ray lies inside the segment's z band.
+ */
+import type { ProfileSurface } from './profile';
+
+/** A profile prepared for intersection: points plus per-segment bands. */
+export interface RevolutionProfile {
+  /** Number of points (segments = count − 1). */
+  count: number;
+  r: Float64Array;
+  z: Float64Array;
+  /** Per segment, stride 3: lowest z, highest z, largest r. */
+  bands: Float64Array;
+  /** Largest r of the whole profile, mm. */
+  rMax: number;
+  zMin: number;
+  zMax: number;
+  /** Index of the named surface each segment belongs to (into `names`). */
+  surfaceOfSegment: Int32Array;
+  names: string[];
+}
+
+/**
+ * Joins named surfaces, in order, into one intersectable profile. Consecutive surfaces are expected to share
+ * their end points (a closed solid's boundary); a gap between them becomes no segment.
+ * @throws RangeError when a surface has fewer than 2 points, a negative r, or a non-finite coordinate
+ */
+export function buildRevolutionProfile(surfaces: readonly ProfileSurface[]): RevolutionProfile {
+  const rs: number[] = [];
+  const zs: number[] = [];
+  const owner: number[] = [];
+  const names: string[] = [];
+  for (let s = 0; s < surfaces.length; s++) {
+    const { name, r, z } = surfaces[s];
+    if (r.length < 2 || r.length !== z.length) throw new RangeError(`surface ${name}: needs ≥ 2 points with r and z of equal length`);
+    for (let i = 0; i < r.length; i++) {
+      if (!Number.isFinite(r[i]) || !Number.isFinite(z[i]) || r[i] < 0) {
+        throw new RangeError(`surface ${name}: point ${i} must have finite r ≥ 0 and z (got ${r[i]}, ${z[i]})`);
+      }
+    }
+    names.push(name);
+    for (let i = 0; i < r.length; i++) {
+      const last = rs.length - 1;
+      if (i === 0 && last >= 0 && rs[last] === r[0] && zs[last] === z[0]) continue; // shared end point
+      if (last >= 0) owner.push(i === 0 ? -1 : s); // −1: the jump between two surfaces that do not meet
+      rs.push(r[i]);
+      zs.push(z[i]);
+    }
+  }
+  const count = rs.length;
+  const bands = new Float64Array(3 * Math.max(0, count - 1));
+  let rMax = 0;
+  let zMin = Infinity;
+  let zMax = -Infinity;
+  for (let i = 0; i < count; i++) {
+    rMax = Math.max(rMax, rs[i]);
+    zMin = Math.min(zMin, zs[i]);
+    zMax = Math.max(zMax, zs[i]);
+  }
+  for (let i = 0; i + 1 < count; i++) {
+    bands[3 * i] = Math.min(zs[i], zs[i + 1]);
+    bands[3 * i + 1] = Math.max(zs[i], zs[i + 1]);
+    bands[3 * i + 2] = owner[i] < 0 ? -1 : Math.max(rs[i], rs[i + 1]); // −1: never hit
+  }
+  return {
+    count,
+    r: Float64Array.from(rs),
+    z: Float64Array.from(zs),
+    bands,
+    rMax,
+    zMin,
+    zMax,
+    surfaceOfSegment: Int32Array.from(owner),
+    names
+  };
+}
+
+/**
+ * Nearest intersection t > tMin of the ray o + t d with the profile's surface of revolution.
+ * @param ray Float64Array [ox, oy, oz, dx, dy, dz] (mm; d need not be unit, t is in units of |d|)
+ * @param tMin smallest accepted t (≥ 0; a small positive value skips the surface the ray starts on)
+ * @param out receives the unit outward normal at the hit in out[0..2] (see profile.ts for "outward") and the
+ *   segment index in out[3]; untouched on a miss
+ * @returns t of the nearest hit, or Infinity when the ray misses. Never NaN for finite input with |d| > 0.
+ */
+export function intersectRevolution(profile: RevolutionProfile, ray: Float64Array, tMin: number, out: Float64Array): number {
+  const ox = ray[0];
+  const oy = ray[1];
+  const oz = ray[2];
+  const dx = ray[3];
+  const dy = ray[4];
+  const dz = ray[5];
+  const a2 = dx * dx + dy * dy;
+  const od = ox * dx + oy * dy;
+  const o2 = ox * ox + oy * oy;
+  // Closest approach of the ray's line to the axis: nothing beyond the profile's widest point can be hit
+  const rho2Min = a2 > 0 ? Math.max(0, o2 - (od * od) / a2) : o2;
+  if (rho2Min > profile.rMax * profile.rMax) return Infinity;
+  if (dz === 0 && (oz < profile.zMin || oz > profile.zMax)) return Infinity;
+
+  const r = profile.r;
+  const z = profile.z;
+  const bands = profile.bands;
+  let best = Infinity;
+  let hit = -1;
+  for (let i = 0; i + 1 < profile.count; i++) {
+    const rHi = bands[3 * i + 2];
+    if (rHi < 0 || rho2Min > rHi * rHi) continue;
+    const zLo = bands[3 * i];
+    const zHi = bands[3 * i + 1];
+    // z band: the t-interval in which the ray's height is inside the segment's band
+    if (dz === 0) {
+      if (oz < zLo || oz > zHi) continue;
+    } else {
+      const ta = (zLo - oz) / dz;
+      const tb = (zHi - oz) / dz;
+      if ((ta > tb ? ta : tb) <= tMin || (ta < tb ? ta : tb) >= best) continue;
+    }
+    const r0 = r[i];
+    const z0 = z[i];
+    const r1 = r[i + 1];
+    const z1 = z[i + 1];
+    if (z1 === z0) {
+      // Flat annulus in the plane z = z0
+      if (dz === 0) continue;
+      const t = (z0 - oz) / dz;
+      if (t <= tMin || t >= best) continue;
+      const px = ox + t * dx;
+      const py = oy + t * dy;
+      const p2 = px * px + py * py;
+      const lo = r0 < r1 ? r0 : r1;
+      if (p2 >= lo * lo && p2 <= rHi * rHi) {
+        best = t;
+        hit = i;
+      }
+      continue;
+    }
+    // Cone: (ox + t dx)² + (oy + t dy)² = (A + B t)², A = ρ at the ray origin's height, B = k dz
+    const k = (r1 - r0) / (z1 - z0);
+    const A = r0 + k * (oz - z0);
+    const B = k * dz;
+    const qa = a2 - B * B;
+    const qb = 2 * (od - A * B);
+    const qc = o2 - A * A;
+    let t1 = Infinity;
+    let t2 = Infinity;
+    if (Math.abs(qa) < 1e-14 * (a2 + B * B + 1e-300)) {
+      // The ray runs parallel to a generatrix of the cone: one root of the linear equation
+      if (qb !== 0) t1 = -qc / qb;
+    } else {
+      const disc = qb * qb - 4 * qa * qc;
+      if (disc < 0) continue;
+      const q = -0.5 * (qb + (qb >= 0 ? Math.sqrt(disc) : -Math.sqrt(disc)));
+      t1 = q / qa;
+      t2 = q !== 0 ? qc / q : t1;
+    }
+    for (let root = 0; root < 2; root++) {
+      const t = root === 0 ? t1 : t2;
+      if (!(t > tMin && t < best)) continue;
+      const pz = oz + t * dz;
+      if (pz < zLo || pz > zHi || A + B * t < 0) continue;
+      best = t;
+      hit = i;
+    }
+  }
+  if (hit < 0) return Infinity;
+
+  // Outward normal: (Δz, −Δr) in the meridian plane, turned to the hit's azimuth
+  const sr = r[hit + 1] - r[hit];
+  const sz = z[hit + 1] - z[hit];
+  const len = Math.sqrt(sr * sr + sz * sz);
+  const nr = sz / len;
+  const nz = -sr / len;
+  const px = ox + best * dx;
+  const py = oy + best * dy;
+  const rho = Math.sqrt(px * px + py * py);
+  if (rho > 0) {
+    out[0] = (nr * px) / rho;
+    out[1] = (nr * py) / rho;
+    out[2] = nz;
+  } else {
+    // On the axis (a cone's tip): only the axial part is defined
+    out[0] = 0;
+    out[1] = 0;
+    out[2] = nz >= 0 ? 1 : -1;
+  }
+  out[3] = hit;
+  return best;
+}
