@@ -25,6 +25,8 @@ export interface RevolutionProfile {
   rMax: number;
   zMin: number;
   zMax: number;
+  /** Slack of the band tests, mm: 1e-12 of the profile's size, so a ray through a shared end point is not lost to rounding. */
+  eps: number;
   /** Index of the named surface each segment belongs to (into `names`). */
   surfaceOfSegment: Int32Array;
   names: string[];
@@ -80,6 +82,7 @@ export function buildRevolutionProfile(surfaces: readonly ProfileSurface[]): Rev
     rMax,
     zMin,
     zMax,
+    eps: 1e-12 * (rMax + Math.abs(zMin) + Math.abs(zMax)),
     surfaceOfSegment: Int32Array.from(owner),
     names
   };
@@ -88,7 +91,8 @@ export function buildRevolutionProfile(surfaces: readonly ProfileSurface[]): Rev
 /**
  * Nearest intersection t > tMin of the ray o + t d with the profile's surface of revolution.
  * @param ray Float64Array [ox, oy, oz, dx, dy, dz] (mm; d need not be unit, t is in units of |d|)
- * @param tMin smallest accepted t (≥ 0; a small positive value skips the surface the ray starts on)
+ * @param tMin smallest accepted t (≥ 0). A ray leaving a face may re-hit it by rounding within ~1e-9 of the
+ *   profile's size (measured: < 2e-9 mm on a 20 mm lens), so after a hit pass about 1e-7 mm
  * @param out receives the unit outward normal at the hit in out[0..2] (see profile.ts for "outward") and the
  *   segment index in out[3]; untouched on a miss
  * @returns t of the nearest hit, or Infinity when the ray misses. Never NaN for finite input with |d| > 0.
@@ -105,19 +109,21 @@ export function intersectRevolution(profile: RevolutionProfile, ray: Float64Arra
   const o2 = ox * ox + oy * oy;
   // Closest approach of the ray's line to the axis: nothing beyond the profile's widest point can be hit
   const rho2Min = a2 > 0 ? Math.max(0, o2 - (od * od) / a2) : o2;
-  if (rho2Min > profile.rMax * profile.rMax) return Infinity;
-  if (dz === 0 && (oz < profile.zMin || oz > profile.zMax)) return Infinity;
+  const rReach = profile.rMax + profile.eps;
+  if (rho2Min > rReach * rReach) return Infinity;
+  if (dz === 0 && (oz < profile.zMin - profile.eps || oz > profile.zMax + profile.eps)) return Infinity;
 
   const r = profile.r;
   const z = profile.z;
   const bands = profile.bands;
+  const eps = profile.eps;
   let best = Infinity;
   let hit = -1;
   for (let i = 0; i + 1 < profile.count; i++) {
     const rHi = bands[3 * i + 2];
-    if (rHi < 0 || rho2Min > rHi * rHi) continue;
-    const zLo = bands[3 * i];
-    const zHi = bands[3 * i + 1];
+    if (rHi < 0 || rho2Min > (rHi + eps) * (rHi + eps)) continue;
+    const zLo = bands[3 * i] - eps;
+    const zHi = bands[3 * i + 1] + eps;
     // z band: the t-interval in which the ray's height is inside the segment's band
     if (dz === 0) {
       if (oz < zLo || oz > zHi) continue;
@@ -138,23 +144,47 @@ export function intersectRevolution(profile: RevolutionProfile, ray: Float64Arra
       const px = ox + t * dx;
       const py = oy + t * dy;
       const p2 = px * px + py * py;
-      const lo = r0 < r1 ? r0 : r1;
-      if (p2 >= lo * lo && p2 <= rHi * rHi) {
+      const lo = (r0 < r1 ? r0 : r1) - eps;
+      const hi = rHi + eps;
+      if (p2 >= (lo > 0 ? lo * lo : 0) && p2 <= hi * hi) {
         best = t;
         hit = i;
       }
       continue;
     }
-    // Cone: (ox + t dx)² + (oy + t dy)² = (A + B t)², A = ρ at the ray origin's height, B = k dz
-    const k = (r1 - r0) / (z1 - z0);
-    const A = r0 + k * (oz - z0);
-    const B = k * dz;
-    const qa = a2 - B * B;
-    const qb = 2 * (od - A * B);
-    const qc = o2 - A * A;
+    // Cone, written so the division is by the segment's longer side (a nearly flat cone near the axis would
+    // otherwise amplify rounding by Δr/Δz): steep, ρ = A + B t with ρ(z) = r0 + k (z − z0), k = Δr/Δz:
+    //   (ox + t dx)² + (oy + t dy)² = (A + B t)²;
+    // flat, m ρ = C + D t with z − z0 = m (ρ − r0), m = Δz/Δr: m²[(ox + t dx)² + (oy + t dy)²] = (C + D t)²
+    const steep = Math.abs(z1 - z0) >= Math.abs(r1 - r0);
+    let A: number;
+    let B: number;
+    let qa: number;
+    let qb: number;
+    let qc: number;
+    let qScale: number; // size of qa's terms, for the degenerate (linear) test
+    if (steep) {
+      const k = (r1 - r0) / (z1 - z0);
+      A = r0 + k * (oz - z0);
+      B = k * dz;
+      qa = a2 - B * B;
+      qb = 2 * (od - A * B);
+      qc = o2 - A * A;
+      qScale = a2 + B * B;
+    } else {
+      const m = (z1 - z0) / (r1 - r0);
+      const m2 = m * m;
+      // ρ ≥ 0 ⇔ (C + D t)/m ≥ 0: keep the sign of m in A and B so the test below reads A + B t ≥ 0
+      A = (oz - z0 + m * r0) / m;
+      B = dz / m;
+      qa = m2 * a2 - dz * dz;
+      qb = 2 * (m2 * od - (oz - z0 + m * r0) * dz);
+      qc = m2 * o2 - (oz - z0 + m * r0) * (oz - z0 + m * r0);
+      qScale = m2 * a2 + dz * dz;
+    }
     let t1 = Infinity;
     let t2 = Infinity;
-    if (Math.abs(qa) < 1e-14 * (a2 + B * B + 1e-300)) {
+    if (Math.abs(qa) <= 1e-14 * qScale) {
       // The ray runs parallel to a generatrix of the cone: one root of the linear equation
       if (qb !== 0) t1 = -qc / qb;
     } else {
@@ -168,7 +198,7 @@ export function intersectRevolution(profile: RevolutionProfile, ray: Float64Arra
       const t = root === 0 ? t1 : t2;
       if (!(t > tMin && t < best)) continue;
       const pz = oz + t * dz;
-      if (pz < zLo || pz > zHi || A + B * t < 0) continue;
+      if (pz < zLo || pz > zHi || A + B * t < -eps) continue;
       best = t;
       hit = i;
     }

@@ -126,7 +126,7 @@ function designWithSplit(o: CheckedDesignOptions, theta1: number): OpticDesign {
     wall = integrateCollimatingSurface(family, { kind: 'mirror' }, theta1, theta2, s1, o.toleranceMm);
   } catch {
     throw new RangeError(
-      `heightMm: the outer wall of this TIR collimator would cut into its own cavity; try a taller optic or a larger splitAngleDeg than ${fmt((theta1 * 180) / Math.PI)} (got ${H})`
+      `heightMm: the outer wall of this TIR collimator would fall into its own cavity (split ${fmt((theta1 * 180) / Math.PI)}°): lower heightMm, or give a smaller splitAngleDeg (got ${H})`
     );
   }
   const last = wall.r.length - 1;
