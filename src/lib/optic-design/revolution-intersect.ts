@@ -188,8 +188,12 @@ export function intersectRevolution(profile: RevolutionProfile, ray: Float64Arra
       // The ray runs parallel to a generatrix of the cone: one root of the linear equation
       if (qb !== 0) t1 = -qc / qb;
     } else {
-      const disc = qb * qb - 4 * qa * qc;
-      if (disc < 0) continue;
+      let disc = qb * qb - 4 * qa * qc;
+      if (disc < 0) {
+        // A ray along the axis through a cone's tip is a double root; rounding may push disc just below 0
+        if (disc < -1e-12 * qb * qb) continue;
+        disc = 0;
+      }
       const q = -0.5 * (qb + (qb >= 0 ? Math.sqrt(disc) : -Math.sqrt(disc)));
       t1 = q / qa;
       t2 = q !== 0 ? qc / q : t1;
@@ -214,12 +218,12 @@ export function intersectRevolution(profile: RevolutionProfile, ray: Float64Arra
   const px = ox + best * dx;
   const py = oy + best * dy;
   const rho = Math.sqrt(px * px + py * py);
-  if (rho > 0) {
+  if (rho > 1e-100) {
     out[0] = (nr * px) / rho;
     out[1] = (nr * py) / rho;
     out[2] = nz;
   } else {
-    // On the axis (a cone's tip): only the axial part is defined
+    // On the axis (a cone's tip; below 1e-100 mm the squares underflow): only the axial part is defined
     out[0] = 0;
     out[1] = 0;
     out[2] = nz >= 0 ? 1 : -1;
