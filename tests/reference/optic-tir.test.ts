@@ -100,3 +100,23 @@ describe('designed TIR collimator, point source', () => {
     expect(events[1]).toMatchObject({ kind: 'refract', surface: 'tir-wall' });
   });
 });
+
+describe('TIR collimator with a collimating exit lens over a flat cavity floor', () => {
+  for (const [D, H, n] of [[20, 12, 1.49], [30, 14, 1.585]]) {
+    it(`sends every ray through the lens part or by the wall out parallel, ${D} mm × ${H} mm, n = ${n}`, () => {
+      const design = designOptic({ type: 'tir', exitDiameterMm: D, heightMm: H, n, exitFace: 'lens', toleranceMm: 1e-5 });
+      expect(design.tirFailures).toEqual([]);
+      const seen = new Set<string>();
+      for (let i = 0; i < 600; i++) {
+        const theta = ((Math.PI / 2) * (i + 0.5)) / 600;
+        const { d, events } = walkRay(design, [0, 0, 0], [Math.sin(theta), 0, Math.cos(theta)]);
+        const path = events.map((e) => `${e.kind}:${e.surface}`).join(' ');
+        seen.add(path);
+        // the lens rim meets the flat ring only to the design's bisection: allow a few mrad
+        expect(Math.abs(Math.atan2(d[0], d[2])), path).toBeLessThan(3e-3);
+      }
+      expect([...seen].sort()).toEqual(['refract:cavity-floor refract:exit', 'refract:cavity-wall tir:tir-wall refract:exit']);
+    });
+  }
+});
+

@@ -35,6 +35,8 @@ export interface OpticDesignOptions {
   edgeThicknessMm?: number;
   /** TIR collimator: the angle from the axis, at the source, splitting the lens part from the wall part; degrees. */
   splitAngleDeg?: number;
+  /** TIR collimator: 'flat' exit face over a collimating cavity floor (default), or a collimating exit 'lens' over a flat floor. */
+  exitFace?: 'flat' | 'lens';
   /** Chord tolerance of the sampled profiles, mm; default 0.001. */
   toleranceMm?: number;
 }
@@ -53,6 +55,7 @@ export interface CheckedDesignOptions {
   sourceRadiusMm: number;
   edgeThicknessMm: number;
   splitAngleDeg: number | undefined;
+  exitFace: 'flat' | 'lens';
   toleranceMm: number;
 }
 
@@ -102,6 +105,8 @@ export function checkDesignOptions(o: OpticDesignOptions): CheckedDesignOptions 
   const edgeThicknessMm = o.edgeThicknessMm === undefined ? 1 : num('edgeThicknessMm', o.edgeThicknessMm, 0, MAX_OPTIC_MM);
   const splitAngleDeg = o.splitAngleDeg === undefined ? undefined : num('splitAngleDeg', o.splitAngleDeg, 5, 80);
 
+  const exitFace = o.exitFace ?? 'flat';
+  if (exitFace !== 'flat' && exitFace !== 'lens') throw new RangeError(`exitFace must be flat or lens (got ${String(exitFace)})`);
   let n = 1;
   if (o.type !== 'reflector') {
     if (o.n !== undefined) n = num('n', o.n, 1, 4, true);
@@ -130,6 +135,7 @@ export function checkDesignOptions(o: OpticDesignOptions): CheckedDesignOptions 
     sourceRadiusMm: radius,
     edgeThicknessMm,
     splitAngleDeg,
+    exitFace,
     toleranceMm
   };
 }

@@ -15,7 +15,7 @@
  * bisects d′ and −ẑ… reflected to +ẑ); the wall reflects totally where i > θc = asin(1/n) (Snell; M. Born,
  * E. Wolf, Principles of Optics, §1.5.4). Every design sample is checked; failures are reported, not hidden.
  */
-import { integrateCollimatingSurface, type RayFamily } from './collimating-surface';
+import { integrateCollimatingSurface, type CollimatingSurface, type RayFamily } from './collimating-surface';
 import { collimatingHyperbolaRadiusMm } from './aspheric-lens';
 import { fmt, type CheckedDesignOptions } from './design-options';
 import type { OpticDesign, TirFailure } from './optic-design';
@@ -73,7 +73,30 @@ export function wallIncidenceRad(dz: number): number {
   return Math.acos(Math.sqrt((1 - dz) / 2));
 }
 
-/** Designs the TIR collimator (flat exit face). @throws RangeError when the height or gap cannot hold it */
+/**
+ * The collimating exit lens over a flat cavity floor at height zFloor: rays θ ≤ θ1 refract at the floor into
+ * d = (sin θ / n, √(1 − sin²θ / n²)) from P = (zFloor tan θ, zFloor); the lens surface turns them to +z on leaving
+ * (refraction n → 1), starting on the axis at H.
+ */
+function exitLensFor(zFloor: number, n: number, theta1: number, H: number, toleranceMm: number): CollimatingSurface {
+  const family: RayFamily = (theta, out) => {
+    const s = Math.sin(theta);
+    const c = Math.cos(theta);
+    const dr = s / n;
+    const dz = Math.sqrt(1 - dr * dr);
+    out[0] = zFloor * (s / c);
+    out[1] = zFloor;
+    out[2] = zFloor / (c * c);
+    out[3] = 0;
+    out[4] = dr;
+    out[5] = dz;
+    out[6] = c / n;
+    out[7] = -(dr * (c / n)) / dz;
+  };
+  return integrateCollimatingSurface(family, { kind: 'refract', nIn: n, nOut: 1 }, 0, theta1, H - zFloor, toleranceMm);
+}
+
+/** Designs the TIR collimator (flat exit face, or a collimating exit lens over a flat cavity floor). @throws RangeError when the height or gap cannot hold it */
 export function designTirCollimator(o: CheckedDesignOptions): OpticDesign {
   if (o.splitAngleDeg !== undefined) return designWithSplit(o, (o.splitAngleDeg * Math.PI) / 180);
   // A tall optic's wall closes in on the cavity: try smaller cavities before giving up
@@ -103,18 +126,38 @@ function designWithSplit(o: CheckedDesignOptions, theta1: number): OpticDesign {
   const dz1 = Math.cos(theta1) / n;
   const cotA1 = dz1 / Math.sqrt(1 - dz1 * dz1);
   const cotT1 = 1 / Math.tan(theta1);
-  const rc = (H - R * cotA1) / (cotT1 - cotA1);
+  // The wall's top corner (R, zTop) lies on ray θ1 refracted at the cavity's top edge (rc, rc cot θ1)
+  const rcForTop = (zTop: number) => (zTop - R * cotA1) / (cotT1 - cotA1);
   // Height range: the cavity wider than the source (and than the gap needs) and narrower than the exit
   const rcMin = Math.max(o.sourceRadiusMm, gap / cotT1) * 1.0001 + 1e-9;
   const hMin = R * cotA1 + rcMin * (cotT1 - cotA1);
   const hMax = R * cotT1;
-  if (!(rc > rcMin && rc < R)) {
-    throw new RangeError(
+  const rangeError = () =>
+    new RangeError(
       `heightMm: a TIR collimator ${fmt(o.exitDiameterMm)} mm wide at n = ${fmt(n)} with a ${fmt((theta1 * 180) / Math.PI)}° split fits heights in (${fmt(hMin)}, ${fmt(hMax)}) mm (got ${H})`
     );
+  let zTop = H;
+  let exitLens: CollimatingSurface | undefined;
+  if (o.exitFace === 'lens') {
+    // Flat cavity floor, collimating exit lens from the axis at H down to its rim at the wall's top height:
+    // find zTop where the lens designed for rc(zTop) ends at zTop (bisection; the lens rim falls as zTop rises)
+    if (!(H > hMin)) throw rangeError();
+    const mismatch = (zt: number) => exitLensFor(rcForTop(zt) * cotT1, n, theta1, H, o.toleranceMm * 10).z.at(-1)! - zt;
+    let lo = hMin;
+    let hi = Math.min(H, hMax);
+    if (!(mismatch(lo) > 0 && mismatch(hi) < 0)) throw rangeError();
+    for (let i = 0; i < 60 && hi - lo > o.toleranceMm * 1e-3; i++) {
+      const mid = 0.5 * (lo + hi);
+      if (mismatch(mid) > 0) lo = mid;
+      else hi = mid;
+    }
+    zTop = 0.5 * (lo + hi);
+    exitLens = exitLensFor(rcForTop(zTop) * cotT1, n, theta1, H, o.toleranceMm);
   }
+  const rc = rcForTop(zTop);
+  if (!(rc > rcMin && rc < R)) throw rangeError();
   const zFloorRim = rc * cotT1;
-  const vertex = ((rc / Math.sin(theta1)) * (n * Math.cos(theta1) - 1)) / (n - 1);
+  const vertex = o.exitFace === 'lens' ? zFloorRim : ((rc / Math.sin(theta1)) * (n * Math.cos(theta1) - 1)) / (n - 1);
   if (vertex <= gap) throw new RangeError(`gapMm: the cavity floor's vertex sits ${fmt(vertex)} mm above the source; allowed [0, ${fmt(vertex)}) (got ${gap})`);
   const theta2 = Math.atan2(rc, gap);
 
@@ -131,7 +174,7 @@ function designWithSplit(o: CheckedDesignOptions, theta1: number): OpticDesign {
   }
   const last = wall.r.length - 1;
   wall.r[0] = R;
-  wall.z[0] = H;
+  wall.z[0] = zTop;
 
   // TIR check at every design sample
   const thetaC = Math.asin(1 / n);
@@ -144,19 +187,35 @@ function designWithSplit(o: CheckedDesignOptions, theta1: number): OpticDesign {
     if (inc <= thetaC) failures.push({ thetaRad: wall.theta[i], rMm: wall.r[i], zMm: wall.z[i], incidenceRad: inc });
   }
 
-  const floor = sampleCurve(
-    'cavity-floor',
-    (theta, out) => {
-      const rho = collimatingHyperbolaRadiusMm(theta, n, vertex);
-      out[0] = rho * Math.sin(theta);
-      out[1] = rho * Math.cos(theta);
-    },
-    0,
-    theta1,
-    o.toleranceMm
-  );
+  const floor =
+    o.exitFace === 'lens'
+      ? straightFace('cavity-floor', 0, zFloorRim, rc, zFloorRim)
+      : sampleCurve(
+          'cavity-floor',
+          (theta, out) => {
+            const rho = collimatingHyperbolaRadiusMm(theta, n, vertex);
+            out[0] = rho * Math.sin(theta);
+            out[1] = rho * Math.cos(theta);
+          },
+          0,
+          theta1,
+          o.toleranceMm
+        );
   floor.r[floor.r.length - 1] = rc;
   floor.z[floor.z.length - 1] = zFloorRim;
+  // Exit face, from the wall's top corner to the axis: flat, or a flat ring then the lens (reversed: rim to axis)
+  const exit = exitLens
+    ? {
+        name: 'exit',
+        r: Float64Array.of(R, ...Array.from(exitLens.r).reverse()),
+        z: Float64Array.of(zTop, ...Array.from(exitLens.z).reverse())
+      }
+    : straightFace('exit', R, H, 0, H);
+  if (exitLens) {
+    exit.z[1] = zTop; // the lens rim meets the ring at the wall's top height (equal to the solve's tolerance)
+    exit.r[exit.r.length - 1] = 0;
+    exit.z[exit.z.length - 1] = H;
+  }
   const rFoot = wall.r[last];
   const zFoot = wall.z[last];
   const outerWall = { name: 'tir-wall', r: wall.r.slice().reverse(), z: wall.z.slice().reverse() };
@@ -168,14 +227,14 @@ function designWithSplit(o: CheckedDesignOptions, theta1: number): OpticDesign {
       straightFace('cavity-wall', rc, zFloorRim, rc, gap),
       { name: 'base', r: Float64Array.of(rc, rFoot, rFoot), z: Float64Array.of(gap, gap, zFoot) },
       outerWall,
-      straightFace('exit', R, H, 0, H)
+      exit
     ],
     n,
     exitDiameterMm: o.exitDiameterMm,
     heightMm: H,
     gapMm: gap,
     toleranceMm: o.toleranceMm,
-    focalLengthMm: vertex,
+    focalLengthMm: o.exitFace === 'lens' ? undefined : vertex,
     rimAngleRad: Math.atan2(R, H),
     collectionHalfAngleRad: theta2,
     splitAngleRad: theta1,
