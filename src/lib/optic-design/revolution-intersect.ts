@@ -19,7 +19,7 @@ export interface RevolutionProfile {
   count: number;
   r: Float64Array;
   z: Float64Array;
-  /** Per segment, stride 3: lowest z, highest z, largest r. */
+  /** Per segment, stride 4: lowest z, highest z, smallest r, largest r (largest r = −1: a gap, never hit). */
   bands: Float64Array;
   /** Largest r of the whole profile, mm. */
   rMax: number;
@@ -60,7 +60,7 @@ export function buildRevolutionProfile(surfaces: readonly ProfileSurface[]): Rev
     }
   }
   const count = rs.length;
-  const bands = new Float64Array(3 * Math.max(0, count - 1));
+  const bands = new Float64Array(4 * Math.max(0, count - 1));
   let rMax = 0;
   let zMin = Infinity;
   let zMax = -Infinity;
@@ -70,9 +70,10 @@ export function buildRevolutionProfile(surfaces: readonly ProfileSurface[]): Rev
     zMax = Math.max(zMax, zs[i]);
   }
   for (let i = 0; i + 1 < count; i++) {
-    bands[3 * i] = Math.min(zs[i], zs[i + 1]);
-    bands[3 * i + 1] = Math.max(zs[i], zs[i + 1]);
-    bands[3 * i + 2] = owner[i] < 0 ? -1 : Math.max(rs[i], rs[i + 1]); // −1: never hit
+    bands[4 * i] = Math.min(zs[i], zs[i + 1]);
+    bands[4 * i + 1] = Math.max(zs[i], zs[i + 1]);
+    bands[4 * i + 2] = Math.min(rs[i], rs[i + 1]);
+    bands[4 * i + 3] = owner[i] < 0 ? -1 : Math.max(rs[i], rs[i + 1]); // −1: never hit
   }
   return {
     count,
@@ -119,19 +120,45 @@ export function intersectRevolution(profile: RevolutionProfile, ray: Float64Arra
   const eps = profile.eps;
   let best = Infinity;
   let hit = -1;
+  const invDz = dz !== 0 ? 1 / dz : 0;
   for (let i = 0; i + 1 < profile.count; i++) {
-    const rHi = bands[3 * i + 2];
-    if (rHi < 0 || rho2Min > (rHi + eps) * (rHi + eps)) continue;
-    const zLo = bands[3 * i] - eps;
-    const zHi = bands[3 * i + 1] + eps;
-    // z band: the t-interval in which the ray's height is inside the segment's band
+    const rHi = bands[4 * i + 3];
+    if (rHi < 0) continue;
+    const zLo = bands[4 * i] - eps;
+    const zHi = bands[4 * i + 1] + eps;
+    // The t-interval [ta, tb] in which the ray is inside the segment's z band (and between tMin and the best hit)
+    let ta = tMin;
+    let tb = best;
     if (dz === 0) {
       if (oz < zLo || oz > zHi) continue;
     } else {
-      const ta = (zLo - oz) / dz;
-      const tb = (zHi - oz) / dz;
-      if ((ta > tb ? ta : tb) <= tMin || (ta < tb ? ta : tb) >= best) continue;
+      const t0 = (zLo - oz) * invDz;
+      const t1z = (zHi - oz) * invDz;
+      if (t0 < t1z) {
+        if (t0 > ta) ta = t0;
+        if (t1z < tb) tb = t1z;
+      } else {
+        if (t1z > ta) ta = t1z;
+        if (t0 < tb) tb = t0;
+      }
+      if (ta > tb) continue;
     }
+    // The ray's distance from the axis over [ta, tb] must reach the segment's [rLo, rHi]: ρ²(t) is a convex
+    // quadratic, so its largest value is at an end and its smallest at an end or at the closest approach.
+    // (A filter only, with a relative slack for rounding; the exact test follows.)
+    const hi2 = (rHi + eps) * (rHi + eps) * (1 + 1e-9);
+    if (tb < Infinity) {
+      const pa = o2 + ta * (2 * od + ta * a2);
+      const pb = o2 + tb * (2 * od + tb * a2);
+      let lo2 = pa < pb ? pa : pb;
+      const top2 = pa < pb ? pb : pa;
+      if (a2 > 0) {
+        const ts = -od / a2;
+        if (ts > ta && ts < tb) lo2 = rho2Min;
+      }
+      const rLo = bands[4 * i + 2] - eps;
+      if (lo2 > hi2 || (rLo > 0 && top2 < rLo * rLo * (1 - 1e-9))) continue;
+    } else if (rho2Min > hi2) continue;
     const r0 = r[i];
     const z0 = z[i];
     const r1 = r[i + 1];
