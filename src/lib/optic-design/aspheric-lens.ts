@@ -13,7 +13,8 @@
  * Sizing: the entry reaches the exit radius a at z = H − edge (edge thickness at the rim), so the rim angle is
  * θ_rim = atan(a / (H − edge)) and v = a / g(θ_rim), g(θ) = (n − 1) sin θ / (n cos θ − 1).
  */
-import { fmt, type CheckedDesignOptions } from './design-options';
+import type { CheckedDesignOptions } from './design-options';
+import { fmt } from './format-for-message';
 import type { OpticDesign } from './optic-design';
 import { sampleCurve, straightFace } from './profile';
 

@@ -19,7 +19,8 @@
  * passed (Welford & Winston 1989, §5.3–5.4, from memory for the size of the effect). Our tests check the
  * meridional (2-D) relation exactly and the 3-D aperture relation.
  */
-import { fmt, type CheckedDesignOptions } from './design-options';
+import type { CheckedDesignOptions } from './design-options';
+import { fmt } from './format-for-message';
 import type { OpticDesign } from './optic-design';
 import { sampleCurve } from './profile';
 

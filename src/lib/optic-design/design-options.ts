@@ -4,6 +4,7 @@
  * throws a RangeError whose message is one line naming the field and its allowed range.
  */
 import { resolveIndex } from '../materials/resolve-index';
+import { fmt } from './format-for-message';
 import { sourceRadiusMm, type LambertianSource } from './lambertian-source';
 
 export type OpticType = 'reflector' | 'lens' | 'tir';
@@ -138,9 +139,4 @@ export function checkDesignOptions(o: OpticDesignOptions): CheckedDesignOptions 
     exitFace,
     toleranceMm
   };
-}
-
-/** A length or angle for a message: 3 significant digits, no trailing zeros. */
-export function fmt(x: number): string {
-  return String(Number(x.toPrecision(3)));
 }

@@ -14,7 +14,7 @@
  * the bound with equality; a peaked beam's half-maximum width can be narrower than 2θ only by leaving flux
  * outside it).
  */
-import { fmt } from './design-options';
+import { fmt } from './format-for-message';
 
 export interface EtendueInput {
   /** Emitting area of the source, mm² (> 0). */

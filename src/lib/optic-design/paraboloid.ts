@@ -10,7 +10,8 @@
  * gap 0. Rays with θ < θ_rim leave through the open front without touching the mirror; for a Lambertian source
  * (flux within θ ∝ sin² θ) the mirror receives sin² θ_base − sin² θ_rim, i.e. cos² θ_rim when gap = 0.
  */
-import { fmt, type CheckedDesignOptions } from './design-options';
+import type { CheckedDesignOptions } from './design-options';
+import { fmt } from './format-for-message';
 import type { OpticDesign } from './optic-design';
 import { sampleCurve } from './profile';
 

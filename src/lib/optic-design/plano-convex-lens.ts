@@ -10,7 +10,8 @@
  * solved for R (the flattest root: the least spherical aberration of the roots). Rays off the axis are not
  * collimated exactly — spherical aberration, the reason for the aspheric lens.
  */
-import { fmt, type CheckedDesignOptions } from './design-options';
+import type { CheckedDesignOptions } from './design-options';
+import { fmt } from './format-for-message';
 import type { OpticDesign } from './optic-design';
 import { sampleCurve, straightFace } from './profile';
 

@@ -17,7 +17,8 @@
  */
 import { integrateCollimatingSurface, type CollimatingSurface, type RayFamily } from './collimating-surface';
 import { collimatingHyperbolaRadiusMm } from './aspheric-lens';
-import { fmt, type CheckedDesignOptions } from './design-options';
+import type { CheckedDesignOptions } from './design-options';
+import { fmt } from './format-for-message';
 import type { OpticDesign, TirFailure } from './optic-design';
 import { paraboloidFocalLengthMm } from './paraboloid';
 import { sampleCurve, straightFace } from './profile';
