@@ -4,7 +4,8 @@ import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join } from 'node:path';
 
 const pureRoots = ['src/lib/optics', 'src/lib/trace', 'src/lib/materials', 'src/lib/scenario', 'src/lib/photometry',
-  'src/lib/decisions', 'src/lib/export', 'src/lib/variants', 'src/lib/color', 'src/lib/scatter', 'src/lib/phosphors'];
+  'src/lib/decisions', 'src/lib/export', 'src/lib/variants', 'src/lib/color', 'src/lib/scatter', 'src/lib/phosphors',
+  'src/lib/optic-design'];
 const browserShims = new Set(['trace-worker.ts', 'trace-pool.ts']); // worker glue may use Worker/self/navigator
 const banned = [
   [/from\s+['"]svelte(\/[^'"]*)?['"]/, 'imports svelte'],
