@@ -37,6 +37,7 @@ export function slug(text: string, max = PART_MAX): string {
     .replace(/≈/g, ' approx ')
     .replace(/%/g, ' pct ')
     .normalize('NFKD')
+    .replace(/[\u0300-\u036f]/g, '')
     .toLowerCase()
     .replace(/[^a-z0-9]+/g, '-')
     .replace(/^-+|-+$/g, '');
