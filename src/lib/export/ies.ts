@@ -75,6 +75,7 @@ const ASCII_SPELLING: readonly [RegExp, string][] = [
   [/Φ/g, 'Phi'],
   [/[σ]/g, 'sigma'],
   [/Ω/g, 'Omega'],
+  [/Ø/g, 'dia.'],
   [/²/g, '2'],
   [/³/g, '3']
 ];
