@@ -237,7 +237,12 @@ function slideConfig(spec: ChartSpec, palette: ChartPalette, header: SlideHeader
 function equalUnitsAtFixedSize(chart: Chart, spec: ChartSpec): void {
   const { x, y } = spec;
   if (spec.kind !== 'polar' || x.min === undefined || x.max === undefined || y.min === undefined || y.max === undefined) return;
-  const scales = chart.options.scales as Record<string, FontedScale>;
+  const scales = chart.options.scales as Record<string, FontedScale & { ticks?: { callback?: (v: number | string) => string } }>;
+  // Ticks only over the data's own range: the widened margin carries no labels
+  const yMax = y.max;
+  const xMax = Math.max(Math.abs(x.min), Math.abs(x.max));
+  if (scales.y.ticks) scales.y.ticks.callback = (v) => (Number(v) <= yMax + 1e-9 ? String(Number(Number(v).toFixed(6))) : '');
+  if (scales.x.ticks) scales.x.ticks.callback = (v) => (Math.abs(Number(v)) <= xMax + 1e-9 ? String(Number(Number(v).toFixed(6))) : '');
   for (let pass = 0; pass < 3; pass++) {
     const area = chart.chartArea;
     const plotW = area.right - area.left;
