@@ -216,7 +216,8 @@ test('results export as JSON with the scenario; charts save PNG and CSV', async 
   const shown = await page.getByTestId('extraction').innerText();
 
   const json = await downloadText(page, 'Export results (JSON, with the scenario)');
-  expect(json.name).toBe('outcouple-stack-results.json');
+  // Named by page, scenario and content (exportFileName)
+  expect(json.name).toMatch(/^outcouple-stack-[a-z0-9-]+-results\.json$/);
   const doc = JSON.parse(json.text);
   expect(doc.format).toBe('outcouple-stack-results');
   expect(doc.scenario.version).toBe(2);
@@ -228,7 +229,7 @@ test('results export as JSON with the scenario; charts save PNG and CSV', async 
   expect(doc.results.whereTheLightGoes.join(' ')).toContain('cannot widen');
 
   const csv = await downloadText(page, /Save CSV: Stack transmittance against angle/);
-  expect(csv.name).toBe('stack-transmittance-vs-angle.csv');
+  expect(csv.name).toMatch(/^outcouple-stack-[a-z0-9-]+-stack-transmittance-vs-angle\.csv$/);
   const lines = csv.text.trim().split('\r\n');
   expect(lines[0]).toContain('Angle of incidence in the chip θ (°)');
   expect(lines[0]).toContain('Unpolarised — Transmittance T (%)');
@@ -240,7 +241,7 @@ test('results export as JSON with the scenario; charts save PNG and CSV', async 
   const dl = page.waitForEvent('download');
   await page.getByRole('button', { name: /Save PNG: Stack reflectance against wavelength/ }).click();
   const png = await dl;
-  expect(png.suggestedFilename()).toBe('stack-reflectance-vs-wavelength.png');
+  expect(png.suggestedFilename()).toMatch(/^outcouple-stack-[a-z0-9-]+-stack-reflectance-vs-wavelength\.png$/);
   const bytes = await readFile(await png.path());
   expect(bytes.subarray(1, 4).toString('ascii')).toBe('PNG');
 });

@@ -27,10 +27,12 @@ describe('dielectrics with published formulas', () => {
     expectWithin(n('fused-silica', 587.6), 1.45846, 1e-5);
   });
 
-  it('borosilicate crown glass nd(587.56 nm) = 1.5168 and n(632.8 nm) = 1.51509', () => {
-    // published: SCHOTT optical glass data sheet N-BK7. Tolerances: half a unit in the last published digit.
-    expectWithin(n('borosilicate-crown', 587.56), 1.5168, 5e-5);
-    expectWithin(n('borosilicate-crown', 632.8), 1.51509, 5e-6);
+  it('soda-lime glass n(587.6 nm) = 1.52338 and n(632.8 nm) = 1.52163', () => {
+    // computed from published formula: M. Rubin, Sol. Energy Mater. 12, 275 (1985), clear window glass,
+    // n = 1.5130 − 0.003169λ² + 0.003962/λ². Tolerance 1e-5: the library interpolates the formula's
+    // values at 10 nm rows (error ≈ h²n''/8 ≈ 2e-6) and rounds them to 6 decimals.
+    expectWithin(n('soda-lime-glass', 587.6), 1.52338, 1e-5);
+    expectWithin(n('soda-lime-glass', 632.8), 1.52163, 1e-5);
   });
 
   it('sapphire ordinary n(632.8 nm) = 1.76590', () => {
@@ -95,7 +97,7 @@ describe('encapsulants (common practice ranges)', () => {
   });
 });
 
-describe('semiconductors recalled values (from memory, loose tolerances)', () => {
+describe('semiconductors, recalled values (from memory, loose tolerances) and published traps', () => {
   it('GaAs n(1000 nm) ≈ 3.50', () => {
     // from memory: GaAs just below the gap, n ≈ 3.50. Tolerance 0.03.
     expectWithin(n('gaas', 1000), 3.5, 0.03);
@@ -107,45 +109,59 @@ describe('semiconductors recalled values (from memory, loose tolerances)', () =>
     expectWithin(pole ?? 0, 874.6, 0.05);
   });
 
-  it('GaP n(633 nm) ≈ 3.31, 4H-SiC n_o(633 nm) ≈ 2.65, ZnO n_o(633 nm) ≈ 1.99', () => {
-    // from memory, tolerance 0.03 each (recalled to about two decimals).
-    expectWithin(n('gap', 633), 3.31, 0.03);
-    expectWithin(n('sic-4h', 633), 2.65, 0.03);
+  it('ZnO n_o(633 nm) ≈ 1.99', () => {
+    // from memory, tolerance 0.03 (recalled to about two decimals).
     expectWithin(n('zno', 633), 1.99, 0.03);
   });
 
   it('the chip semiconductors are all above 2.3 where they emit or are transparent', () => {
     // common practice: LED chip materials are high-index (GaN-based ≈ 2.4–2.6, phosphides and arsenides ≈ 3.1–3.6).
-    const at: [string, number][] = [['gan', 450], ['ingan', 450], ['algainp', 620], ['gap', 620], ['gaas', 1000], ['sic-4h', 460]];
+    const at: [string, number][] = [['gan', 450], ['gap', 620], ['gaas', 1000], ['sic-4h', 460]];
     for (const [id, w] of at) expect(n(id, w), id).toBeGreaterThan(2.3);
   });
 });
 
 describe('metals', () => {
   it('Ag at 550 nm: n = 0.04382, k = 3.6101; R into air 0.9876 and into 1.5: 0.9829', () => {
-    // published n, k: K. M. McPeak et al., ACS Photonics 2, 326 (2015); R computed (physics notes §1).
+    // published n, k: K. M. McPeak et al., ACS Photonics 2, 326 (2015), their 550 nm row; R computed as
+    // ((n − n0)² + k²)/((n + n0)² + k²). Tolerance: half a unit in the last quoted digit.
     const r = indexAt(findMaterial('ag')!, 550);
-    expect(r.n).toBe(0.04382);
-    expect(r.k).toBe(3.6101);
+    expectWithin(r.n, 0.04382, 5e-6);
+    expectWithin(r.k, 3.6101, 5e-5);
     // Tolerance 1e-4: R is quoted to 4 decimals.
     expectWithin(reflectance('ag', 550, 1), 0.9876, 1e-4);
     expectWithin(reflectance('ag', 550, 1.5), 0.9829, 1e-4);
   });
 
   it('Al at 450 nm: n = 0.4892, k = 4.7783; R into air 0.9219', () => {
-    // published n, k: McPeak et al. 2015; R computed. Tolerance 1e-4.
+    // published n, k: McPeak et al. 2015, their 450 nm row; R computed. Tolerances: half a unit in the last digit.
     const r = indexAt(findMaterial('al')!, 450);
-    expect([r.n, r.k]).toEqual([0.4892, 4.7783]);
+    expectWithin(r.n, 0.4892, 5e-5);
+    expectWithin(r.k, 4.7783, 5e-5);
     expectWithin(reflectance('al', 450, 1), 0.9219, 1e-4);
   });
 
-  it('recalled metal tables give plausible reflectance into air', () => {
-    // common practice: Ag > 0.95 and Al ≈ 0.86–0.93 from 450 to 1000 nm; Au < 0.45 at 450 nm and > 0.9 at 700 nm.
-    for (let w = 450; w <= 1000; w += 50) {
-      expect(reflectance('ag', w, 1), `Ag ${w}`).toBeGreaterThan(0.95);
-      expect(reflectance('al', w, 1), `Al ${w}`).toBeGreaterThan(0.86);
-      expect(reflectance('al', w, 1), `Al ${w}`).toBeLessThan(0.95);
+  it('reflectance into air agrees with other published data sets of the same metals', () => {
+    // other measurement: P. B. Johnson, R. W. Christy, Phys. Rev. B 6, 4370 (1972) give R(Ag, 550 nm) = 0.9831
+    // and R(Au, 632.8 nm) = 0.9442; A. D. Rakić, Appl. Opt. 34, 4755 (1995) gives R(Al, 550 nm) = 0.9154.
+    // Tolerances are the spread between evaporated-film data sets: 0.01 for Ag, 0.005 for Al, 0.02 for Au.
+    expectWithin(reflectance('ag', 550, 1), 0.9831, 0.01);
+    expectWithin(reflectance('al', 550, 1), 0.9154, 0.005);
+    expectWithin(reflectance('au', 632.8, 1), 0.9442, 0.02);
+  });
+
+  it('Ag stays above 0.95 from 450 to 1000 nm; Al dips near 800 nm; Au absorbs blue', () => {
+    // common practice: fresh silver reflects > 0.95 in the visible and near infrared; aluminium has an interband
+    // absorption near 800 nm (1.5 eV) where R falls to about 0.86; gold reflects < 0.45 at 450 nm and > 0.9 at 700 nm.
+    for (let w = 450; w <= 1000; w += 50) expect(reflectance('ag', w, 1), `Ag ${w}`).toBeGreaterThan(0.95);
+    let alMin = 1;
+    let alMinAt = 0;
+    for (let w = 450; w <= 1000; w += 5) {
+      const r = reflectance('al', w, 1);
+      if (r < alMin) [alMin, alMinAt] = [r, w];
     }
+    expectWithin(alMin, 0.86, 0.015);
+    expectWithin(alMinAt, 810, 40);
     expect(reflectance('au', 450, 1)).toBeLessThan(0.45);
     expect(reflectance('au', 700, 1)).toBeGreaterThan(0.9);
   });

@@ -4,7 +4,7 @@ import { traceSync } from '../../lib/trace/trace';
 import { defaultThreads, traceParallel, MAX_THREADS } from '../../lib/trace/node/node-pool';
 import type { TracePackage } from '../../lib/trace/package-spec';
 import { readScenario, resolveScenario, toTracePackage } from '../../lib/scenario';
-import { farFieldCsv, packageOpening, writeIes } from '../../lib/export';
+import { farFieldCsv, packageOpening, traceIes } from '../../lib/export';
 import { CliError } from '../cli-error';
 import { indexOption } from '../index-option';
 import { choiceOption, integerOption, numberOption, parseOptions, sizeOption, stringOption, truncate, type OptionSpec, type ParsedValues } from '../options';
@@ -187,21 +187,21 @@ export async function run(argv: string[]): Promise<void> {
   }
   const seconds = (performance.now() - started) / 1000;
   const s = summarize(tally);
-  const farFieldSamples = { thetaDeg: s.farField.bins.map((b) => b.thetaDeg), relativeIntensity: s.farField.bins.map((b) => b.relativeIntensity) };
   const notes: string[] = [];
   if (s.trappedNote) notes.push(s.trappedNote);
   if (s.geometryNote) notes.push(s.geometryNote);
 
   if (iesPath || csvPath) {
     if (s.counts.escaped === 0) throw new CliError('no ray escaped, so there is no far field to write');
+    // The same file the dome page writes: zone-averaged near the poles, the smoothing stated in it
+    const ies = traceIes({ binIntensities: s.farField.bins.map((b) => b.relativeIntensity), lumens, rays, seed,
+      issueDate: new Date().toISOString().slice(0, 10), name, opening: packageOpening(pkg.encapsulant, pkg.chip) });
     if (iesPath) {
-      const ies = writeIes({ farField: farFieldSamples, lumens, rays, seed, issueDate: new Date().toISOString().slice(0, 10), name,
-        opening: packageOpening(pkg.encapsulant, pkg.chip) });
-      writeOutput(iesPath, ies, 'ies');
+      writeOutput(iesPath, ies.text, 'ies');
       notes.push(`IES LM-63 file written to ${iesPath} (${lumens} lm)`);
     }
     if (csvPath) {
-      writeOutput(csvPath, farFieldCsv(farFieldSamples, lumens), 'csv');
+      writeOutput(csvPath, farFieldCsv(ies.farField, lumens), 'csv');
       notes.push(`far-field CSV written to ${csvPath}`);
     }
   }

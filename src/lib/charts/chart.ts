@@ -14,10 +14,14 @@ import {
   LogarithmicScale,
   PointElement,
   ScatterController,
+  SubTitle,
+  Title,
   Tooltip,
+  type ChartConfiguration,
   type Plugin
 } from 'chart.js';
 import { chartConfig, equalUnitsAspectRatio, FALLBACK_PALETTE, seriesColor, type ChartPalette } from './chart-config';
+import { SLIDE_SIZE, type SlideHeader } from './slide';
 import type { ChartSpec } from './spec';
 
 Chart.register(
@@ -30,6 +34,8 @@ Chart.register(
   LogarithmicScale,
   CategoryScale,
   Legend,
+  Title,
+  SubTitle,
   Tooltip
 );
 
@@ -132,8 +138,6 @@ function equalUnitsPlugin(live: Live): Plugin {
 export interface ChartHandle {
   /** Redraws with a new spec (same chart kind keeps the canvas; a different kind rebuilds it). */
   update(spec: ChartSpec): void;
-  /** PNG of the chart as a data URL. */
-  toPng(): string;
   destroy(): void;
 }
 
@@ -168,12 +172,113 @@ export function mountChart(canvas: HTMLCanvasElement, spec: ChartSpec): ChartHan
       live.spec = next;
       redraw();
     },
-    toPng() {
-      return chart.toBase64Image('image/png', 1);
-    },
     destroy() {
       scheme?.removeEventListener('change', redraw);
       chart.destroy();
     }
   };
+}
+
+/** Font sizes of a saved slide, px: readable when a 1600 px picture is shown on a projector. */
+const SLIDE_FONT = { title: 34, subtitle: 20, axisTitle: 22, ticks: 18, legend: 19 } as const;
+
+type FontedScale = { title?: { font?: object }; ticks?: { font?: object; color?: string }; min?: number; max?: number };
+
+/** The on-screen configuration enlarged for a slide: fixed size, title and subtitle, larger fonts. */
+function slideConfig(spec: ChartSpec, palette: ChartPalette, header: SlideHeader): ChartConfiguration {
+  const config = chartConfig(spec, palette);
+  const options = (config.options ?? {}) as Record<string, unknown> & {
+    scales?: Record<string, FontedScale>;
+    plugins?: Record<string, unknown>;
+  };
+  const family = palette.fontFamily;
+  options.responsive = false;
+  options.maintainAspectRatio = false;
+  options.devicePixelRatio = 1;
+  options.layout = { padding: { left: 24, right: 40, top: 12, bottom: 12 } };
+  for (const scale of Object.values(options.scales ?? {})) {
+    if (scale.title) scale.title.font = { size: SLIDE_FONT.axisTitle, family };
+    if (scale.ticks) scale.ticks.font = { size: SLIDE_FONT.ticks, family };
+  }
+  const plugins = (options.plugins ?? {}) as Record<string, { labels?: { font?: object; boxWidth?: number; boxHeight?: number } }>;
+  if (plugins.legend?.labels) {
+    plugins.legend.labels.font = { size: SLIDE_FONT.legend, family };
+    plugins.legend.labels.boxWidth = 40;
+    plugins.legend.labels.boxHeight = 3;
+  }
+  options.plugins = {
+    ...plugins,
+    tooltip: { enabled: false },
+    title: {
+      display: true,
+      text: header.title,
+      color: palette.ink,
+      align: 'start',
+      font: { size: SLIDE_FONT.title, weight: 'bold', family },
+      padding: { top: 8, bottom: 6 }
+    },
+    subtitle: {
+      display: true,
+      text: header.subtitle,
+      color: palette.muted,
+      align: 'start',
+      font: { size: SLIDE_FONT.subtitle, family },
+      padding: { bottom: 18 }
+    }
+  };
+  config.options = options as ChartConfiguration['options'];
+  return config;
+}
+
+/**
+ * Equal units on both axes of a polar chart drawn at a fixed size: widens the x or y range (never
+ * narrows it) until the plot area's pixels per unit match, so a circle stays a circle.
+ */
+function equalUnitsAtFixedSize(chart: Chart, spec: ChartSpec): void {
+  const { x, y } = spec;
+  if (spec.kind !== 'polar' || x.min === undefined || x.max === undefined || y.min === undefined || y.max === undefined) return;
+  const scales = chart.options.scales as Record<string, FontedScale & { ticks?: { callback?: (v: number | string) => string } }>;
+  // Ticks only over the data's own range: the widened margin carries no labels
+  const yMax = y.max;
+  const xMax = Math.max(Math.abs(x.min), Math.abs(x.max));
+  if (scales.y.ticks) scales.y.ticks.callback = (v) => (Number(v) <= yMax + 1e-9 ? String(Number(Number(v).toFixed(6))) : '');
+  if (scales.x.ticks) scales.x.ticks.callback = (v) => (Math.abs(Number(v)) <= xMax + 1e-9 ? String(Number(Number(v).toFixed(6))) : '');
+  for (let pass = 0; pass < 3; pass++) {
+    const area = chart.chartArea;
+    const plotW = area.right - area.left;
+    const plotH = area.bottom - area.top;
+    if (!(plotW > 0 && plotH > 0)) return;
+    const xSpan = x.max - x.min;
+    const ySpan = y.max - y.min;
+    if (plotW / plotH > xSpan / ySpan) {
+      const wide = (ySpan * plotW) / plotH;
+      const mid = (x.max + x.min) / 2;
+      scales.x.min = mid - wide / 2;
+      scales.x.max = mid + wide / 2;
+    } else {
+      scales.y.max = y.min + (xSpan * plotH) / plotW;
+    }
+    chart.update('none');
+  }
+}
+
+/**
+ * PNG (data URL) of `spec` drawn off screen at slide size with its title, scenario and units, on a white
+ * background whatever the page's colour scheme.
+ * @param header what to write above the plot (see slideHeader)
+ */
+export function renderSlidePng(spec: ChartSpec, header: SlideHeader, size: { width: number; height: number } = SLIDE_SIZE): string {
+  const canvas = document.createElement('canvas');
+  canvas.width = size.width;
+  canvas.height = size.height;
+  const live: Live = { spec, palette: { ...FALLBACK_PALETTE, fontFamily: readPalette(document.body).fontFamily } };
+  const config = slideConfig(spec, live.palette, header);
+  config.plugins = [backgroundPlugin(live), errorBarPlugin(live)];
+  const chart = new Chart(canvas, config);
+  try {
+    equalUnitsAtFixedSize(chart, spec);
+    return chart.toBase64Image('image/png', 1);
+  } finally {
+    chart.destroy();
+  }
 }

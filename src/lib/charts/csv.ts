@@ -1,14 +1,16 @@
 /**
  * CSV text (RFC 4180: comma separated, CRLF line ends, fields with comma, quote or line break quoted,
- * quotes doubled). Numbers are written in full precision; NaN and ±Infinity are written as empty cells.
+ * quotes doubled). Numbers are written with the significant digits of the quantity (see exportNumber),
+ * never float noise; NaN and ±Infinity are written as empty cells.
  */
+import { exportNumber } from '../export/number-text';
 import type { ChartSpec } from './spec';
 
 export type CsvCell = string | number | null | undefined;
 
 function cell(v: CsvCell): string {
   if (v === null || v === undefined) return '';
-  if (typeof v === 'number') return Number.isFinite(v) ? String(v) : '';
+  if (typeof v === 'number') return exportNumber(v);
   return /[",\r\n]/.test(v) ? `"${v.replace(/"/g, '""')}"` : v;
 }
 

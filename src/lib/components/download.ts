@@ -20,13 +20,3 @@ export function downloadUrl(filename: string, url: string): void {
   a.click();
   a.remove();
 }
-
-/** A file name made from a title: "Transmission T(θ) — s, p" → "transmission-t-s-p". */
-export function fileSlug(title: string): string {
-  const slug = title
-    .normalize('NFKD')
-    .toLowerCase()
-    .replace(/[^a-z0-9]+/g, '-')
-    .replace(/^-+|-+$/g, '');
-  return slug.slice(0, 60) || 'outcouple';
-}

@@ -8,7 +8,7 @@ import { candelaDistribution, type FarFieldSamples } from './candela-distributio
 export const FAR_FIELD_CSV_HEADERS: readonly string[] = ['theta (deg)', 'relative intensity', 'intensity (cd)'];
 
 /**
- * CSV text (RFC 4180, CR LF) with one row per traced angle: θ in degrees from the package axis, the
+ * CSV text (RFC 4180, CR LF; numbers to six significant digits by toCsv) with one row per traced angle: θ in degrees from the package axis, the
  * relative intensity as traced, and candela = relative · k, where k scales the distribution (resampled
  * on a 1° grid, as in the IES file) to `lumens`.
  * @param farField relative intensity against polar angle
@@ -19,7 +19,7 @@ export function farFieldCsv(farField: FarFieldSamples, lumens: number): string {
   const rows = farField.thetaDeg.map((theta, i) => [
     theta,
     farField.relativeIntensity[i],
-    Number((farField.relativeIntensity[i] * candelaPerUnit).toPrecision(8))
+    farField.relativeIntensity[i] * candelaPerUnit
   ]);
   return toCsv(FAR_FIELD_CSV_HEADERS, rows);
 }

@@ -50,20 +50,76 @@ export interface IesWriteInput {
   inputWatts?: number;
   /** Vertical angle step, degrees (default 1). */
   stepDeg?: number;
+  /** How the far field was smoothed, if it was: written as the [_SMOOTHING] keyword. */
+  smoothing?: string;
 }
 
-/** Replaces what a keyword line cannot hold: line breaks, control and non-ASCII characters. */
-function keywordText(text: string, room: number): string {
-  const plain = String(text)
-    .replace(/[×]/g, 'x')
-    .replace(/[µμ]/g, 'u')
-    .replace(/[–—]/g, '-')
-    .replace(/[°]/g, ' deg')
+/** Spellings of the non-ASCII characters our names and notes use (a keyword line is ASCII only). */
+const ASCII_SPELLING: readonly [RegExp, string][] = [
+  [/≈/g, '~'],
+  [/±/g, '+/-'],
+  [/×/g, 'x'],
+  [/·/g, '*'],
+  [/[µμ]/g, 'u'],
+  [/[–—−]/g, '-'],
+  [/°/g, ' deg'],
+  [/≤/g, '<='],
+  [/≥/g, '>='],
+  [/→/g, '->'],
+  [/[‘’]/g, "'"],
+  [/[“”]/g, '"'],
+  [/…/g, '...'],
+  [/[θΘ]/g, 'theta'],
+  [/[ηΗ]/g, 'eta'],
+  [/[λΛ]/g, 'lambda'],
+  [/Φ/g, 'Phi'],
+  [/[σ]/g, 'sigma'],
+  [/Ω/g, 'Omega'],
+  [/Ø/g, 'dia.'],
+  [/²/g, '2'],
+  [/³/g, '3']
+];
+
+/**
+ * Text as printable ASCII on one line: the spellings above, accents dropped (é → e), anything else
+ * that is not printable ASCII as '?'.
+ */
+export function asciiText(text: string): string {
+  let out = String(text);
+  for (const [pattern, spelling] of ASCII_SPELLING) out = out.replace(pattern, spelling);
+  return out
+    .replace(/[₀-₉]/g, (d) => String(d.charCodeAt(0) - 0x2080))
+    .normalize('NFKD')
+    .replace(/[\u0300-\u036f]/g, '')
     .replace(/[\r\n\t]+/g, ' ')
     .replace(/[^\x20-\x7e]/g, '?')
     .replace(/\s+/g, ' ')
     .trim();
+}
+
+/** Replaces what a keyword line cannot hold (see asciiText) and cuts it to `room` characters. */
+function keywordText(text: string, room: number): string {
+  const plain = asciiText(text);
   return plain.length > room ? plain.slice(0, room) : plain;
+}
+
+/** A keyword and its text as lines: `[KEY] text`, continued on `[MORE] text` lines, words kept whole. */
+function keywordLines(key: string, text: string): string[] {
+  const words = asciiText(text).split(' ').filter((w) => w !== '');
+  const lines: string[] = [];
+  let head = `[${key}] `;
+  let line = '';
+  for (const word of words) {
+    const room = MAX_LINE - head.length;
+    const w = word.length > room ? word.slice(0, room) : word;
+    if (line !== '' && line.length + 1 + w.length > room) {
+      lines.push(head + line);
+      head = '[MORE] ';
+      line = w;
+    } else line = line === '' ? w : `${line} ${w}`;
+  }
+  lines.push(head + (line || 'none'));
+  return lines;
 }
 
 /** A number as an LM-63 reader expects it: plain decimals, no exponent, at most 6 significant digits. */
@@ -138,6 +194,7 @@ export function writeIes(input: IesWriteInput): string {
     const head = `[${key}] `;
     lines.push(head + (keywordText(text, MAX_LINE - head.length) || 'none'));
   }
+  if (input.smoothing !== undefined) lines.push(...keywordLines('_SMOOTHING', input.smoothing));
   lines.push('TILT=NONE');
   // Line 4: lamps, lumens per lamp, multiplier, #vertical, #horizontal, type C, metres, w, l, h
   lines.push(

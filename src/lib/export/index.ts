@@ -11,6 +11,7 @@ export { iesOpeningMetres, packageOpening, OPENING_MAX_MM, type IesOpening, type
 export {
   writeIes,
   parseIes,
+  asciiText,
   iesNumber,
   IES_VERSION_LINE,
   IES_REQUIRED_KEYWORDS,
@@ -19,3 +20,7 @@ export {
   type IesPhotometry
 } from './ies';
 export { farFieldCsv, FAR_FIELD_CSV_HEADERS } from './far-field-csv';
+export { exportNumber, roundSignificant, exportJsonReplacer, CSV_SIGNIFICANT_DIGITS, JSON_SIGNIFICANT_DIGITS } from './number-text';
+export { exportFileName, slug, type ExportFileNameParts } from './file-name';
+export { smoothFarField, FAR_FIELD_MIN_ZONE_SR, type SmoothedFarField } from './far-field-smoothing';
+export { traceIes, type TraceIesInput } from './trace-ies';

@@ -22,3 +22,4 @@ export { resolveIndex } from './resolve-index';
 export { userMaterialField, validateUserMaterial, type UserMaterialResult } from './user-material';
 export { parseNkTable, type NkTableResult, MICROMETRE_THRESHOLD } from './nk-table';
 export { materialSchema } from './material-schema';
+export { RETIRED_MATERIAL_IDS, currentMaterialId } from './retired-ids';

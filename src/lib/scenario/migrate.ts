@@ -7,7 +7,11 @@
  * Version 0 is the short hand-written draft layout (also what a scenario without a `version` field is
  * read as): one `wavelengthNm`; media written as a library id string or a bare index number; the base
  * as a reflectance number or a metal id string; optional fields filled from the demo scenario.
+ *
+ * Every version: library ids retired since (see materials/retired-ids.ts) are renamed to the entry that
+ * replaced them, so an old link opens with the published data set.
  */
+import { currentMaterialId } from '../materials/retired-ids';
 import { DEMO_SCENARIO } from './defaults';
 import { SCENARIO_VERSION } from './schema';
 
@@ -84,8 +88,26 @@ export function migrateScenario(raw: unknown): MigrateResult {
       message: `This scenario was made by a newer version of Outcouple (scenario version ${version}); this one reads versions up to ${SCENARIO_VERSION}.`
     };
   }
-  if (version === SCENARIO_VERSION) return { ok: true, value: raw, from: version };
+  if (version === SCENARIO_VERSION) return { ok: true, value: renameRetired(raw), from: version };
   // Version 2 only added user-material media: a version-1 scenario is a version-2 one with its number raised.
   const v1 = version === 0 ? fromV0(raw) : raw;
-  return { ok: true, value: { ...v1, version: SCENARIO_VERSION }, from: version };
+  return { ok: true, value: renameRetired({ ...v1, version: SCENARIO_VERSION }), from: version };
+}
+
+/** A library medium `{ kind: 'material', id }` with a retired id gets the id of its replacement. */
+function renameMedium(medium: unknown): unknown {
+  if (!isRecord(medium) || medium.kind !== 'material' || typeof medium.id !== 'string') return medium;
+  const id = currentMaterialId(medium.id);
+  return id === medium.id ? medium : { ...medium, id };
+}
+
+/** The scenario with retired library ids renamed in chip, encapsulant and outside media (copies, never edits). */
+function renameRetired(s: Record<string, unknown>): Record<string, unknown> {
+  const out: Record<string, unknown> = { ...s, outside: renameMedium(s.outside) };
+  for (const part of ['chip', 'encapsulant'] as const) {
+    const p = s[part];
+    if (isRecord(p)) out[part] = { ...p, medium: renameMedium(p.medium) };
+  }
+  if (s.outside === undefined) delete out.outside;
+  return out;
 }

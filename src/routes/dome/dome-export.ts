@@ -1,4 +1,5 @@
 /** The dome page's results as a JSON document, with the scenario they were computed in. Pure. */
+import { exportJsonReplacer } from '$lib/export/number-text';
 import type { DomeClosedForm } from '$lib/sweeps/dome-closed-form';
 import type { SweepPointResult } from '$lib/sweeps/run-sweep';
 import type { SweepPlan } from '$lib/sweeps/sweep-plan';
@@ -21,11 +22,6 @@ export interface DomeExportSweep {
   plan: SweepPlan;
   results: SweepPointResult[];
   raysPerPoint: number;
-}
-
-/** Numbers that JSON cannot hold (NaN, ±Infinity) become null. */
-function clean(_key: string, value: unknown): unknown {
-  return typeof value === 'number' && !Number.isFinite(value) ? null : value;
 }
 
 function traceDoc(s: TraceSummary) {
@@ -98,5 +94,5 @@ export function domeExport(
     })),
     scenario
   };
-  return JSON.stringify(doc, clean, 2) + '\n';
+  return JSON.stringify(doc, exportJsonReplacer, 2) + '\n';
 }

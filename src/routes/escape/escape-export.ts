@@ -1,5 +1,6 @@
 /** The escape-cone page's results as a JSON document, with the scenario they were computed in. */
 import type { ChipEscape, EscapeCone } from '$lib/optics';
+import { exportJsonReplacer } from '$lib/export/number-text';
 import type { Scenario } from '$lib/scenario/schema';
 import type { SideValue } from './sides';
 
@@ -49,5 +50,5 @@ export function escapeExport(
     ],
     scenario
   };
-  return JSON.stringify(doc, null, 2) + '\n';
+  return JSON.stringify(doc, exportJsonReplacer, 2) + '\n';
 }

@@ -2,6 +2,7 @@
  * The stack page's results as a JSON file, with the scenario and the stack they were computed from,
  * so the file alone says what was computed. Pure.
  */
+import { exportJsonReplacer } from '$lib/export/number-text';
 import type { Scenario } from '$lib/scenario/schema';
 import type { StackDoc } from './stack-doc';
 import type { StackResults } from './stack-results';
@@ -39,7 +40,7 @@ export function stackResultsJson(scenario: Scenario, stack: StackDoc, r: StackRe
         notes: r.notes
       }
     },
-    null,
+    exportJsonReplacer,
     2
   );
 }

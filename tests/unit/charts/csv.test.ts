@@ -14,8 +14,10 @@ describe('toCsv', () => {
     );
   });
 
-  it('writes numbers in full precision and non-finite numbers as empty cells', () => {
-    expect(toCsv(['x'], [[0.1 + 0.2], [NaN], [Infinity], [-0.5], [1e-20]])).toBe('x\r\n0.30000000000000004\r\n\r\n\r\n-0.5\r\n1e-20\r\n');
+  it('writes numbers to six significant digits (no float noise), whole numbers exactly, non-finite numbers as empty cells', () => {
+    expect(toCsv(['x'], [[0.1 + 0.2], [NaN], [Infinity], [-0.5], [1e-20], [38.63700000000001], [250000]])).toBe(
+      'x\r\n0.3\r\n\r\n\r\n-0.5\r\n1e-20\r\n38.637\r\n250000\r\n'
+    );
   });
 
   it('pads short rows to the header width, keeps longer rows whole, writes null/undefined as empty', () => {

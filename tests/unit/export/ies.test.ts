@@ -105,3 +105,33 @@ describe('parseIes(text)', () => {
     expect(() => parseIes('IES:LM-63-2019\nTILT=NONE\n1 -1 x')).toThrow(/candela multiplier must be a number/);
   });
 });
+
+describe('writeIes keyword lines are printable ASCII (LM-63 files are ASCII text)', () => {
+  const text = writeIes({
+    farField: { thetaDeg: [0, 90, 180], relativeIntensity: [1, 0.5, 0] },
+    lumens: 10,
+    rays: 1000,
+    seed: 1,
+    issueDate: '2026-12-03',
+    name: 'Phenyl silicone (n ≈ 1.53) — Ø 5 mm, 2 × 2 µm², θ ≤ 80°, ± 2 %, “quoted”, é, 日本',
+    opening: { shape: 'point', widthMm: 0, lengthMm: 0, heightMm: 0 },
+    smoothing: 'Zone mean over ≥ 0.05 sr; ' + 'word '.repeat(60)
+  });
+  const lines = text.split('\r\n');
+  const header = lines.slice(0, lines.indexOf('TILT=NONE'));
+
+  it('spells ≈, —, ×, µ, ², θ, ≤, °, ±, quotes and accents in ASCII, and marks what has no spelling with ?', () => {
+    for (const l of header) expect(l).toMatch(/^[\x20-\x7e]*$/);
+    expect(header.find((l) => l.startsWith('[LUMINAIRE]'))).toBe(
+      '[LUMINAIRE] Phenyl silicone (n ~ 1.53) - dia. 5 mm, 2 x 2 um2, theta <= 80 deg, +/- 2 %, "quoted", e, ??'
+    );
+  });
+
+  it('continues a long keyword on [MORE] lines within 132 characters', () => {
+    const at = header.findIndex((l) => l.startsWith('[_SMOOTHING]'));
+    expect(at).toBeGreaterThan(0);
+    expect(header[at + 1].startsWith('[MORE] ')).toBe(true);
+    for (const l of header) expect(l.length).toBeLessThanOrEqual(132);
+    expect(parseIes(text).keywords._SMOOTHING.startsWith('Zone mean over >= 0.05 sr;')).toBe(true);
+  });
+});

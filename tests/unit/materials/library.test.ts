@@ -3,20 +3,20 @@ import { findMaterial, indexAt, listMaterials, MATERIAL_CATEGORIES, materialSche
 
 // Ids other parts of Outcouple depend on, with the category each must carry.
 const REQUIRED: Record<string, string> = {
-  gan: 'semiconductor', gaas: 'semiconductor', gap: 'semiconductor', algainp: 'semiconductor',
-  ingan: 'semiconductor', 'sic-4h': 'substrate', 'sapphire-o': 'substrate', 'sapphire-e': 'substrate',
+  gan: 'semiconductor', gaas: 'semiconductor', gap: 'semiconductor', 'sic-4h': 'substrate', 'sapphire-o': 'substrate', 'sapphire-e': 'substrate',
   'silicone-methyl': 'encapsulant', 'silicone-phenyl': 'encapsulant', epoxy: 'encapsulant',
-  pmma: 'optic', polycarbonate: 'optic', 'borosilicate-crown': 'optic', 'fused-silica': 'optic',
+  pmma: 'optic', polycarbonate: 'optic', 'soda-lime-glass': 'optic', 'fused-silica': 'optic',
   sio2: 'layer', si3n4: 'layer', 'tio2-rutile': 'layer', ito: 'layer', zno: 'layer', mgf2: 'layer',
   ag: 'metal', al: 'metal', au: 'metal', air: 'ambient'
 };
-const SHIPPED_TAGS = ['published', 'computed from published formula', 'common practice', 'from memory'];
+// No shipped value is recalled: every optical constant comes from a published data set or formula
+const SHIPPED_TAGS = ['published', 'computed from published formula', 'common practice'];
 
 describe('listMaterials()', () => {
   const all = listMaterials();
 
-  it('holds at least 24 materials, every required id with its category', () => {
-    expect(all.length).toBeGreaterThanOrEqual(24);
+  it('holds at least 23 materials, every required id with its category', () => {
+    expect(all.length).toBeGreaterThanOrEqual(23);
     for (const [id, category] of Object.entries(REQUIRED)) {
       expect(all.find((m) => m.id === id)?.category, id).toBe(category);
     }
@@ -34,7 +34,7 @@ describe('listMaterials()', () => {
     }
   });
 
-  it('every entry passes the schema again, names a source and carries a shipped provenance tag', () => {
+  it('every entry passes the schema again, names a source and carries a shipped provenance tag (never `from memory`)', () => {
     for (const m of all) {
       expect(materialSchema.safeParse(m).success, m.id).toBe(true);
       expect(m.source.length, m.id).toBeGreaterThan(20);
@@ -95,7 +95,11 @@ describe('findMaterial(idOrNameOrAlias)', () => {
     expect(findMaterial('GaN')?.id).toBe('gan');
     expect(findMaterial('  GALLIUM NITRIDE ')?.id).toBe('gan');
     expect(findMaterial('Sapphire (ordinary ray)')?.id).toBe('sapphire-o');
-    expect(findMaterial('crown glass')?.id).toBe('borosilicate-crown');
+    expect(findMaterial('crown glass')?.id).toBe('soda-lime-glass');
+    // Retired ids stay aliases of the entries that replaced them (saved scenarios and typed names)
+    expect(findMaterial('borosilicate-crown')?.id).toBe('soda-lime-glass');
+    expect(findMaterial('ingan')?.id).toBe('gan');
+    expect(findMaterial('AlGaInP')?.id).toBe('gap');
     expect(findMaterial('PC')?.id).toBe('polycarbonate');
   });
 

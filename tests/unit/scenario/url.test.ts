@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { DEMO_SCENARIO, demoScenario } from '../../../src/lib/scenario/defaults';
-import { parseScenario, type Scenario } from '../../../src/lib/scenario/schema';
+import { parseScenario, SCENARIO_VERSION, type Scenario } from '../../../src/lib/scenario/schema';
 import {
   decodeScenarioParam,
   decodeScenarioQuery,
@@ -125,5 +125,19 @@ describe('scenario in the URL', () => {
     const q = `?into=n%3A1.5&${scenarioQuery(DEMO_SCENARIO)}&from=chip`;
     expect(decodeScenarioQuery(q).fromLink).toBe(true);
     expect(decodeScenarioQuery(new URLSearchParams(q)).scenario).toEqual(DEMO_SCENARIO);
+  });
+});
+
+describe('retired library ids in saved scenarios', () => {
+  it('a link naming a retired id (borosilicate-crown, ingan, algainp) opens with the entry that replaced it', () => {
+    const old = {
+      ...DEMO_SCENARIO,
+      chip: { ...DEMO_SCENARIO.chip, medium: { kind: 'material', id: 'ingan' } },
+      encapsulant: { ...DEMO_SCENARIO.encapsulant, medium: { kind: 'material', id: 'borosilicate-crown' } }
+    };
+    const d = decodeScenarioParam(`${SCENARIO_VERSION}.${b64url(JSON.stringify(old))}`);
+    expect(d.message).toBeNull();
+    expect(d.scenario.chip.medium).toEqual({ kind: 'material', id: 'gan' });
+    expect(d.scenario.encapsulant.medium).toEqual({ kind: 'material', id: 'soda-lime-glass' });
   });
 });
