@@ -4,8 +4,8 @@ import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join } from 'node:path';
 
 const pureRoots = ['src/lib/optics', 'src/lib/trace', 'src/lib/materials', 'src/lib/scenario', 'src/lib/photometry',
-  'src/lib/decisions', 'src/lib/export'];
-const browserShims = new Set(['trace-worker.ts', 'trace-pool.ts']); // worker glue may use Worker/self/navigator
+  'src/lib/decisions', 'src/lib/export', 'src/lib/runs'];
+const browserShims = new Set(['trace-worker.ts', 'trace-pool.ts', 'browser-tracer.ts']); // worker glue may use Worker/self/navigator
 const banned = [
   [/from\s+['"]svelte(\/[^'"]*)?['"]/, 'imports svelte'],
   [/from\s+['"]\$app\//, 'imports $app'],
