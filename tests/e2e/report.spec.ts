@@ -19,7 +19,7 @@ test('lists the scenario, closed-form results, assumptions and cautions', async 
   await expect(page.getByTestId('report-scenario')).toContainText('1 × 1 × 0.15 mm');
   // critical angle GaN (n 2.487 at 450 nm) → air: asin(1/2.487) = 23.71° (computed)
   await expect(page.getByTestId('report-closed')).toContainText('23.71°');
-  await expect(page.getByTestId('report-closed')).toContainText('Closed-form dome gain');
+  await expect(page.getByTestId('report-closed')).toContainText('Dome gain, ideal one-face reference');
   // top three by the closed form, plus the current choice when it is not among them
   await expect(page.getByTestId('report-ranking').getByRole('row')).toHaveCount(4);
   await expect(page.getByTestId('report-ranking')).toContainText('Methyl silicone (n ≈ 1.41) (current)');

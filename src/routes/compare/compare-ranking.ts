@@ -21,12 +21,17 @@ function source(spec: MediumSpec, n: number): IndexSource {
   return m ? { material: m } : { n };
 }
 
-/** Ranks every candidate encapsulant for the scenario's chip, dome radius and outside medium. */
+/**
+ * Ranks the candidate encapsulants for the scenario's chip, dome radius and outside medium by the ideal
+ * one-face reference (the traced ranking starts from these rows). Optic materials (lens plastics,
+ * glasses) are candidates only when `optics` is set.
+ */
 export function compareRanking(
   scenario: Scenario,
   resolved: ResolvedScenario,
   userMaterials: readonly Material[],
-  order: RankOrder
+  order: RankOrder,
+  optics = false
 ): EncapsulantRanking {
   const spectrum = emissionSpectrum(scenario.emission);
   const hasEncapsulant = scenario.encapsulant.shape !== 'none';
@@ -37,7 +42,7 @@ export function compareRanking(
     chipLengthMm: scenario.chip.lengthMm,
     radiusMm: scenario.encapsulant.radiusMm,
     wavelengthNm: resolved.wavelengthNm,
-    candidates: encapsulantCandidates(listMaterials(), userMaterials),
+    candidates: encapsulantCandidates(listMaterials(), userMaterials, { optics }),
     current: hasEncapsulant
       ? { label: resolved.encapsulant.label, n: resolved.encapsulant.n, materialId: resolved.encapsulant.materialId }
       : { label: 'no encapsulant', n: resolved.outside.n, materialId: null },
