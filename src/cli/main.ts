@@ -5,10 +5,11 @@ import * as dome from './commands/dome';
 import * as material from './commands/material';
 import * as trace from './commands/trace';
 import * as claim from './commands/claim';
+import * as compare from './commands/compare';
 
 type Command = { summary: string; help: string; run: (argv: string[]) => Promise<void> | void };
 
-const commands: Record<string, Command> = { escape, stack, dome, material, trace, claim };
+const commands: Record<string, Command> = { escape, stack, dome, material, trace, claim, compare };
 
 function usage(): string {
   const lines = ['outcouple — LED package light extraction from the command line', '', 'Commands:'];

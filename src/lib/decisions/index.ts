@@ -37,3 +37,4 @@ export {
   TRACE_SEPARATION_K,
   type TracedRow
 } from './rank-traced';
+export { scenarioRanking, emissionSpectrum } from './scenario-ranking';

@@ -1,15 +1,15 @@
 /**
  * The scenario turned into a ranking input: chip and outside media (library or user material, or typed index),
  * the current encapsulant, the emission spectrum for weighted figures, and the candidates (library plus
- * the user's own materials). Pure apart from its $lib imports.
+ * the user's own materials). The one RankInput builder of the pages and the command line. Pure.
  */
-import { encapsulantCandidates, rankEncapsulants, type EncapsulantRanking, type IndexSource, type RankOrder } from '$lib/decisions';
-import { listMaterials } from '$lib/materials';
-import type { Material } from '$lib/materials/types';
-import type { Spectrum } from '$lib/photometry';
-import { scenarioSpectrum } from '$lib/photometry/scenario-spectrum';
-import { mediumMaterial, type ResolvedScenario } from '$lib/scenario/resolve';
-import type { EmissionSpec, MediumSpec, Scenario } from '$lib/scenario/schema';
+import { listMaterials } from '../materials/library';
+import type { Material } from '../materials/types';
+import type { Spectrum } from '../photometry/index';
+import { scenarioSpectrum } from '../photometry/scenario-spectrum';
+import { mediumMaterial, type ResolvedScenario } from '../scenario/resolve';
+import type { EmissionSpec, MediumSpec, Scenario } from '../scenario/schema';
+import { encapsulantCandidates, rankEncapsulants, type EncapsulantRanking, type IndexSource, type RankOrder } from './rank-encapsulants';
 
 /** The emission as a sampled spectrum, or null for a single wavelength (nothing to weight). */
 export function emissionSpectrum(emission: EmissionSpec): Spectrum | null {
@@ -26,7 +26,7 @@ function source(spec: MediumSpec, n: number): IndexSource {
  * one-face reference (the traced ranking starts from these rows). Optic materials (lens plastics,
  * glasses) are candidates only when `optics` is set.
  */
-export function compareRanking(
+export function scenarioRanking(
   scenario: Scenario,
   resolved: ResolvedScenario,
   userMaterials: readonly Material[],
