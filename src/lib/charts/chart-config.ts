@@ -61,7 +61,8 @@ function xyDataset(spec: ChartSpec, s: SeriesSpec, palette: ChartPalette): Chart
     borderWidth: guide ? 1 : 2,
     borderDash: s.dashed ? [6, 4] : [],
     pointRadius: markers ? (s.marker && s.marker !== 'circle' ? 5 : 3.5) : 0,
-    pointStyle: s.marker ?? 'circle',
+    // With marker shapes in the legend, a plain line is drawn there as a line
+    pointStyle: s.marker ?? (!markers && spec.series.some((x) => x.marker) ? 'line' : 'circle'),
     pointHoverRadius: markers ? 5 : guide ? 0 : 3,
     pointHitRadius: guide ? 0 : 6,
     tension: 0,
@@ -97,8 +98,12 @@ export function chartConfig(spec: ChartSpec, palette: ChartPalette): ChartConfig
       color: palette.ink,
       boxWidth: 24,
       boxHeight: 2,
+      usePointStyle: spec.series.some((s) => s.marker !== undefined),
       font: { size: 12, family: palette.fontFamily },
-      filter: (item: { datasetIndex?: number }) => spec.series[item.datasetIndex ?? -1]?.role !== 'guide'
+      filter: (item: { datasetIndex?: number }) => {
+        const s = spec.series[item.datasetIndex ?? -1];
+        return s?.role !== 'guide' && s?.inLegend !== false;
+      }
     }
   };
   const tooltip = { enabled: true, filter: (item: { datasetIndex: number }) => spec.series[item.datasetIndex]?.role !== 'guide' };

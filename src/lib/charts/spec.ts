@@ -32,6 +32,8 @@ export interface SeriesSpec {
   dashed?: boolean;
   /** Shape of the markers (default circle): with the colour, tells candidates apart in print and for colour-blind readers. */
   marker?: MarkerShape;
+  /** false keeps a 'data' series out of the legend (it stays in the CSV), e.g. a second point of a candidate already named. */
+  inLegend?: boolean;
 }
 
 export type MarkerShape = 'circle' | 'triangle' | 'rect' | 'rectRot' | 'star' | 'crossRot' | 'rectRounded';

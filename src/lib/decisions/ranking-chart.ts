@@ -56,12 +56,13 @@ export function rankingChart(ranking: EncapsulantRanking, traced: readonly Trace
     const color = 1 + (i % CANDIDATE_COLORS);
     const marker = MARKER_SHAPES[i % MARKER_SHAPES.length];
     const name = `${r.name}${r.isCurrent ? ' (current)' : ''}`;
-    series.push({ label: `${name}, ideal reference`, points: [{ x: r.nEnc, y: r.etaDome * 100 }], color, marker, line: false, markers: true });
     const t = tracedById.get(r.id);
+    // Once traced, the legend names the candidate once (its traced point); its reference point sits on the curve
+    series.push({ label: `${name}, ideal reference`, points: [{ x: r.nEnc, y: r.etaDome * 100 }], color, marker, line: false, markers: true, inLegend: !t });
     if (t) {
       const y = t.summary.extraction * 100;
       const e = BAR_K * t.summary.stderr * 100;
-      series.push({ label: `${name}, traced package`, points: [{ x: r.nEnc, y, yMin: y - e, yMax: y + e }], color, marker, line: false, markers: true });
+      series.push({ label: `${name}, traced (±${BAR_K}σ)`, points: [{ x: r.nEnc, y, yMin: y - e, yMax: y + e }], color, marker, line: false, markers: true });
     }
   });
   series.push({
