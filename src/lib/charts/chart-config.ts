@@ -91,14 +91,16 @@ export function equalUnitsAspectRatio(canvasW: number, canvasH: number, plotW: n
  * after layout with equalUnitsAspectRatio).
  */
 export function chartConfig(spec: ChartSpec, palette: ChartPalette): ChartConfiguration {
+  // Marker shapes tell series apart: show them in the legend, at a readable size
+  const pointLegend = spec.series.some((s) => s.marker !== undefined);
   const legend = {
     display: true,
     position: 'bottom' as const,
     labels: {
       color: palette.ink,
-      boxWidth: 24,
-      boxHeight: 2,
-      usePointStyle: spec.series.some((s) => s.marker !== undefined),
+      boxWidth: pointLegend ? 10 : 24,
+      boxHeight: pointLegend ? 10 : 2,
+      usePointStyle: pointLegend,
       font: { size: 12, family: palette.fontFamily },
       filter: (item: { datasetIndex?: number }) => {
         const s = spec.series[item.datasetIndex ?? -1];

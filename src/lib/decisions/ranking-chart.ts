@@ -91,7 +91,7 @@ export function rankingChart(ranking: EncapsulantRanking, traced: readonly Trace
       (traced.length > 0 ? `, and ${traced.length} traced package extractions with ±${BAR_K} standard-error bars` : '') +
       (best ? `; the highest traced is ${best.row.name} at ${fmt(best.summary.extraction * 100, 3)} percent.` : '.'),
     x: { title: 'Encapsulant index n', min: range.min, max: range.max },
-    y: { title: 'Extraction into the outside (%)', min: 0, max: top },
+    y: { title: 'Extraction (%)', min: 0, max: top },
     series,
     csv: { headers: ['series', 'encapsulant index n', 'extraction (%)', 'standard error (%)'], rows }
   };
