@@ -1,6 +1,7 @@
 /**
- * The dome page in a real browser: closed form, the worker trace with progress and cancel, the charts,
- * the sweeps and the export. Drives the page by role and label.
+ * The dome page in a real browser: the package trace that runs by itself on open and after every change
+ * (progress, cancel, kept across reloads), the ideal one-face reference beside it, the charts, the sweeps
+ * and the export. Drives the page by role and label.
  */
 import { expect, test, type Locator, type Page } from '@playwright/test';
 
@@ -51,23 +52,21 @@ test.describe('dome page', () => {
     await expect(page.getByTestId('closed-tir-mark')).toHaveText(/large enough/);
   });
 
-  test('runs a trace in the workers with progress, then shows extraction ± error, findings and charts', async ({ page }) => {
+  test('shows a traced package extraction within seconds of opening, with no click, and the reference beside it', async ({ page }) => {
     await openDome(page);
-    await setRays(page, 2_000_000);
-    await page.getByRole('button', { name: 'Run trace' }).click();
-    const bar = page.getByRole('progressbar', { name: 'Trace progress' });
-    await expect(bar).toBeVisible();
-    await expect.poll(async () => Number(await bar.getAttribute('aria-valuenow')), { timeout: 30_000 }).toBeGreaterThan(0);
-    await expect(page.getByTestId('trace-extraction')).toHaveText(/^\d+\.\d+ % ± \d+(\.\d+)? %$/, { timeout: 90_000 });
-    await expect(bar).toBeHidden();
-    await expect(page.getByTestId('trace-rays')).toContainText('2,000,000');
+    // No button is pressed: the trace starts by itself.
+    await expect(page.getByTestId('trace-extraction')).toHaveText(/^\d+\.\d+ % ± \d+(\.\d+)? %$/, { timeout: 15_000 });
+    await expect(page.getByTestId('trace-rays')).toContainText('200,000');
+    await expect(page.getByTestId('trace-bare')).toHaveText(/^\d+\.\d+ % ± /);
     await expect(page.getByTestId('trace-gain')).toHaveText(/\d ± \d/);
     await expect(page.getByTestId('trace-speed')).toContainText('rays/s');
+    await expect(page.getByRole('heading', { name: 'Ideal one-face reference', level: 2, exact: true })).toBeVisible();
+    // The traced package extracts several times the one-face reference (side faces, light returned by the base).
+    expect(await numberIn(page.getByTestId('trace-extraction'))).toBeGreaterThan(2 * (await numberIn(page.getByTestId('closed-eta-dome'))));
 
     // A finite chip whose sides emit beats the one-face point-source closed form by far: the page says why.
     await expect(page.getByTestId('gap-headline')).toContainText('higher than the closed form');
     await expect(page.locator('[data-reason="finite-chip"]')).toBeVisible();
-
     for (const name of ['Fate of every launched ray', 'Far field: intensity against polar angle', 'Far field: polar plot']) {
       const canvas = page.locator('figure', { hasText: name }).locator('canvas');
       await expect(canvas).toBeVisible();
@@ -77,36 +76,48 @@ test.describe('dome page', () => {
     await expect(page.locator('main')).not.toContainText('NaN');
   });
 
-  test('cancels a run, keeps the page usable, and the next run completes', async ({ page }) => {
+  test('keeps the trace across a reload, and a new ray count is a new trace of the same scenario', async ({ page }) => {
     await openDome(page);
-    await setRays(page, 5_000_000);
-    await page.getByRole('button', { name: 'Run trace' }).click();
+    const extraction = page.getByTestId('trace-extraction');
+    await expect(extraction).toContainText('±', { timeout: 15_000 });
+    const first = await extraction.textContent();
+    await page.reload();
+    await expect(extraction).toHaveText(first!, { timeout: 10_000 });
+    await expect(page.getByTestId('trace-speed')).toContainText('kept from an earlier run');
+
+    await setRays(page, 100_000);
+    await expect(page.getByTestId('trace-rays')).toContainText('100,000', { timeout: 30_000 });
+    await expect(page.getByText('The scenario has changed since this trace')).toBeHidden();
+    await expect(extraction).toContainText('±');
+  });
+
+  test('cancels a run, keeps the page usable, and Run again completes', async ({ page }) => {
+    await openDome(page);
+    await setRays(page, 4_000_000);
     const bar = page.getByRole('progressbar', { name: 'Trace progress' });
-    await expect(bar).toBeVisible();
+    await expect(bar).toBeVisible({ timeout: 15_000 });
     await page.getByRole('button', { name: 'Cancel', exact: true }).click();
     await expect(page.getByRole('status').filter({ hasText: 'Trace cancelled' })).toBeVisible();
     await expect(bar).toBeHidden();
-    await expect(page.getByTestId('trace-extraction')).toHaveText('—');
 
-    await page.getByLabel('Re-run when the scenario changes').uncheck();
     await setRays(page, 100_000);
-    await page.getByRole('button', { name: 'Run trace' }).click();
-    await expect(page.getByTestId('trace-extraction')).toContainText('±', { timeout: 60_000 });
-    await expect(page.getByTestId('trace-rays')).toContainText('100,000');
+    await expect(page.getByTestId('trace-rays')).toContainText('100,000', { timeout: 30_000 });
+    await page.getByRole('button', { name: 'Run again' }).click();
+    await expect(page.getByTestId('trace-extraction')).toContainText('±', { timeout: 30_000 });
+    await expect(bar).toBeHidden({ timeout: 30_000 });
   });
 
-  test('after a first run, a changed scenario re-runs the trace by itself (modest ray count)', async ({ page }) => {
+  test('a changed scenario re-runs the trace by itself', async ({ page }) => {
     await openDome(page);
     await setRays(page, 100_000);
-    await page.getByRole('button', { name: 'Run trace' }).click();
     const extraction = page.getByTestId('trace-extraction');
-    await expect(extraction).toContainText('±', { timeout: 60_000 });
+    await expect(page.getByTestId('trace-rays')).toContainText('100,000', { timeout: 30_000 });
     const first = await extraction.textContent();
     // The alternative silicone of the demo: a higher index, so a different (higher) extraction.
     await page.getByLabel('Encapsulant material').selectOption({ label: 'Phenyl silicone (n ≈ 1.53)' });
     await expect(extraction).not.toHaveText(first!, { timeout: 60_000 });
     await expect(extraction).toContainText('±');
-    await expect(page.getByText('The scenario has changed since this trace')).toBeHidden();
+    await expect(page.getByText('The scenario has changed since this trace')).toBeHidden({ timeout: 30_000 });
   });
 
   test('changing the encapsulant index updates the closed form at once', async ({ page }) => {
@@ -136,10 +147,9 @@ test.describe('dome page', () => {
     await expect(page.locator('main')).not.toContainText('NaN');
   });
 
-  test('asks before a very large run, with an estimated time', async ({ page }) => {
+  test('asks before a very large run, with an estimated time, instead of starting it', async ({ page }) => {
     await openDome(page);
     await setRays(page, 10_000_000);
-    await page.getByRole('button', { name: 'Run trace' }).click();
     const ask = page.getByRole('alertdialog');
     await expect(ask).toContainText('10,000,000 rays is a large run');
     await expect(ask).toContainText(/about \d/);
@@ -164,8 +174,9 @@ test.describe('dome page', () => {
     await expect(shape.getByRole('status')).toContainText('Cancelled after');
   });
 
-  test('exports the results with the scenario as JSON', async ({ page }) => {
+  test('exports the trace and the reference with the scenario as JSON', async ({ page }) => {
     await openDome(page);
+    await expect(page.getByTestId('trace-extraction')).toContainText('±', { timeout: 15_000 });
     const [download] = await Promise.all([
       page.waitForEvent('download'),
       page.getByRole('button', { name: 'Export results (JSON)' }).click()
@@ -176,6 +187,8 @@ test.describe('dome page', () => {
     expect(doc.view).toBe('dome');
     expect(doc.scenario.encapsulant.shape).toBe('dome');
     expect(doc.closedForm.etaDome).toBeGreaterThan(0);
-    expect(doc.trace).toBeNull();
+    expect(doc.trace.stale).toBe(false);
+    expect(doc.trace.package.rays).toBe(200_000);
+    expect(doc.trace.package.extraction).toBeGreaterThan(doc.closedForm.etaDome);
   });
 });

@@ -62,9 +62,9 @@ async function openWithParam(page: Page, path: string, param: string): Promise<v
   await page.goto(`${path}?s=${param}`);
 }
 
+/** Sets the ray count; the page starts the trace by itself. */
 async function runTrace(page: Page, rays: number): Promise<void> {
   await page.getByRole('textbox', { name: 'Rays', exact: true }).fill(String(rays));
-  await page.getByRole('button', { name: 'Run trace' }).click();
 }
 
 test.describe('Content-Security-Policy', () => {
@@ -182,7 +182,6 @@ test.describe('trace workers that die', () => {
       } as typeof Worker;
     });
     await open(page, '/dome');
-    await page.getByLabel('Re-run when the scenario changes').uncheck();
     await runTrace(page, 5_000_000);
     const bar = page.getByRole('progressbar', { name: 'Trace progress' });
     await expect.poll(async () => Number(await bar.getAttribute('aria-valuenow')), { timeout: 30_000 }).toBeGreaterThan(0);
@@ -193,9 +192,10 @@ test.describe('trace workers that die', () => {
     });
     expect(killed).toBeGreaterThan(0);
 
-    // The page still answers: the closed form updates, and the stalled run can be cancelled.
+    // The page still answers: the scenario edits (which restarts the trace on fresh workers), and the run can be cancelled.
     await panel(page).getByLabel('Wavelength').fill('455');
     await expect(panel(page)).toContainText('455 nm');
+    await expect(bar).toBeVisible();
     await page.getByRole('button', { name: 'Cancel', exact: true }).click();
     await expect(page.getByRole('status').filter({ hasText: 'Trace cancelled' })).toBeVisible();
     await expect(bar).toBeHidden();
@@ -207,15 +207,13 @@ test.describe('trace workers that die', () => {
   });
 
   test('a worker script that cannot load: a clear error, and the next run completes', async ({ page }) => {
-    await open(page, '/dome');
-    await page.getByLabel('Re-run when the scenario changes').uncheck();
     await page.route('**/workers/trace-worker*', (route) => route.abort('failed'));
-    await runTrace(page, 100_000);
+    await open(page, '/dome'); // the trace starts by itself, and fails
     await expect(page.getByRole('alert').filter({ hasText: 'The trace failed' })).toBeVisible({ timeout: 30_000 });
-    await expect(page.getByRole('button', { name: 'Run trace' })).toBeEnabled();
+    await expect(page.getByRole('button', { name: 'Run again' })).toBeEnabled();
 
     await page.unroute('**/workers/trace-worker*');
-    await runTrace(page, 100_000);
+    await page.getByRole('button', { name: 'Run again' }).click();
     await expect(page.getByTestId('trace-extraction')).toContainText('±', { timeout: 60_000 });
     await expect(page.getByRole('alert').filter({ hasText: 'The trace failed' })).toBeHidden();
   });

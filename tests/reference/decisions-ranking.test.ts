@@ -26,7 +26,7 @@ function ganRanking(nChip?: number) {
     chipLengthMm: 1,
     radiusMm: 2.5,
     wavelengthNm: 450,
-    candidates: encapsulantCandidates(listMaterials()),
+    candidates: encapsulantCandidates(listMaterials(), [], { optics: true }),
     current: { label: 'typed', n: 1.41, materialId: null }
   });
 }

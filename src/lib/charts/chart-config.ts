@@ -60,7 +60,9 @@ function xyDataset(spec: ChartSpec, s: SeriesSpec, palette: ChartPalette): Chart
     showLine: line,
     borderWidth: guide ? 1 : 2,
     borderDash: s.dashed ? [6, 4] : [],
-    pointRadius: markers ? 3.5 : 0,
+    pointRadius: markers ? (s.marker && s.marker !== 'circle' ? 5 : 3.5) : 0,
+    // With marker shapes in the legend, a plain line is drawn there as a line
+    pointStyle: s.marker ?? (!markers && spec.series.some((x) => x.marker) ? 'line' : 'circle'),
     pointHoverRadius: markers ? 5 : guide ? 0 : 3,
     pointHitRadius: guide ? 0 : 6,
     tension: 0,
@@ -89,15 +91,21 @@ export function equalUnitsAspectRatio(canvasW: number, canvasH: number, plotW: n
  * after layout with equalUnitsAspectRatio).
  */
 export function chartConfig(spec: ChartSpec, palette: ChartPalette): ChartConfiguration {
+  // Marker shapes tell series apart: show them in the legend, at a readable size
+  const pointLegend = spec.series.some((s) => s.marker !== undefined);
   const legend = {
     display: true,
     position: 'bottom' as const,
     labels: {
       color: palette.ink,
-      boxWidth: 24,
-      boxHeight: 2,
+      boxWidth: pointLegend ? 10 : 24,
+      boxHeight: pointLegend ? 10 : 2,
+      usePointStyle: pointLegend,
       font: { size: 12, family: palette.fontFamily },
-      filter: (item: { datasetIndex?: number }) => spec.series[item.datasetIndex ?? -1]?.role !== 'guide'
+      filter: (item: { datasetIndex?: number }) => {
+        const s = spec.series[item.datasetIndex ?? -1];
+        return s?.role !== 'guide' && s?.inLegend !== false;
+      }
     }
   };
   const tooltip = { enabled: true, filter: (item: { datasetIndex: number }) => spec.series[item.datasetIndex]?.role !== 'guide' };

@@ -30,7 +30,16 @@ export interface SeriesSpec {
   /** Draw a marker at each point (default: false for lines, true for scatter). */
   markers?: boolean;
   dashed?: boolean;
+  /** Shape of the markers (default circle): with the colour, tells candidates apart in print and for colour-blind readers. */
+  marker?: MarkerShape;
+  /** false keeps a 'data' series out of the legend (it stays in the CSV), e.g. a second point of a candidate already named. */
+  inLegend?: boolean;
 }
+
+export type MarkerShape = 'circle' | 'triangle' | 'rect' | 'rectRot' | 'star' | 'crossRot' | 'rectRounded';
+
+/** Marker shapes in the order charts hand them out. */
+export const MARKER_SHAPES: readonly MarkerShape[] = ['circle', 'triangle', 'rect', 'rectRot', 'star', 'crossRot', 'rectRounded'];
 
 export interface AxisSpec {
   /** Axis title with its unit: "Angle of incidence θ (°)". */

@@ -29,3 +29,12 @@ export {
 export { extractionCurve, type ExtractionCurve } from './extraction-curve';
 export { rankingChart } from './ranking-chart';
 export { traceAgreement, type TracedCandidate, type PairAgreement } from './trace-agreement';
+export {
+  traceRanking,
+  rankByTrace,
+  candidateSeed,
+  candidatePackage,
+  TRACE_SEPARATION_K,
+  type TracedRow
+} from './rank-traced';
+export { scenarioRanking, emissionSpectrum } from './scenario-ranking';

@@ -209,9 +209,17 @@ export function rankEncapsulants(input: RankInput): EncapsulantRanking {
   };
 }
 
-/** The candidates of a ranking: library encapsulants and optics, then the user's materials of any category but metal. */
-export function encapsulantCandidates(library: readonly Material[], userMaterials: readonly Material[] = []): Candidate[] {
-  const fit = (m: Material) => m.category === 'encapsulant' || m.category === 'optic';
+/**
+ * The candidates of a ranking: the library's encapsulants (potting materials: silicones, epoxy), the
+ * library's optic materials (lens plastics and glasses, which nobody pots a chip in) only when asked
+ * for, then the user's own materials of any category but metal.
+ */
+export function encapsulantCandidates(
+  library: readonly Material[],
+  userMaterials: readonly Material[] = [],
+  options: { optics?: boolean } = {}
+): Candidate[] {
+  const fit = (m: Material) => m.category === 'encapsulant' || (options.optics === true && m.category === 'optic');
   return [
     ...library.filter(fit).map((material) => ({ material, source: 'library' as const })),
     ...userMaterials.filter((m) => m.category !== 'metal').map((material) => ({ material, source: 'user' as const }))

@@ -16,6 +16,8 @@ export interface TraceJob {
   result: Promise<Tally>;
   /** Stops every worker now. */
   cancel(): void;
+  /** Workers this job runs on (the pool's rule: cores, at most 8, at most one per chunk). */
+  workers: number;
 }
 
 const MAX_WORKERS = 8;
@@ -102,6 +104,7 @@ export function startTrace(
   }
   return {
     result,
+    workers: count,
     cancel: () => stop(Object.assign(new Error('trace cancelled'), { name: 'AbortError' }))
   };
 }

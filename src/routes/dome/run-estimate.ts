@@ -1,18 +1,10 @@
-/** How long a trace is likely to take, for the warning before a very large run. Pure. */
+/** How long a trace is likely to take, for the question before a very large run. Pure. */
+import { bareRays } from '$lib/runs';
 
-/** Runs above this many rays ask first. */
+/** Runs above this many rays ask first instead of starting by themselves. */
 export const LARGE_RUN_RAYS = 5_000_000;
-/** Runs up to this many rays re-run by themselves when the scenario changes. */
-export const AUTO_RERUN_MAX_RAYS = 500_000;
 /** Assumed speed before any run has been timed in this tab: rays per second over all workers. */
 export const ASSUMED_RAYS_PER_SECOND = 600_000;
-/** The bare-chip comparison trace uses at most this many rays. */
-export const BARE_MAX_RAYS = 2_000_000;
-
-/** Rays of the bare-chip trace that goes with a run of `rays`. */
-export function bareRays(rays: number): number {
-  return Math.min(rays, BARE_MAX_RAYS);
-}
 
 /**
  * Estimated seconds for a run: (rays + bare-chip rays) / speed.

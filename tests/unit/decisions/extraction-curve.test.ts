@@ -1,5 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import { extractionCurve } from '../../../src/lib/decisions/extraction-curve';
+import type { TraceSummary } from '../../../src/lib/trace/summary';
 import { rankingChart } from '../../../src/lib/decisions/ranking-chart';
 import { rankEncapsulants, encapsulantCandidates } from '../../../src/lib/decisions/rank-encapsulants';
 import { escapeCone } from '../../../src/lib/optics/index';
@@ -27,7 +28,7 @@ describe('extractionCurve(nChip, nOut, points)', () => {
   });
 });
 
-describe('rankingChart(ranking)', () => {
+describe('rankingChart(ranking, traced)', () => {
   const ranking = rankEncapsulants({
     chip: { material: findMaterial('gan')! },
     outside: { n: 1 },
@@ -35,27 +36,54 @@ describe('rankingChart(ranking)', () => {
     chipLengthMm: 1,
     radiusMm: 2.5,
     wavelengthNm: 450,
-    candidates: encapsulantCandidates(listMaterials()),
+    candidates: encapsulantCandidates(listMaterials(), [], { optics: true }),
     current: { label: 'Methyl silicone', n: 1.41, materialId: 'silicone-methyl' }
   });
   const spec = rankingChart(ranking);
 
-  it('has the curve, one marker series per candidate placed on the curve, and the current index marked', () => {
-    expect(spec.series[0].points.length).toBe(61);
+  it('places each candidate on the reference curve with its own colour-and-marker pair, and marks the current index', () => {
     const markers = spec.series.filter((s) => s.line === false);
     expect(markers.length).toBe(ranking.rows.length);
     for (const m of markers) {
       const row = ranking.rows.find((r) => m.label.startsWith(r.name))!;
       expect(m.points[0]).toEqual({ x: row.nEnc, y: row.etaDome * 100 });
     }
+    const pairs = new Set(markers.map((m) => `${m.color}/${m.marker}`));
+    expect(pairs.size).toBe(markers.length);
+    expect(new Set(markers.map((m) => m.marker)).size).toBe(Math.min(markers.length, 7));
     expect(spec.series.at(-1)!.role).toBe('marker');
     expect(spec.series.some((s) => s.label.includes('(current)'))).toBe(true);
   });
 
-  it('names the best candidate in its text alternative and exports curve and markers as CSV', () => {
-    expect(spec.ariaLabel).toContain(ranking.rows[0].name);
+  it("zooms the index axis to the candidates' range (with a margin), not 1 to the chip index", () => {
+    const ns = ranking.rows.map((r) => r.nEnc);
+    expect(spec.x.min!).toBeLessThanOrEqual(Math.min(...ns));
+    expect(spec.x.max!).toBeGreaterThanOrEqual(Math.max(...ns));
+    expect(spec.x.min!).toBeGreaterThan(1.2);
+    expect(spec.x.max!).toBeLessThan(1.8);
+    for (const p of spec.series[0].points) {
+      expect(p.x).toBeGreaterThanOrEqual(spec.x.min! - 1e-9);
+      expect(p.x).toBeLessThanOrEqual(spec.x.max! + 1e-9);
+    }
+    expect(spec.series[0].points.length).toBeGreaterThan(30);
+  });
+
+  it('adds a traced point with ±2σ bars in the candidate\'s colour and marker, and names the best traced', () => {
+    const row = ranking.rows[1];
+    const summary = { extraction: 0.4, stderr: 0.001 } as TraceSummary;
+    const traced = rankingChart(ranking, [{ rank: 1, row, seed: 1, summary, overCurrent: null, separableFromNext: null }]);
+    const pair = traced.series.filter((s) => s.label.startsWith(row.name));
+    expect(pair.length).toBe(2);
+    expect(pair[1].color).toBe(pair[0].color);
+    expect(pair[1].marker).toBe(pair[0].marker);
+    expect(pair[1].points[0]).toEqual({ x: row.nEnc, y: 40, yMin: 40 - 0.2, yMax: 40 + 0.2 });
+    expect(traced.ariaLabel).toContain(`the highest traced is ${row.name}`);
+    expect(traced.y.max!).toBeGreaterThanOrEqual(40.2);
+  });
+
+  it('exports curve, reference values and traced values as CSV', () => {
     const t = chartTable(spec);
-    expect(t.headers).toEqual(['series', 'encapsulant index n', 'extraction, one face (%)']);
-    expect(t.rows.length).toBe(61 + ranking.rows.length);
+    expect(t.headers).toEqual(['series', 'encapsulant index n', 'extraction (%)', 'standard error (%)']);
+    expect(t.rows.length).toBe(spec.series[0].points.length + ranking.rows.length);
   });
 });

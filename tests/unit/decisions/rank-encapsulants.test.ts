@@ -25,18 +25,24 @@ function input(over: Partial<RankInput> = {}): RankInput {
     chipLengthMm: 1,
     radiusMm: 2.5,
     wavelengthNm: 450,
-    candidates: encapsulantCandidates(listMaterials()),
+    candidates: encapsulantCandidates(listMaterials(), [], { optics: true }),
     current: { label: 'Methyl silicone', n: indexAt(findMaterial('silicone-methyl')!, 450).n, materialId: 'silicone-methyl' },
     ...over
   };
 }
 
 describe('encapsulantCandidates(library, user)', () => {
-  it('takes encapsulants and optics from the library and any non-metal user material', () => {
+  it('takes the library encapsulants (optics only on request) and any non-metal user material', () => {
     const c = encapsulantCandidates(listMaterials(), [userGlass, { ...userGlass, id: 'user-metal', category: 'metal' }]);
     const ids = c.map((x) => x.material.id);
     expect(ids).toContain('silicone-methyl');
-    expect(ids).toContain('pmma');
+    expect(ids).toContain('epoxy');
+    expect(ids).not.toContain('pmma');
+    expect(ids).not.toContain('polycarbonate');
+    const withOptics = encapsulantCandidates(listMaterials(), [], { optics: true }).map((x) => x.material.id);
+    expect(withOptics).toContain('pmma');
+    expect(withOptics).toContain('polycarbonate');
+    expect(withOptics).toContain('silicone-phenyl');
     expect(ids).not.toContain('gan');
     expect(ids).not.toContain('ag');
     expect(ids).toContain('user-high-index');

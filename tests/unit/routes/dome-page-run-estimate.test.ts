@@ -1,18 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import {
-  ASSUMED_RAYS_PER_SECOND,
-  BARE_MAX_RAYS,
-  bareRays,
-  estimateSeconds,
-  fmtDuration
-} from '../../../src/routes/dome/run-estimate';
+import { ASSUMED_RAYS_PER_SECOND, estimateSeconds, fmtDuration } from '../../../src/routes/dome/run-estimate';
 
 describe('run estimate (dome page)', () => {
-  it('traces the bare chip with as many rays as the package, up to 2 000 000', () => {
-    expect(bareRays(200_000)).toBe(200_000);
-    expect(bareRays(10_000_000)).toBe(BARE_MAX_RAYS);
-  });
-
   it('estimates (package + bare-chip rays) / speed, with the assumed speed before any timing', () => {
     expect(estimateSeconds(1_000_000, 500_000)).toBe(4);
     expect(estimateSeconds(10_000_000, 1_000_000)).toBe(12);

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { traceGain } from '../../../src/routes/dome/trace-gain';
+import { traceGain } from '../../../src/lib/runs/trace-gain';
 import { assertInDelta } from '../../support/assert';
 
-describe('traceGain(etaDome, sigmaDome, etaBare, sigmaBare) (dome page)', () => {
+describe('traceGain(etaDome, sigmaDome, etaBare, sigmaBare) ', () => {
   it('adds relative errors in quadrature: 1 % and 1 % give √2 % on the ratio (Taylor §3.8)', () => {
     const g = traceGain(0.4, 0.004, 0.2, 0.002)!;
     assertInDelta(g.gain, 2, 4 * Number.EPSILON);

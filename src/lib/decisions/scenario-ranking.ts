@@ -1,15 +1,15 @@
 /**
  * The scenario turned into a ranking input: chip and outside media (library or user material, or typed index),
  * the current encapsulant, the emission spectrum for weighted figures, and the candidates (library plus
- * the user's own materials). Pure apart from its $lib imports.
+ * the user's own materials). The one RankInput builder of the pages and the command line. Pure.
  */
-import { encapsulantCandidates, rankEncapsulants, type EncapsulantRanking, type IndexSource, type RankOrder } from '$lib/decisions';
-import { listMaterials } from '$lib/materials';
-import type { Material } from '$lib/materials/types';
-import type { Spectrum } from '$lib/photometry';
-import { scenarioSpectrum } from '$lib/photometry/scenario-spectrum';
-import { mediumMaterial, type ResolvedScenario } from '$lib/scenario/resolve';
-import type { EmissionSpec, MediumSpec, Scenario } from '$lib/scenario/schema';
+import { listMaterials } from '../materials/library';
+import type { Material } from '../materials/types';
+import type { Spectrum } from '../photometry/index';
+import { scenarioSpectrum } from '../photometry/scenario-spectrum';
+import { mediumMaterial, type ResolvedScenario } from '../scenario/resolve';
+import type { EmissionSpec, MediumSpec, Scenario } from '../scenario/schema';
+import { encapsulantCandidates, rankEncapsulants, type EncapsulantRanking, type IndexSource, type RankOrder } from './rank-encapsulants';
 
 /** The emission as a sampled spectrum, or null for a single wavelength (nothing to weight). */
 export function emissionSpectrum(emission: EmissionSpec): Spectrum | null {
@@ -21,12 +21,17 @@ function source(spec: MediumSpec, n: number): IndexSource {
   return m ? { material: m } : { n };
 }
 
-/** Ranks every candidate encapsulant for the scenario's chip, dome radius and outside medium. */
-export function compareRanking(
+/**
+ * Ranks the candidate encapsulants for the scenario's chip, dome radius and outside medium by the ideal
+ * one-face reference (the traced ranking starts from these rows). Optic materials (lens plastics,
+ * glasses) are candidates only when `optics` is set.
+ */
+export function scenarioRanking(
   scenario: Scenario,
   resolved: ResolvedScenario,
   userMaterials: readonly Material[],
-  order: RankOrder
+  order: RankOrder,
+  optics = false
 ): EncapsulantRanking {
   const spectrum = emissionSpectrum(scenario.emission);
   const hasEncapsulant = scenario.encapsulant.shape !== 'none';
@@ -37,7 +42,7 @@ export function compareRanking(
     chipLengthMm: scenario.chip.lengthMm,
     radiusMm: scenario.encapsulant.radiusMm,
     wavelengthNm: resolved.wavelengthNm,
-    candidates: encapsulantCandidates(listMaterials(), userMaterials),
+    candidates: encapsulantCandidates(listMaterials(), userMaterials, { optics }),
     current: hasEncapsulant
       ? { label: resolved.encapsulant.label, n: resolved.encapsulant.n, materialId: resolved.encapsulant.materialId }
       : { label: 'no encapsulant', n: resolved.outside.n, materialId: null },
