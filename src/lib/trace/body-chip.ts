@@ -4,7 +4,7 @@
  * each interface between two layers is one surface with a layer on either side; the bottom face is
  * the mirror the chip stands on.
  */
-import type { Behaviour, MirrorSpec, SceneMedium, SceneSurface } from './scene';
+import type { Behaviour, SceneMedium, SceneSurface } from './scene';
 
 export interface ChipLayerSpec {
   /** Medium name of the layer (unique in the scene). */
@@ -29,8 +29,8 @@ export interface ChipBuild {
   layers: ChipLayerSpec[];
   /** Medium around the chip. */
   around: string;
-  /** The chip's bottom: a mirror, and the ledger bin of what it absorbs. */
-  bottom: { name: string; mirror: MirrorSpec; absorbedBin: string };
+  /** The chip's bottom: a mirror (or diffuse reflector), and the ledger bin of what it absorbs. */
+  bottom: { name: string; behaviour: Behaviour; absorbedBin: string };
   /** Behaviour of the top face (Fresnel, or textured). */
   top: Behaviour;
 }
@@ -48,7 +48,7 @@ export function chipParts(c: ChipBuild): ChipParts {
     shape: { kind: 'rect', axis: 2, at: 0, normalSign: 1, uMin: -a, uMax: a, vMin: -b, vMax: b },
     front: c.layers[0].name,
     behind: null,
-    behaviour: { kind: 'mirror', mirror: c.bottom.mirror },
+    behaviour: c.bottom.behaviour,
     absorbedBin: c.bottom.absorbedBin
   });
   let z0 = 0;
