@@ -54,7 +54,7 @@ import {
   S_TIR_BEHIND,
   S_TIR_FRONT
 } from './scene-layout';
-import type { LegacyEscape, SceneDescription, SceneSurface } from './scene';
+import type { LegacyEscape, SceneDescription, SceneSurface, Shape } from './scene';
 
 /** Which count of the older fixed ledger (Tally fields) a bin also adds to. */
 export type LedgerGroup = 'escaped' | 'absorbedChip' | 'absorbedEncapsulant' | 'absorbedBase' | 'lost';
@@ -79,6 +79,37 @@ export interface CompiledScene {
   /** Medium and surface names by index, for messages and the drawing. */
   mediumNames: string[];
   surfaceNames: string[];
+}
+
+/**
+ * Writes a shape's kind and parameters into a surface record at offset o (layouts in scene-layout.ts).
+ * @returns out
+ */
+export function packShape(sh: Shape, out: Float64Array, o: number): Float64Array {
+  const p = o + S_P;
+  switch (sh.kind) {
+    case 'rect':
+      out[o + S_SHAPE] = SHAPE_RECT;
+      out.set([sh.axis, sh.at, sh.normalSign, sh.uMin, sh.uMax, sh.vMin, sh.vMax], p);
+      break;
+    case 'disc':
+      out[o + S_SHAPE] = SHAPE_DISC;
+      out.set([sh.at, sh.normalSign, sh.rInner * sh.rInner, sh.rOuter * sh.rOuter], p);
+      break;
+    case 'cylinder':
+      out[o + S_SHAPE] = SHAPE_CYLINDER;
+      out.set([sh.radius, sh.z0, sh.z1], p);
+      break;
+    case 'frustum':
+      out[o + S_SHAPE] = SHAPE_FRUSTUM;
+      out.set([sh.r0, sh.z0, sh.r1, sh.z1, (sh.r1 - sh.r0) / (sh.z1 - sh.z0)], p);
+      break;
+    case 'spheroid-cap':
+      out[o + S_SHAPE] = SHAPE_SPHEROID_CAP;
+      out.set([sh.radius, sh.height, sh.zCentre, 1 / (sh.radius * sh.radius), 1 / (sh.height * sh.height)], p);
+      break;
+  }
+  return out;
 }
 
 function absorbs(s: SceneSurface): boolean {
@@ -150,30 +181,7 @@ export function compileScene(scene: SceneDescription): CompiledScene {
   const lists: number[][] = scene.media.map(() => []);
   scene.surfaces.forEach((s, i) => {
     const o = i * SURFACE_STRIDE;
-    const p = o + S_P;
-    const sh = s.shape;
-    switch (sh.kind) {
-      case 'rect':
-        surfaces[o + S_SHAPE] = SHAPE_RECT;
-        surfaces.set([sh.axis, sh.at, sh.normalSign, sh.uMin, sh.uMax, sh.vMin, sh.vMax], p);
-        break;
-      case 'disc':
-        surfaces[o + S_SHAPE] = SHAPE_DISC;
-        surfaces.set([sh.at, sh.normalSign, sh.rInner * sh.rInner, sh.rOuter * sh.rOuter], p);
-        break;
-      case 'cylinder':
-        surfaces[o + S_SHAPE] = SHAPE_CYLINDER;
-        surfaces.set([sh.radius, sh.z0, sh.z1], p);
-        break;
-      case 'frustum':
-        surfaces[o + S_SHAPE] = SHAPE_FRUSTUM;
-        surfaces.set([sh.r0, sh.z0, sh.r1, sh.z1, (sh.r1 - sh.r0) / (sh.z1 - sh.z0)], p);
-        break;
-      case 'spheroid-cap':
-        surfaces[o + S_SHAPE] = SHAPE_SPHEROID_CAP;
-        surfaces.set([sh.radius, sh.height, sh.zCentre, 1 / (sh.radius * sh.radius), 1 / (sh.height * sh.height)], p);
-        break;
-    }
+    packShape(s.shape, surfaces, o);
     const front = mediumOf(s.front, `surface '${s.name}'`);
     const behind = mediumOf(s.behind, `surface '${s.name}'`);
     surfaces[o + S_FRONT] = front;
