@@ -1,6 +1,8 @@
 /**
  * Benchmark of the Monte Carlo package tracer: three fixed packages (bare chip, hemispherical dome,
- * cylinder), and the dome again with polarisation tracked, each traced on one thread and on all cores. Prints rays/s and events/s, rays per CPU
+ * cylinder), the dome again with polarisation tracked, a flip chip on sapphire under the dome, and a
+ * mid-power reflector cup (2.6 mm floor, 3.0 mm top, 0.8 mm deep, white diffuse wall 0.93, silvered
+ * floor 0.95, flip chip, flat fill), each traced on one thread and on all cores. Prints rays/s and events/s, rays per CPU
  * second (one thread), and the extraction with its standard error. The all-core runs use a thread pool
  * started and warmed up before timing; its start-up time is printed once.
  *
@@ -11,6 +13,7 @@
  * else the machine is doing; the CPU-time rate (rays per CPU second of this process) is steadier.
  */
 import { cpus } from 'node:os';
+import { flipChipOnSapphire } from '../src/lib/trace/chip-presets';
 import { createNodeTracePool, defaultThreads } from '../src/lib/trace/node/node-pool';
 import type { TracePackage } from '../src/lib/trace/package-spec';
 import { summarize } from '../src/lib/trace/summary';
@@ -42,6 +45,19 @@ const scenarios: { name: string; pkg: TracePackage }[] = [
     // The same dome with each ray's polarisation state followed through every event (slower, see DEVELOPERS.md)
     name: 'dome, pol. tracked',
     pkg: packageWith({ shape: 'dome', radiusMm: 2.5, heightMm: 2.5, n: 1.41, absorptionPerMm: 0.001 }, 'track')
+  },
+  {
+    name: 'flip chip, dome',
+    pkg: { ...packageWith({ shape: 'dome', radiusMm: 2.5, heightMm: 2.5, n: 1.41, absorptionPerMm: 0.001 }), chip: flipChipOnSapphire() }
+  },
+  {
+    name: 'mid-power cup',
+    pkg: {
+      ...packageWith({ shape: 'none', radiusMm: 1.5, heightMm: 1, n: 1.41, absorptionPerMm: 0.001 }),
+      chip: flipChipOnSapphire(),
+      base: { kind: 'reflectance', reflectance: 0.95 },
+      body: { kind: 'cup', floorRadiusMm: 1.3, topRadiusMm: 1.5, depthMm: 0.8, wallFinish: 'diffuse', wallReflectance: 0.93, fill: 'flat' }
+    }
   }
 ];
 
@@ -85,7 +101,8 @@ async function main(): Promise<void> {
       const cpuSeconds = (cpu.user + cpu.system) / 1e6;
       const s = summarize(tally);
       const c = s.counts;
-      const ledgerOk = c.escaped + c.chip + c.encapsulant + c.base + c.lost === c.rays;
+      const ledgerOk =
+        c.escaped + c.chip + c.encapsulant + c.base + c.lost === c.rays && s.parts.reduce((a, p) => a + p.count, 0) === c.rays;
       if (t === 1 && name === 'hemispherical dome') domeRate = rays / seconds;
       console.log(
         `${name.padEnd(20)} ${String(t).padStart(7)}  ${millions(rays / seconds)}  ${millions(tally.events / seconds).padStart(9)}  ` +

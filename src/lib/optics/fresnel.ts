@@ -81,6 +81,14 @@ export function fresnelReal(cosThetaI: number, etaI: number, etaT: number, out: 
   return true;
 }
 
+/**
+ * {@link fresnelReal} with its numbers in an array, inp = [cos θi, etaI, etaT], so that a call the
+ * engine does not inline boxes nothing (the tracer's bounce loop). Same outputs and result.
+ */
+export function fresnelRealAt(inp: Float64Array, out: Float64Array): boolean {
+  return fresnelReal(inp[0], inp[1], inp[2], out);
+}
+
 /** Length of the buffer {@link fresnelAmplitudesAt} fills. */
 export const FRESNEL_AMPLITUDES_LENGTH = 8;
 

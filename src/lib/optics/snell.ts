@@ -75,6 +75,14 @@ export function refractDirection(
 }
 
 /**
+ * {@link refractDirection} with the two indices in an array, etas = [·, etaI, etaT] (the layout of
+ * fresnelRealAt's input), so that a call the engine does not inline boxes nothing. Same result.
+ */
+export function refractDirectionAt(out: Vec3, d: ReadonlyVec3, n: ReadonlyVec3, etas: Float64Array): boolean {
+  return refractDirection(out, d, n, etas[1], etas[2]);
+}
+
+/**
  * Mirror reflection of a direction: r = d − 2 (d·n) n. Either orientation of the unit normal n gives
  * the same result. Trusts its inputs (hot path).
  * @param out receives the reflected direction; may alias d or n

@@ -1,18 +1,30 @@
-import { SURFACE_NONE, CHIP_TOP, CHIP_X_POS, CHIP_X_NEG, CHIP_Y_POS, CHIP_Y_NEG, CHIP_BOTTOM } from './surfaces';
+import * as layout from './scene-layout';
+
+// The layout's constants as module constants: under tsx (command line, bench) an imported binding is a
+// getter, which the optimiser does not always inline in a large function (measured: 3× slower loop)
+const { M_BOX_A, M_BOX_B, M_BOX_Z0, M_BOX_Z1 } = layout;
+
+/** Faces of a box medium, in the order of its M_BOX_FACES slots. */
+export const FACE_X_POS = 0;
+export const FACE_X_NEG = 1;
+export const FACE_Y_POS = 2;
+export const FACE_Y_NEG = 3;
+export const FACE_Z_POS = 4;
+export const FACE_Z_NEG = 5;
 
 /**
- * Where a ray inside the chip box [−a, a] × [−b, b] × [0, H] leaves it: along each axis the wall ahead
+ * Where a ray inside the box [−a, a] × [−b, b] × [z0, z1] leaves it: along each axis the wall ahead
  * is at t = D/|d| (D ≥ 0 the distance to that wall, |d| the direction component's size), and the
  * nearest wall is the exit (slab method). The walls are compared without dividing —
  * D1/|d1| < D2/|d2| ⇔ D1·|d2| < D2·|d1| — so only the winner costs a division (this is the tracer's
  * most frequent geometry call).
- * Writes the distance (mm, ≥ 0) to hit[0] and returns the face (a constant from surfaces.ts), or
- * SURFACE_NONE for a zero direction. A point a hair outside (roundoff) gives t = 0, never t < 0.
+ * Writes the distance (mm, ≥ 0) to hit[0] and returns the face (FACE_*), or −1 for a zero
+ * direction. A point a hair outside (roundoff) gives t = 0, never t < 0.
  * @param ray [x, y, z, dx, dy, dz] in mm, unit direction (read only)
- * @param box [a, b, H, …]: half width along x, half length along y, height, mm
+ * @param media medium records; @param o offset of this box medium's record (box slots M_BOX_*)
  * @see T. L. Kay, J. T. Kajiya, "Ray tracing complex scenes", SIGGRAPH '86 (slabs)
  */
-export function boxExit(ray: Float64Array, box: Float64Array, hit: Float64Array): number {
+export function boxExit(ray: Float64Array, media: Float64Array, o: number, hit: Float64Array): number {
   const px = ray[0];
   const py = ray[1];
   const pz = ray[2];
@@ -22,43 +34,44 @@ export function boxExit(ray: Float64Array, box: Float64Array, hit: Float64Array)
   // Nearest wall so far as the fraction D/|d|; 1/0 = "none yet", beaten by any wall ahead
   let D = 1;
   let speed = 0;
-  let face = SURFACE_NONE;
+  let face = -1;
   if (dx > 0) {
-    D = box[0] - px;
+    D = media[o + M_BOX_A] - px;
     speed = dx;
-    face = CHIP_X_POS;
+    face = FACE_X_POS;
   } else if (dx < 0) {
-    D = box[0] + px;
+    D = media[o + M_BOX_A] + px;
     speed = -dx;
-    face = CHIP_X_NEG;
+    face = FACE_X_NEG;
   }
   if (dy > 0) {
-    const Dy = box[1] - py;
+    const Dy = media[o + M_BOX_B] - py;
     if (Dy * speed < D * dy) {
       D = Dy;
       speed = dy;
-      face = CHIP_Y_POS;
+      face = FACE_Y_POS;
     }
   } else if (dy < 0) {
-    const Dy = box[1] + py;
+    const Dy = media[o + M_BOX_B] + py;
     if (Dy * speed < -D * dy) {
       D = Dy;
       speed = -dy;
-      face = CHIP_Y_NEG;
+      face = FACE_Y_NEG;
     }
   }
   if (dz > 0) {
-    const Dz = box[2] - pz;
+    const Dz = media[o + M_BOX_Z1] - pz;
     if (Dz * speed < D * dz) {
       D = Dz;
       speed = dz;
-      face = CHIP_TOP;
+      face = FACE_Z_POS;
     }
   } else if (dz < 0) {
-    if (pz * speed < -D * dz) {
-      D = pz;
+    const Dz = pz - media[o + M_BOX_Z0];
+    if (Dz * speed < -D * dz) {
+      D = Dz;
       speed = -dz;
-      face = CHIP_BOTTOM;
+      face = FACE_Z_NEG;
     }
   }
   // t = D/|d| for the winning wall

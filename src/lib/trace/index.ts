@@ -9,3 +9,8 @@ export { traceChunk } from './trace-chunk';
 export { traceSync } from './trace';
 export * from './summary';
 export type { TraceReply, TraceRequest } from './trace-messages';
+export * from './chip-presets';
+export type * from './scene';
+export { packageScene } from './package-scene';
+export { compileScene, type CompiledScene, type LedgerGroup } from './compile-scene';
+export { traceSceneChunk } from './trace-chunk';

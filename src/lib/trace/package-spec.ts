@@ -22,9 +22,51 @@ export interface TraceChip {
   absorptionPerMm: number;
   /** Height of the emitting plane above the base, mm, [0, heightMm]; default heightMm / 2. */
   emitterZMm?: number;
-  /** 'plane': uniform over the footprint at emitterZMm; 'volume': uniform in the chip. */
+  /** 'plane': uniform over the footprint at emitterZMm; 'volume': uniform in the chip (in the emitting layer when layered). */
   emission: EmissionMode;
+  /**
+   * Layers bottom to top (absent: one layer of heightMm, n, absorptionPerMm). When present, heightMm
+   * must equal their total thickness and n, absorptionPerMm are not used.
+   */
+  layers?: TraceChipLayer[];
+  /** Index into `layers` of the emitting layer (default 0); emitterZMm must lie inside it. */
+  emitLayer?: number;
+  /** The chip's own bottom mirror (absent: the chip stands on the base / cup floor and that reflects). */
+  mirror?: TraceBase;
+  /** Textured top face: scattered fraction s, [0, 1] (absent or 0: flat). */
+  topScatter?: number;
 }
+
+export interface TraceChipLayer {
+  /** Unique name (the ledger's bin for what it absorbs), e.g. 'GaN'. */
+  name: string;
+  thicknessMm: number;
+  n: number;
+  absorptionPerMm: number;
+}
+
+/** How the base (or the cup floor) reflects: like a mirror, or diffusely (Lambertian; needs a plain reflectance). */
+export type SurfaceFinish = 'specular' | 'diffuse';
+
+/**
+ * A reflector cup: floor disc of radius floorRadiusMm at z = 0 (the base, with the package's base
+ * reflectance and finish), a cone-frustum wall up to topRadiusMm at z = depthMm.
+ * fill: 'flat' fills the cup with the encapsulant to its rim; 'dome' also puts a half spheroid of the
+ * encapsulant (encapsulant.radiusMm ≤ topRadiusMm, encapsulant.heightMm) on the rim plane; 'none'
+ * leaves it empty (the outside medium). With a cup, encapsulant.shape is not used.
+ */
+export interface TraceCup {
+  kind: 'cup';
+  floorRadiusMm: number;
+  topRadiusMm: number;
+  depthMm: number;
+  wallFinish: SurfaceFinish;
+  wallReflectance: number;
+  fill: 'flat' | 'dome' | 'none';
+}
+
+/** The body the chip stands in: today's endless base plane ('flat'), or a reflector cup. */
+export type TraceBody = { kind: 'flat' } | TraceCup;
 
 /** The specular base under chip and encapsulant: a fixed reflectance, or a metal by its n + ik. */
 export type TraceBase =
@@ -57,6 +99,10 @@ export interface TracePackage {
   outsideN: number;
   /** 'average': reflect with probability (Rs + Rp)/2; 'track': carry each ray's field and use its own R. */
   polarization: PolarizationMode;
+  /** Finish of the base (or cup floor); default 'specular'. 'diffuse' needs base.kind 'reflectance'. */
+  baseFinish?: SurfaceFinish;
+  /** Default { kind: 'flat' }. */
+  body?: TraceBody;
 }
 
 export interface TraceOptions {
@@ -81,7 +127,9 @@ export const TRACE_LIMITS = {
   metalK: { min: 0, max: 50 },
   rays: { min: 1, max: 1e8 },
   seed: { min: 0, max: 4294967295 },
-  maxEvents: { min: 1, max: 1e6 }
+  maxEvents: { min: 1, max: 1e6 },
+  scatteredFraction: { min: 0, max: 1 },
+  layers: { min: 1, max: 16 }
 } as const;
 
 function show(value: unknown): string {
@@ -112,9 +160,25 @@ function requireObject(field: string, value: unknown): void {
   if (typeof value !== 'object' || value === null) throw new RangeError(`${field} must be an object (got ${show(value)})`);
 }
 
-/** The emitter height actually used: chip.emitterZMm, or half the chip height when absent. */
+/** The chip's layers bottom to top: chip.layers, or the one layer the single-box chip is. */
+export function chipLayers(chip: TraceChip): TraceChipLayer[] {
+  return chip.layers ?? [{ name: 'chip', thicknessMm: chip.heightMm, n: chip.n, absorptionPerMm: chip.absorptionPerMm }];
+}
+
+/** Bottom and top height (mm) of layer i of a chip. */
+export function layerSpanMm(chip: TraceChip, i: number): [number, number] {
+  const layers = chipLayers(chip);
+  let z0 = 0;
+  for (let k = 0; k < i; k++) z0 += layers[k].thicknessMm;
+  return [z0, z0 + layers[i].thicknessMm];
+}
+
+/** The emitter height actually used: chip.emitterZMm, or the middle of the emitting layer when absent. */
 export function emitterHeightMm(chip: TraceChip): number {
-  return chip.emitterZMm === undefined ? chip.heightMm / 2 : chip.emitterZMm;
+  if (chip.emitterZMm !== undefined) return chip.emitterZMm;
+  if (chip.layers === undefined) return chip.heightMm / 2;
+  const [z0, z1] = layerSpanMm(chip, chip.emitLayer ?? 0);
+  return (z0 + z1) / 2;
 }
 
 /** A limit for a message, to six significant digits. */
@@ -137,16 +201,21 @@ export function validateTracePackage(p: TracePackage): void {
   requireRange('chip.heightMm', chip.heightMm, L.sizeMm.min, L.sizeMm.max);
   requireRange('chip.n', chip.n, L.index.min, L.index.max);
   requireRange('chip.absorptionPerMm', chip.absorptionPerMm, L.absorptionPerMm.min, L.absorptionPerMm.max);
-  if (chip.emitterZMm !== undefined) requireRange('chip.emitterZMm', chip.emitterZMm, 0, chip.heightMm);
   requireChoice('chip.emission', chip.emission, ['plane', 'volume']);
-
-  requireObject('base', p.base);
-  requireChoice('base.kind', p.base.kind, ['reflectance', 'metal']);
-  if (p.base.kind === 'reflectance') {
-    requireRange('base.reflectance', p.base.reflectance, L.reflectance.min, L.reflectance.max);
+  if (chip.layers === undefined) {
+    if (chip.emitterZMm !== undefined) requireRange('chip.emitterZMm', chip.emitterZMm, 0, chip.heightMm);
   } else {
-    requireRange('base.n', p.base.n, L.metalN.min, L.metalN.max);
-    requireRange('base.k', p.base.k, L.metalK.min, L.metalK.max);
+    validateLayers(chip);
+  }
+  if (chip.mirror !== undefined) validateMirror('chip.mirror', chip.mirror);
+  if (chip.topScatter !== undefined) requireRange('chip.topScatter', chip.topScatter, L.scatteredFraction.min, L.scatteredFraction.max);
+
+  validateMirror('base', p.base);
+  if (p.baseFinish !== undefined) {
+    requireChoice('baseFinish', p.baseFinish, ['specular', 'diffuse']);
+    if (p.baseFinish === 'diffuse' && p.base.kind !== 'reflectance') {
+      throw new RangeError(`baseFinish 'diffuse' needs base.kind 'reflectance' (got base.kind '${p.base.kind}')`);
+    }
   }
 
   requireRange('outsideN', p.outsideN, L.index.min, L.index.max);
@@ -154,6 +223,11 @@ export function validateTracePackage(p: TracePackage): void {
 
   requireObject('encapsulant', p.encapsulant);
   const enc = p.encapsulant;
+  if (p.body !== undefined) {
+    requireObject('body', p.body);
+    requireChoice('body.kind', p.body.kind, ['flat', 'cup']);
+    if (p.body.kind === 'cup') return validateCup(p, p.body);
+  }
   requireChoice('encapsulant.shape', enc.shape, ['none', 'dome', 'cylinder']);
   if (enc.shape === 'none') return;
   requireRange('encapsulant.radiusMm', enc.radiusMm, L.sizeMm.min, L.sizeMm.max);
@@ -184,6 +258,78 @@ export function validateTracePackage(p: TracePackage): void {
         `encapsulant.radiusMm must be greater than the chip's half-diagonal ${limitText(minR)} mm so the chip fits in the cylinder (got ${show(enc.radiusMm)})`
       );
     }
+  }
+}
+
+function validateMirror(field: string, m: TraceBase): void {
+  requireObject(field, m);
+  const L = TRACE_LIMITS;
+  requireChoice(`${field}.kind`, m.kind, ['reflectance', 'metal']);
+  if (m.kind === 'reflectance') {
+    requireRange(`${field}.reflectance`, m.reflectance, L.reflectance.min, L.reflectance.max);
+  } else {
+    requireRange(`${field}.n`, m.n, L.metalN.min, L.metalN.max);
+    requireRange(`${field}.k`, m.k, L.metalK.min, L.metalK.max);
+  }
+}
+
+function validateLayers(chip: TraceChip): void {
+  const L = TRACE_LIMITS;
+  const layers = chip.layers as unknown;
+  if (!Array.isArray(layers) || layers.length < L.layers.min || layers.length > L.layers.max) {
+    throw new RangeError(`chip.layers must be a list of ${L.layers.min} to ${L.layers.max} layers (got ${show(layers)})`);
+  }
+  const names = new Set<string>();
+  let total = 0;
+  chip.layers!.forEach((layer, i) => {
+    const f = `chip.layers[${i}]`;
+    requireObject(f, layer);
+    if (typeof layer.name !== 'string' || layer.name.length === 0 || names.has(layer.name) || ['outside', 'encapsulant'].includes(layer.name)) {
+      throw new RangeError(`${f}.name must be a unique non-empty name other than 'outside' and 'encapsulant' (got ${show(layer.name)})`);
+    }
+    names.add(layer.name);
+    requireRange(`${f}.thicknessMm`, layer.thicknessMm, L.sizeMm.min, L.sizeMm.max);
+    requireRange(`${f}.n`, layer.n, L.index.min, L.index.max);
+    requireRange(`${f}.absorptionPerMm`, layer.absorptionPerMm, L.absorptionPerMm.min, L.absorptionPerMm.max);
+    total += layer.thicknessMm;
+  });
+  if (!(Math.abs(total - chip.heightMm) <= 1e-9 * total)) {
+    throw new RangeError(`chip.heightMm must equal the layers' total thickness ${limitText(total)} mm (got ${show(chip.heightMm)})`);
+  }
+  const emit = chip.emitLayer ?? 0;
+  requireInteger('chip.emitLayer', emit, 0, chip.layers!.length - 1);
+  if (chip.emitterZMm !== undefined) {
+    const [z0, z1] = layerSpanMm(chip, emit);
+    requireRange('chip.emitterZMm (inside the emitting layer)', chip.emitterZMm, z0, z1);
+  }
+}
+
+/** Checks a cup body and that the chip (and a dome) fit it. */
+function validateCup(p: TracePackage, cup: TraceCup): void {
+  const L = TRACE_LIMITS;
+  requireRange('body.floorRadiusMm', cup.floorRadiusMm, L.sizeMm.min, L.sizeMm.max);
+  requireRange('body.topRadiusMm', cup.topRadiusMm, cup.floorRadiusMm, L.sizeMm.max);
+  requireRange('body.depthMm', cup.depthMm, L.sizeMm.min, L.sizeMm.max);
+  requireChoice('body.wallFinish', cup.wallFinish, ['specular', 'diffuse']);
+  requireRange('body.wallReflectance', cup.wallReflectance, L.reflectance.min, L.reflectance.max);
+  requireChoice('body.fill', cup.fill, ['flat', 'dome', 'none']);
+  const chip = p.chip;
+  const rho = Math.hypot(chip.widthMm / 2, chip.lengthMm / 2);
+  if (!(rho < cup.floorRadiusMm)) {
+    throw new RangeError(
+      `body.floorRadiusMm must be greater than the chip's half-diagonal ${limitText(rho)} mm so the chip stands on the floor (got ${show(cup.floorRadiusMm)})`
+    );
+  }
+  if (!(chip.heightMm < cup.depthMm)) {
+    throw new RangeError(`body.depthMm must be greater than chip.heightMm = ${limitText(chip.heightMm)} mm so the chip fits in the cup (got ${show(cup.depthMm)})`);
+  }
+  if (cup.fill === 'none') return;
+  const enc = p.encapsulant;
+  requireRange('encapsulant.n', enc.n, L.index.min, L.index.max);
+  requireRange('encapsulant.absorptionPerMm', enc.absorptionPerMm, L.absorptionPerMm.min, L.absorptionPerMm.max);
+  if (cup.fill === 'dome') {
+    requireRange('encapsulant.radiusMm (dome on the cup rim, at most body.topRadiusMm)', enc.radiusMm, L.sizeMm.min, cup.topRadiusMm);
+    requireRange('encapsulant.heightMm', enc.heightMm, L.sizeMm.min, L.sizeMm.max);
   }
 }
 

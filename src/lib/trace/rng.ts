@@ -66,6 +66,15 @@ export function nextFloat(): number {
   return result * 2.3283064365386963e-10;
 }
 
+/**
+ * Draws `count` uniform numbers in [0, 1) into out[0..count−1], in sequence (the same numbers as
+ * `count` calls of nextFloat). The ray loop draws this way: a number returned from a call the engine
+ * does not inline is a heap object, a number written into an array is not.
+ */
+export function uniformsInto(out: Float64Array, count: number): void {
+  for (let i = 0; i < count; i++) out[i] = nextFloat();
+}
+
 /** Next raw 32-bit output as an unsigned integer (for tests against the reference sequence). */
 export function nextUint32(): number {
   return Math.round(nextFloat() * 4294967296);

@@ -1,6 +1,7 @@
 /**
  * Turns a tally into the numbers a reader wants: extraction with its standard error, the ledger as
- * fractions and counts, escapes per surface, and the far field.
+ * fractions and counts (grouped: chip, encapsulant, base, lost; and by the scene's named parts),
+ * escapes per surface, and the far field.
  *
  * Far field (rotationally averaged about z): the escape histogram has 180 bins of 1° in polar angle θ.
  * Intensity per solid angle in bin i is N_i / ΔΩ_i with ΔΩ_i = 2π (cos θ_i − cos θ_{i+1}); it is
@@ -23,6 +24,19 @@ export interface FarFieldBin {
   thetaDeg: number;
   /** Intensity per solid angle over the Lambertian I0 = Φ/π of the same escaped flux. */
   relativeIntensity: number;
+}
+
+/** One named bin of the scene's ledger (see compile-scene.ts for the names). */
+export interface LedgerPart {
+  /** The bin's full name, e.g. 'escaped:dome', 'medium:chip', 'surface:base', 'lost:event cap'. */
+  bin: string;
+  /** What happened there: escaped through a surface, absorbed in a medium or at a surface, or lost. */
+  kind: 'escaped' | 'medium' | 'surface' | 'lost';
+  /** The surface, medium or reason named by the bin. */
+  part: string;
+  count: number;
+  /** count / launched rays. */
+  fraction: number;
 }
 
 export interface TraceSummary {
@@ -49,6 +63,10 @@ export interface TraceSummary {
   eventsPerRay: number;
   /** Fraction of launched rays escaping through each surface. */
   perSurface: { chipTop: number; chipSide: number; dome: number; cylinderTop: number; cylinderSide: number };
+  /** Every bin of the scene's ledger, in the scene's order; the counts sum to rays. */
+  parts: LedgerPart[];
+  /** Fraction of launched rays escaping by surface (the last surface a ray met), keyed by the surface's bin name. */
+  escapedBySurface: Record<string, number>;
   /** Rays stopped because the geometry failed (counted in lost); should be 0. */
   geometryErrors: number;
   /** Debug counts of total internal reflections. */
@@ -123,6 +141,18 @@ function farField(histogram: Float64Array, escaped: number): TraceSummary['farFi
   return { beamAngleDeg, onAxisVsLambertian, bins };
 }
 
+const PART_KINDS: readonly LedgerPart['kind'][] = ['escaped', 'medium', 'surface', 'lost'];
+
+/** The named ledger of a tally, with fractions of `launched`. */
+function ledgerParts(parts: Record<string, number>, inv: number): LedgerPart[] {
+  return Object.entries(parts).map(([bin, count]) => {
+    const colon = bin.indexOf(':');
+    const kind = bin.slice(0, colon) as LedgerPart['kind'];
+    if (!PART_KINDS.includes(kind)) throw new Error(`tally: unknown ledger bin '${bin}'`);
+    return { bin, kind, part: bin.slice(colon + 1), count, fraction: count * inv };
+  });
+}
+
 /** Summarises a tally (see the file comment for the far-field definitions). */
 export function summarize(tally: Tally): TraceSummary {
   const N = tally.launched;
@@ -159,6 +189,12 @@ export function summarize(tally: Tally): TraceSummary {
       cylinderTop: tally.escapedCylinderTop * inv,
       cylinderSide: tally.escapedCylinderSide * inv
     },
+    parts: ledgerParts(tally.parts, inv),
+    escapedBySurface: Object.fromEntries(
+      Object.entries(tally.parts)
+        .filter(([bin]) => bin.startsWith('escaped:'))
+        .map(([bin, count]) => [bin.slice('escaped:'.length), count * inv])
+    ),
     geometryErrors: tally.geometryErrors,
     tir: { outerSurface: tally.outerSurfaceTir, chipFaces: tally.chipFaceTir },
     trappedNote:

@@ -5,7 +5,10 @@
  * and the page unchanged. Counts are integers stored in doubles (exact up to 2⁵³), so merging tallies
  * from any number of workers in any order gives the same totals.
  *
- * Ledger identity: launched = escaped + absorbedChip + absorbedEncapsulant + absorbedBase + lost.
+ * Ledger identity: launched = escaped + absorbedChip + absorbedEncapsulant + absorbedBase + lost, and
+ * also launched = the sum of `parts` (the scene's named bins, see compile-scene.ts). The fixed
+ * fields group the named bins: absorbedChip holds every chip layer, absorbedEncapsulant every other
+ * medium, absorbedBase every absorbing surface (base, floor, wall, chip mirror).
  */
 
 /** Number of polar-angle bins of the escape histogram: 1° wide, covering 0..180°. */
@@ -41,6 +44,11 @@ export interface Tally {
   outerSurfaceTir: number;
   /** Debug: total internal reflections at the chip's faces (from inside the chip). */
   chipFaceTir: number;
+  /**
+   * The scene's ledger by named bin ('escaped:<surface>', 'medium:<name>', 'surface:<name>',
+   * 'lost:event cap', 'lost:geometry error'): a new part adds a bin here, no field anywhere.
+   */
+  parts: Record<string, number>;
   /** Escaped rays per 1° polar-angle bin: bin i holds θ in [i°, (i+1)°), θ measured from +z. */
   polarHistogram: Float64Array;
 }
@@ -64,6 +72,7 @@ export function createTally(): Tally {
     escapedCylinderSide: 0,
     outerSurfaceTir: 0,
     chipFaceTir: 0,
+    parts: {},
     polarHistogram: new Float64Array(POLAR_BINS)
   };
 }
@@ -86,6 +95,7 @@ export function mergeTally(into: Tally, from: Tally): Tally {
   into.escapedCylinderSide += from.escapedCylinderSide;
   into.outerSurfaceTir += from.outerSurfaceTir;
   into.chipFaceTir += from.chipFaceTir;
+  for (const name in from.parts) into.parts[name] = (into.parts[name] ?? 0) + from.parts[name];
   const bins = into.polarHistogram;
   const add = from.polarHistogram;
   for (let i = 0; i < POLAR_BINS; i++) bins[i] += add[i];

@@ -1,84 +1,100 @@
 /**
- * The Monte Carlo ray loop: traces one chunk of rays through a package and adds their fates to a tally.
+ * The Monte Carlo integrator: traces one chunk of rays through a compiled scene (compile-scene.ts)
+ * and adds their fates to a tally.
  *
- * Model (units mm, z up, base plane z = 0; see package-spec.ts):
- * - A ray knows its medium (chip or encapsulant) and meets only the surfaces bounding it: chip faces
- *   and the base from inside the chip; chip faces, base plane and the outer surface from the encapsulant.
- * - At each dielectric interface the core Fresnel functions decide: total internal reflection, else
- *   reflection with probability R = (Rs + Rp)/2 ('average') or the ray's own polarised R ('track',
- *   see polarization.ts), else refraction by the core's vector Snell's law.
- * - The base is a specular mirror: reflect with probability R (a fixed number, or a metal's R at the
- *   angle of incidence from the adjacent medium), else the ray is absorbed at the base.
+ * The scene (units mm, z up) is media, each a solid region of one material, and surfaces, each a
+ * shape with a medium in front and one behind and an optical behaviour (scene.ts). One loop serves
+ * every package:
+ *   nearest boundary of the current medium → free flight (absorption) → surface event → ledger.
+ * - Geometry by medium: a ray knows its medium and meets only the surfaces bounding it (a box
+ *   medium — a chip layer — by the slab method, any other by the nearest of its surface list). No
+ *   surface ahead is a geometry error, counted, never hidden; in the outside medium it is an escape
+ *   (see below).
  * - Bulk absorption by Beer–Lambert: each ray draws one optical depth τ ~ Exp(1) at launch and spends
- *   α·t of it on every segment of length t; it is absorbed where the total reaches τ. This is the same
- *   as drawing a fresh exponential free path per segment (the exponential is memoryless) and needs one
- *   logarithm per ray.
- * - Escape is final: a ray refracted into the outside medium is counted escaped at that moment, with
- *   its polar angle, and never returns (even if, heading down, it would meet the base plane again);
- *   escapes heading below the horizon are also counted in escapedBelowHorizon.
- * - Every ray ends in exactly one ledger bin: escaped, absorbed in chip / encapsulant / at base, or lost
- *   (event cap reached, or a geometry error — no surface found where one must exist — also counted in
- *   geometryErrors). One event = one segment ending on a surface (or in absorption).
+ *   α·t of it on every segment of length t; it is absorbed where the total reaches τ. The same as a
+ *   fresh exponential free path per segment (the exponential is memoryless), at one logarithm per ray.
+ * - Surface events by behaviour: Fresnel interface (total internal reflection, else reflect with
+ *   probability R = (Rs + Rp)/2, or the ray's own R in 'track' mode, see polarization.ts, else
+ *   refract by vector Snell's law); textured interface (the same, then with probability s a
+ *   cosine-weighted direction in the half-space the ray goes into; s = 0 draws no number); specular
+ *   mirror (reflect with probability R, a number or a metal's R at the angle, else absorbed there);
+ *   Lambertian reflector (reflect with probability R into a cosine-weighted direction); absorber.
+ * - Escape: a ray in the outside medium is followed to the next surface bounding the outside; when
+ *   there is none it reaches the scene's bounding sphere and has escaped, credited to the last
+ *   surface it met, with its polar angle (escapes heading below the horizon also counted apart).
+ *   With nothing else in the outside (today's packages are convex seen from outside) escape is final.
+ * - Every ray ends in exactly one ledger bin (named by the scene): escaped by surface, absorbed in a
+ *   medium or at a surface, lost at the event cap, or lost on a geometry error. One event = one
+ *   segment ending on a surface (or in absorption); the flight to the bounding sphere is not one.
+ * - Dispatch is by `switch` on small integer kinds read from the packed records; no closures.
  *
- * Speed: the loop allocates nothing per ray or event, in both polarisation modes. The ray lives in the module-scope Float64Array
- * `ray`; the loop's functions pass only small integers (media, faces, outcomes), never floating-point
- * numbers, which the engine would box into heap objects whenever it declines to inline a call. Each
- * step is split in two — the segment (stepInChip / stepInEncapsulant) and the surface event
- * (chipWallEvent / encapsulantSurfaceEvent) — so that each is optimised with its own inlining budget
- * and the core Fresnel function is inlined whole rather than half (measured: 43 bytes of garbage per
- * ray before the split, none after).
+ * Speed: nothing is allocated per ray or event, in both polarisation modes. The ray lives in the
+ * module-scope Float64Array `ray`; the loop's functions pass only small integers (media, surfaces,
+ * outcomes), never floating-point numbers, which the engine would box into heap objects whenever it
+ * declines to inline a call. The flight and the surface event are separate functions so each is
+ * optimised with its own inlining budget.
  * Sources: M. Pharr, W. Jakob, G. Humphreys, Physically Based Rendering, 3rd ed. (choosing
- * reflection with probability R, §14.1; exponential free paths, §15.2); G. Marsaglia, "Choosing a
- * point from the surface of a sphere", Ann. Math. Stat. 43, 645 (1972) (isotropic directions).
+ * reflection with probability R, §14.1; exponential free paths, §15.2; media on both sides of a
+ * surface, §11.3); G. Marsaglia, "Choosing a point from the surface of a sphere", Ann. Math. Stat. 43,
+ * 645 (1972) (isotropic directions).
  */
-import { fresnelReal, MIRROR_AMPLITUDES_LENGTH, mirrorAmplitudesAt } from '../optics/fresnel';
-import { reflectDirection, refractDirection } from '../optics/snell';
-import { boxEntry } from './box-entry';
+import { fresnelRealAt, MIRROR_AMPLITUDES_LENGTH, mirrorAmplitudesAt } from '../optics/fresnel';
+import { reflectDirection, refractDirectionAt } from '../optics/snell';
 import { boxExit } from './box-exit';
-import { cylinderExit } from './cylinder-exit';
-import { DEFAULT_MAX_EVENTS, emitterHeightMm, type TracePackage } from './package-spec';
+import { compileScene, type CompiledScene } from './compile-scene';
+import { lambertianDirection } from './lambertian';
+import { DEFAULT_MAX_EVENTS, type TracePackage } from './package-spec';
+import { packageScene } from './package-scene';
 import { TRACK_TIR, TRACK_TRANSMITTED, launchPolarization, trackedInterface, trackedMirror } from './polarization';
-import { nextFloat, seedChunk } from './rng';
-import { spheroidExit } from './spheroid-exit';
-import {
-  BASE,
-  CHIP_BOTTOM,
-  CHIP_TOP,
-  CHIP_X_NEG,
-  CHIP_X_POS,
-  CHIP_Y_NEG,
-  CHIP_Y_POS,
-  CYLINDER_SIDE,
-  CYLINDER_TOP,
-  DOME,
-  SURFACE_NONE
-} from './surfaces';
+import { seedChunk, uniformsInto } from './rng';
+import * as layout from './scene-layout';
+import { intersectSurface, surfaceNormal } from './shape-intersect';
 import { POLAR_BINS, type Tally } from './tally';
 
-const SHAPE_NONE = 0;
-const SHAPE_DOME = 1;
-const SHAPE_CYLINDER = 2;
+// The layout's constants as module constants: under tsx (command line, bench) an imported binding is a
+// getter, which the optimiser does not always inline in a large function (measured: 3× slower loop)
+const {
+  BEHAVIOUR_DIFFUSE,
+  BEHAVIOUR_FRESNEL,
+  BEHAVIOUR_MIRROR,
+  BEHAVIOUR_TEXTURED,
+  BIN_EVENT_CAP,
+  BIN_GEOMETRY_ERROR,
+  BOUNDARY_BOX,
+  COUNTERS,
+  COUNTER_ESCAPED_BELOW,
+  COUNTER_EVENTS,
+  COUNTER_TIR_CHIP,
+  COUNTER_TIR_OUTER,
+  MEDIUM_STRIDE,
+  M_ABSORPTION,
+  M_BIN,
+  M_BOUNDARY,
+  M_BOX_A,
+  M_BOX_B,
+  M_BOX_FACES,
+  M_BOX_Z0,
+  M_BOX_Z1,
+  M_INDEX,
+  M_LIST_COUNT,
+  M_LIST_START,
+  NONE,
+  SIDE_FRONT,
+  SURFACE_STRIDE,
+  S_B,
+  S_BEHAVIOUR,
+  S_BEHIND,
+  S_BIN_ABSORBED,
+  S_BIN_ESCAPED,
+  S_FRONT,
+  S_TIR_BEHIND,
+  S_TIR_FRONT
+} = layout;
 
 // Outcomes of one dielectric interface event
 const REFLECTED = 0;
 const TIR = 1;
 const TRANSMITTED = 2;
-
-// Outcomes of a step; 3..11 end the ray and index `fates`. A step moves the ray along one segment;
-// when it ends on an interface it returns AT_SURFACE and the surface's own event function follows.
-const GO_ON = 0;
-const ENTER_ENCAPSULANT = 1;
-const ENTER_CHIP = 2;
-const ESCAPED_CHIP_TOP = 3;
-const ESCAPED_CHIP_SIDE = 4;
-const ESCAPED_DOME = 5;
-const ESCAPED_CYLINDER_TOP = 6;
-const ESCAPED_CYLINDER_SIDE = 7;
-const ABSORBED_CHIP = 8;
-const ABSORBED_ENCAPSULANT = 9;
-const ABSORBED_BASE = 10;
-const GEOMETRY_ERROR = 11;
-const AT_SURFACE = 15;
 
 const DEG_PER_RAD = 180 / Math.PI;
 /** Rays between progress callbacks inside a chunk. */
@@ -89,117 +105,148 @@ const ray = new Float64Array(7);
 const direction = ray.subarray(3, 6);
 // Unit normal of the current surface, facing the incident side (cos θi = −d·n)
 const normal = new Float64Array(3);
+// The normal of the half-space a scattered ray goes into
+const scatterAxis = new Float64Array(3);
 const hit = new Float64Array(1);
 const fr = new Float64Array(3);
-// A metal base's inputs [cos θi, index above, n, k] and coefficients (layout of mirrorAmplitudesAt)
+// A metal mirror's inputs [cos θi, index in front, n, k] and coefficients (layout of mirrorAmplitudesAt)
 const mirrorIn = new Float64Array(4);
 const mirror = new Float64Array(MIRROR_AMPLITUDES_LENGTH);
 // numbers handed to the polarisation functions (see polarization.ts: arrays, so nothing is boxed)
 const trackArgs = new Float64Array(5);
-// Chip box [a, b, H, self-hit eps, emitter height] and encapsulant shell [R, h], mm
-const box = new Float64Array(5);
-const shell = new Float64Array(2);
-// Ray fates of the current chunk, indexed by step outcome; slots 12–14: lost, escaped below, events
-const fates = new Float64Array(15);
+// Uniform random numbers just drawn (uniformsInto), and the Fresnel inputs [cos θi, etaI, etaT]
+const u = new Float64Array(2);
+const fin = new Float64Array(3);
+// Debug counters of the current chunk (COUNTER_*)
+const counters = new Float64Array(COUNTERS);
 
-// Media by number — chip, encapsulant, outside — so calls pass small integers, never boxed doubles
-const CHIP = 0;
-const ENCAPSULANT = 1;
-const OUTSIDE = 2;
-// Refractive index and absorption coefficient (1/mm) of each medium
-const indexOf = new Float64Array(3);
-const alphaOf = new Float64Array(3);
-
-// Package constants, set once per chunk by configure()
-let shape = SHAPE_NONE;
-let aroundChip = OUTSIDE;
+// The compiled scene of the current chunk, set by configure()
+let media: Float64Array = new Float64Array(0);
+let surfaces: Float64Array = new Float64Array(0);
+let bounds: Int32Array = new Int32Array(0);
+let bins = new Float64Array(2);
+let outside = 0;
+let emitterOffset = 0;
+let emitterMedium = 0;
 let volumeEmission = false;
 let absorbing = false;
 let track = false;
-let metalBase = false;
-let baseReflectance = 0;
-let baseN = 1;
-let baseK = 0;
-// √R of a plain reflector, for the tracked mirror (rs = −√R, rp = +√R)
-let baseAmplitude = 0;
-let invR2 = 0;
-let invH2 = 0;
-// The surface the last step ended on (a constant from surfaces.ts)
-let surface = SURFACE_NONE;
-// Debug counters of total internal reflections
-let outerTir = 0;
-let chipTir = 0;
+// The emitting plane's height, mm (an array, so the double is not boxed)
+const emitterZ = new Float64Array(1);
 
-function configure(pkg: TracePackage): void {
-  const chip = pkg.chip;
-  const enc = pkg.encapsulant;
-  shape = enc.shape === 'dome' ? SHAPE_DOME : enc.shape === 'cylinder' ? SHAPE_CYLINDER : SHAPE_NONE;
-  box[0] = chip.widthMm / 2;
-  box[1] = chip.lengthMm / 2;
-  box[2] = chip.heightMm;
-  shell[0] = enc.radiusMm;
-  shell[1] = enc.heightMm;
-  // Self-hit guard for the chip seen from the encapsulant, relative to the package size
-  box[3] = 1e-12 * (box[0] + box[1] + box[2] + (shape === SHAPE_NONE ? 0 : shell[0] + shell[1]));
-  invR2 = 1 / (shell[0] * shell[0]);
-  invH2 = 1 / (shell[1] * shell[1]);
-  indexOf[CHIP] = chip.n;
-  indexOf[ENCAPSULANT] = enc.n;
-  indexOf[OUTSIDE] = pkg.outsideN;
-  alphaOf[CHIP] = chip.absorptionPerMm;
-  alphaOf[ENCAPSULANT] = shape === SHAPE_NONE ? 0 : enc.absorptionPerMm;
-  aroundChip = shape === SHAPE_NONE ? OUTSIDE : ENCAPSULANT;
-  box[4] = emitterHeightMm(chip);
-  volumeEmission = chip.emission === 'volume';
-  absorbing = alphaOf[CHIP] > 0 || alphaOf[ENCAPSULANT] > 0;
-  track = pkg.polarization === 'track';
-  metalBase = pkg.base.kind === 'metal';
-  if (pkg.base.kind === 'metal') {
-    baseN = pkg.base.n;
-    baseK = pkg.base.k;
-  } else {
-    baseReflectance = pkg.base.reflectance;
-    baseAmplitude = Math.sqrt(baseReflectance);
-  }
+// The current ray's medium and the last surface it met
+let medium = 0;
+let lastSurface = NONE;
+
+function configure(scene: CompiledScene): void {
+  media = scene.media;
+  surfaces = scene.surfaces;
+  bounds = scene.bounds;
+  if (bins.length !== scene.binNames.length) bins = new Float64Array(scene.binNames.length);
+  bins.fill(0);
+  counters.fill(0);
+  outside = scene.outside;
+  emitterMedium = scene.emitterMedium;
+  emitterOffset = emitterMedium * MEDIUM_STRIDE;
+  emitterZ[0] = scene.emitterZ;
+  volumeEmission = scene.emitterVolume;
+  absorbing = scene.absorbing;
+  track = scene.track;
 }
 
-/** Starts a ray in the chip: position, isotropic direction, polarisation, optical depth. */
+/** Starts a ray in the emitting medium: position, isotropic direction, polarisation, optical depth. */
 function launch(): void {
-  // Position on the emitting plane or in the volume
-  ray[0] = (nextFloat() - 0.5) * 2 * box[0];
-  ray[1] = (nextFloat() - 0.5) * 2 * box[1];
-  ray[2] = volumeEmission ? nextFloat() * box[2] : box[4];
+  const o = emitterOffset;
+  // Position on the emitting plane or in the volume of the emitting box
+  uniformsInto(u, 2);
+  ray[0] = (u[0] - 0.5) * 2 * media[o + M_BOX_A];
+  ray[1] = (u[1] - 0.5) * 2 * media[o + M_BOX_B];
+  if (volumeEmission) {
+    const z0 = media[o + M_BOX_Z0];
+    uniformsInto(u, 1);
+    ray[2] = z0 + u[0] * (media[o + M_BOX_Z1] - z0);
+  } else {
+    ray[2] = emitterZ[0];
+  }
   // Isotropic direction without trigonometry (Marsaglia 1972): (u, v) uniform in the unit disc,
   // s = u² + v²; then (2u√(1 − s), 2v√(1 − s), 1 − 2s) is uniform on the sphere
-  let u = 0;
-  let v = 0;
+  let a = 0;
+  let b = 0;
   let s = 1;
   while (s >= 1) {
-    u = 2 * nextFloat() - 1;
-    v = 2 * nextFloat() - 1;
-    s = u * u + v * v;
+    uniformsInto(u, 2);
+    a = 2 * u[0] - 1;
+    b = 2 * u[1] - 1;
+    s = a * a + b * b;
   }
   const k = 2 * Math.sqrt(1 - s);
-  ray[3] = k * u;
-  ray[4] = k * v;
+  ray[3] = k * a;
+  ray[4] = k * b;
   ray[5] = 1 - 2 * s;
   if (track) {
-    trackArgs[0] = nextFloat();
+    uniformsInto(trackArgs, 1);
     launchPolarization(direction, trackArgs);
   }
   // Optical depth to absorption, τ ~ Exp(1) by inverse transform (1 − u ∈ (0, 1]); none if nothing absorbs
-  if (absorbing) ray[6] = -Math.log(1 - nextFloat());
-  else ray[6] = Infinity;
+  if (absorbing) {
+    uniformsInto(u, 1);
+    ray[6] = -Math.log(1 - u[0]);
+  } else ray[6] = Infinity;
+  medium = emitterMedium;
+  lastSurface = NONE;
 }
 
 /**
- * One dielectric interface at the current point, with `normal` facing the incident side, from medium
- * `from` into medium `to`: decides reflection, total internal reflection or refraction, and replaces
- * the ray's direction.
+ * The nearest boundary of the current medium ahead of the ray: returns its bounds entry
+ * (surface·2 + side) and writes the distance to hit[0], or returns NONE.
+ */
+function nearestBoundary(): number {
+  const o = medium * MEDIUM_STRIDE;
+  if ((media[o + M_BOUNDARY] | 0) === BOUNDARY_BOX) {
+    const face = boxExit(ray, media, o, hit);
+    return face < 0 ? NONE : media[o + M_BOX_FACES + face] | 0;
+  }
+  let best = NONE;
+  let tBest = Infinity;
+  const start = media[o + M_LIST_START] | 0;
+  const end = start + (media[o + M_LIST_COUNT] | 0);
+  for (let i = start; i < end; i++) {
+    const entry = bounds[i];
+    if (intersectSurface(surfaces, (entry >> 1) * SURFACE_STRIDE, entry & 1, ray, hit) && hit[0] < tBest) {
+      tBest = hit[0];
+      best = entry;
+    }
+  }
+  hit[0] = tBest;
+  return best;
+}
+
+/** Free flight to hit[0] with Beer–Lambert absorption: false when the ray is absorbed on the way (counted). */
+function flight(): boolean {
+  const t = hit[0];
+  const o = medium * MEDIUM_STRIDE;
+  const alpha = media[o + M_ABSORPTION];
+  if (alpha > 0) {
+    const depth = alpha * t;
+    if (depth >= ray[6]) {
+      bins[media[o + M_BIN] | 0]++;
+      return false;
+    }
+    ray[6] -= depth;
+  }
+  ray[0] += t * ray[3];
+  ray[1] += t * ray[4];
+  ray[2] += t * ray[5];
+  return true;
+}
+
+/**
+ * A dielectric interface from medium `from` into `to`, with `normal` facing the incident side:
+ * decides reflection, total internal reflection or refraction, and replaces the ray's direction.
  */
 function interfaceEvent(from: number, to: number): number {
-  const etaI = indexOf[from];
-  const etaT = indexOf[to];
+  const etaI = media[from * MEDIUM_STRIDE + M_INDEX];
+  const etaT = media[to * MEDIUM_STRIDE + M_INDEX];
   let cosI = -(ray[3] * normal[0] + ray[4] * normal[1] + ray[5] * normal[2]);
   // A roundoff hit at t ≈ 0 can graze from the wrong side: treat as grazing incidence
   if (cosI < 0) cosI = 0;
@@ -208,42 +255,51 @@ function interfaceEvent(from: number, to: number): number {
     trackArgs[0] = cosI;
     trackArgs[1] = etaI;
     trackArgs[2] = etaT;
-    trackArgs[3] = nextFloat();
+    uniformsInto(u, 1);
+    trackArgs[3] = u[0];
     const code = trackedInterface(direction, normal, trackArgs);
     return code === TRACK_TRANSMITTED ? TRANSMITTED : code === TRACK_TIR ? TIR : REFLECTED;
   }
+  fin[0] = cosI;
+  fin[1] = etaI;
+  fin[2] = etaT;
   // Handle total internal reflection
-  if (!fresnelReal(cosI, etaI, etaT, fr)) {
+  if (!fresnelRealAt(fin, fr)) {
     reflectDirection(direction, direction, normal);
     return TIR;
   }
   // Reflect with probability R = (Rs + Rp)/2, else refract
-  if (nextFloat() < 0.5 * (fr[0] + fr[1])) {
+  uniformsInto(u, 1);
+  if (u[0] < 0.5 * (fr[0] + fr[1])) {
     reflectDirection(direction, direction, normal);
     return REFLECTED;
   }
-  refractDirection(direction, direction, normal, etaI, etaT);
+  refractDirectionAt(direction, direction, normal, fin);
   return TRANSMITTED;
 }
 
 /**
- * A dielectric interface on an axis-aligned face (the chip's faces), 'average' mode: the outward normal
- * is sign·ê_k, so cos θi = sign·d_k, reflection flips d_k, and refraction scales the two tangential
+ * The same interface on a box medium's face met from inside, 'average' mode: the outward normal is
+ * sign·ê_k, so cos θi = sign·d_k, reflection flips d_k, and refraction scales the two tangential
  * components by η = etaI/etaT and sets the normal one to sign·cos θt (vector Snell's law on an axis;
- * the result is unit length by construction: η² sin²θi + cos²θt = 1).
+ * unit length by construction: η² sin²θi + cos²θt = 1).
  */
-function axisFaceEvent(k: number, sign: number, from: number, to: number): number {
-  const etaI = indexOf[from];
-  const etaT = indexOf[to];
+function axisFaceEvent(k: number, from: number, to: number): number {
+  const etaI = media[from * MEDIUM_STRIDE + M_INDEX];
+  const etaT = media[to * MEDIUM_STRIDE + M_INDEX];
+  const sign = -normal[k];
   const j = 3 + k;
-  const cosI = sign * ray[j];
+  fin[0] = sign * ray[j];
+  fin[1] = etaI;
+  fin[2] = etaT;
   // Handle total internal reflection
-  if (!fresnelReal(cosI, etaI, etaT, fr)) {
+  if (!fresnelRealAt(fin, fr)) {
     ray[j] = -ray[j];
     return TIR;
   }
   // Reflect with probability R = (Rs + Rp)/2, else refract
-  if (nextFloat() < 0.5 * (fr[0] + fr[1])) {
+  uniformsInto(u, 1);
+  if (u[0] < 0.5 * (fr[0] + fr[1])) {
     ray[j] = -ray[j];
     return REFLECTED;
   }
@@ -255,193 +311,112 @@ function axisFaceEvent(k: number, sign: number, from: number, to: number): numbe
   return TRANSMITTED;
 }
 
-/** The same face event for a polarisation-tracked ray: a general interface with normal −sign·ê_k. */
-function trackedAxisFace(k: number, sign: number, from: number, to: number): number {
-  normal[0] = 0;
-  normal[1] = 0;
-  normal[2] = 0;
-  normal[k] = -sign;
-  return interfaceEvent(from, to);
+/** A new random linear polarisation for a ray whose direction was redrawn (a diffuse event depolarises). */
+function redrawPolarization(): void {
+  uniformsInto(trackArgs, 1);
+  launchPolarization(direction, trackArgs);
 }
 
-/** The base mirror met going down from medium `from`: true if reflected (direction replaced). */
-function baseEvent(from: number): boolean {
-  if (metalBase) {
-    mirrorIn[0] = -ray[5];
-    mirrorIn[1] = indexOf[from];
-    mirrorIn[2] = baseN;
-    mirrorIn[3] = baseK;
+/** Dielectric (Fresnel or textured) surface of bounds entry `entry`; `axis` ≥ 0 for a plane on an axis. */
+function dielectricEvent(entry: number, axis: number): void {
+  const side = entry & 1;
+  const o = (entry >> 1) * SURFACE_STRIDE;
+  const from = medium;
+  const to = (side === SIDE_FRONT ? surfaces[o + S_BEHIND] : surfaces[o + S_FRONT]) | 0;
+  const outcome =
+    !track && axis >= 0 && (media[from * MEDIUM_STRIDE + M_BOUNDARY] | 0) === BOUNDARY_BOX
+      ? axisFaceEvent(axis, from, to)
+      : interfaceEvent(from, to);
+  if (outcome === TIR) {
+    const c = surfaces[o + (side === SIDE_FRONT ? S_TIR_FRONT : S_TIR_BEHIND)] | 0;
+    if (c !== NONE) counters[c]++;
+  }
+  if (outcome === TRANSMITTED) medium = to;
+  if ((surfaces[o + S_BEHAVIOUR] | 0) === BEHAVIOUR_TEXTURED) textureEvent(o, outcome === TRANSMITTED ? -1 : 1);
+}
+
+/**
+ * Textured face at offset o after the Fresnel decision: with probability s a cosine-weighted
+ * direction into the half-space the ray goes into (`into` = +1 back to the incident side, −1 across).
+ * Draws no random number when s = 0.
+ */
+function textureEvent(o: number, into: number): void {
+  const s = surfaces[o + S_B];
+  if (!(s > 0)) return;
+  uniformsInto(u, 1);
+  if (!(u[0] < s)) return;
+  scatterAxis[0] = into * normal[0];
+  scatterAxis[1] = into * normal[1];
+  scatterAxis[2] = into * normal[2];
+  uniformsInto(u, 2);
+  lambertianDirection(direction, scatterAxis, u);
+  if (track) redrawPolarization();
+}
+
+/** Specular mirror at offset o: true if reflected (direction replaced), false if absorbed there. */
+function mirrorEvent(o: number, axis: number): boolean {
+  const reflectance = surfaces[o + S_B];
+  const metal = reflectance < 0;
+  if (metal) {
+    const cosI = -(ray[3] * normal[0] + ray[4] * normal[1] + ray[5] * normal[2]);
+    mirrorIn[0] = cosI < 0 ? 0 : cosI > 1 ? 1 : cosI;
+    mirrorIn[1] = media[medium * MEDIUM_STRIDE + M_INDEX];
+    mirrorIn[2] = surfaces[o + S_B + 1];
+    mirrorIn[3] = surfaces[o + S_B + 2];
     mirrorAmplitudesAt(mirrorIn, mirror);
   }
   if (track) {
-    normal[0] = 0;
-    normal[1] = 0;
-    normal[2] = 1;
-    trackArgs[0] = metalBase ? mirror[0] : -baseAmplitude;
-    trackArgs[1] = metalBase ? mirror[1] : 0;
-    trackArgs[2] = metalBase ? mirror[2] : baseAmplitude;
-    trackArgs[3] = metalBase ? mirror[3] : 0;
-    trackArgs[4] = nextFloat();
+    const amplitude = surfaces[o + S_B + 3];
+    trackArgs[0] = metal ? mirror[0] : -amplitude;
+    trackArgs[1] = metal ? mirror[1] : 0;
+    trackArgs[2] = metal ? mirror[2] : amplitude;
+    trackArgs[3] = metal ? mirror[3] : 0;
+    uniformsInto(u, 1);
+    trackArgs[4] = u[0];
     return trackedMirror(direction, normal, trackArgs);
   }
-  const R = metalBase ? 0.5 * (mirror[4] + mirror[5]) : baseReflectance;
-  if (!(nextFloat() < R)) return false;
-  ray[5] = -ray[5];
+  const R = metal ? 0.5 * (mirror[4] + mirror[5]) : reflectance;
+  uniformsInto(u, 1);
+  if (!(u[0] < R)) return false;
+  if (axis >= 0) ray[3 + axis] = -ray[3 + axis];
+  else reflectDirection(direction, direction, normal);
   return true;
 }
 
-/** One step inside the chip: to the next wall, with absorption on the way; the base reflects here. */
-function stepInChip(): number {
-  const face = boxExit(ray, box, hit);
-  if (face === SURFACE_NONE) return GEOMETRY_ERROR;
-  const t = hit[0];
-  // Beer–Lambert: absorbed on this segment if the optical depth runs out
-  const alpha = alphaOf[CHIP];
-  if (alpha > 0) {
-    const depth = alpha * t;
-    if (depth >= ray[6]) return ABSORBED_CHIP;
-    ray[6] -= depth;
-  }
-  ray[0] += t * ray[3];
-  ray[1] += t * ray[4];
-  ray[2] += t * ray[5];
-
-  // Base under the chip
-  if (face === CHIP_BOTTOM) {
-    ray[2] = 0;
-    return baseEvent(CHIP) ? GO_ON : ABSORBED_BASE;
-  }
-
-  surface = face;
-  return AT_SURFACE;
+/** Lambertian reflector at offset o: true if reflected into a cosine-weighted direction. */
+function diffuseEvent(o: number): boolean {
+  uniformsInto(u, 1);
+  if (!(u[0] < surfaces[o + S_B])) return false;
+  uniformsInto(u, 2);
+  lambertianDirection(direction, normal, u);
+  if (track) redrawPolarization();
+  return true;
 }
 
-/** The event at the chip wall the last chip step reached (from inside the chip). */
-function chipWallEvent(): number {
-  const face = surface;
-  // Snap onto the face; its outward normal is sign·ê_k
-  let k = 2;
-  let sign = 1;
-  if (face === CHIP_TOP) {
-    ray[2] = box[2];
-  } else if (face === CHIP_X_POS) {
-    ray[0] = box[0];
-    k = 0;
-  } else if (face === CHIP_X_NEG) {
-    ray[0] = -box[0];
-    k = 0;
-    sign = -1;
-  } else if (face === CHIP_Y_POS) {
-    ray[1] = box[1];
-    k = 1;
-  } else {
-    ray[1] = -box[1];
-    k = 1;
-    sign = -1;
-  }
-  const outcome = track ? trackedAxisFace(k, sign, CHIP, aroundChip) : axisFaceEvent(k, sign, CHIP, aroundChip);
-  if (outcome === TIR) chipTir++;
-  if (outcome !== TRANSMITTED) return GO_ON;
-  if (shape !== SHAPE_NONE) return ENTER_ENCAPSULANT;
-  return face === CHIP_TOP ? ESCAPED_CHIP_TOP : ESCAPED_CHIP_SIDE;
+/** Absorbed at the surface of bounds entry `entry` (mirror, diffuse reflector, absorber): counted. */
+function absorbedAt(entry: number): void {
+  bins[surfaces[(entry >> 1) * SURFACE_STRIDE + S_BIN_ABSORBED] | 0]++;
 }
 
-/** One step in the encapsulant: to the nearest of chip, base plane and outer surface; the base reflects here. */
-function stepInEncapsulant(): number {
-  let t = Infinity;
-  let hitSurface = boxEntry(ray, box, hit);
-  if (hitSurface !== SURFACE_NONE) t = hit[0];
-  const dz = ray[5];
-  if (dz < 0) {
-    const tBase = -ray[2] / dz;
-    if (tBase < t) {
-      t = tBase;
-      hitSurface = BASE;
-    }
+/**
+ * The event at the surface of bounds entry `entry` the flight reached: false when the ray ends there
+ * (counted). Each behaviour is its own function taking only small integers, so that each is
+ * optimised on its own and keeps the Fresnel and random-number functions inlined whole (a call the
+ * engine does not inline boxes every floating-point argument and result).
+ */
+function surfaceEvent(entry: number): boolean {
+  const s = entry >> 1;
+  const o = s * SURFACE_STRIDE;
+  lastSurface = s;
+  const axis = surfaceNormal(surfaces, o, entry & 1, ray, normal);
+  const behaviour = surfaces[o + S_BEHAVIOUR] | 0;
+  if (behaviour === BEHAVIOUR_FRESNEL || behaviour === BEHAVIOUR_TEXTURED) {
+    dielectricEvent(entry, axis);
+    return true;
   }
-  if (shape === SHAPE_DOME) {
-    spheroidExit(ray, shell, hit);
-    if (hit[0] < t) {
-      t = hit[0];
-      hitSurface = DOME;
-    }
-  } else {
-    const wall = cylinderExit(ray, shell, hit);
-    if (wall !== SURFACE_NONE && hit[0] < t) {
-      t = hit[0];
-      hitSurface = wall;
-    }
-  }
-  if (hitSurface === SURFACE_NONE || !(t < Infinity)) return GEOMETRY_ERROR;
-  // Beer–Lambert in the encapsulant
-  const alpha = alphaOf[ENCAPSULANT];
-  if (alpha > 0) {
-    const depth = alpha * t;
-    if (depth >= ray[6]) return ABSORBED_ENCAPSULANT;
-    ray[6] -= depth;
-  }
-  ray[0] += t * ray[3];
-  ray[1] += t * ray[4];
-  ray[2] += t * dz;
-
-  // Base plane beside the chip
-  if (hitSurface === BASE) {
-    ray[2] = 0;
-    return baseEvent(ENCAPSULANT) ? GO_ON : ABSORBED_BASE;
-  }
-  surface = hitSurface;
-  return AT_SURFACE;
-}
-
-/** The event at the surface the last encapsulant step reached: a chip face or the outer surface. */
-function encapsulantSurfaceEvent(): number {
-  const hitSurface = surface;
-  normal[0] = 0;
-  normal[1] = 0;
-  normal[2] = 0;
-  // Chip face seen from outside: snap onto it; the face's outward normal faces the ray
-  if (hitSurface <= CHIP_Y_NEG) {
-    if (hitSurface === CHIP_TOP) {
-      ray[2] = box[2];
-      normal[2] = 1;
-    } else if (hitSurface === CHIP_X_POS) {
-      ray[0] = box[0];
-      normal[0] = 1;
-    } else if (hitSurface === CHIP_X_NEG) {
-      ray[0] = -box[0];
-      normal[0] = -1;
-    } else if (hitSurface === CHIP_Y_POS) {
-      ray[1] = box[1];
-      normal[1] = 1;
-    } else {
-      ray[1] = -box[1];
-      normal[1] = -1;
-    }
-    return interfaceEvent(ENCAPSULANT, CHIP) === TRANSMITTED ? ENTER_CHIP : GO_ON;
-  }
-
-  // Outer surface, met from inside: the inward unit normal faces the ray
-  if (hitSurface === DOME) {
-    // outward ∇(x²/R² + y²/R² + z²/h²) ∝ (x/R², y/R², z/h²)
-    const gx = ray[0] * invR2;
-    const gy = ray[1] * invR2;
-    const gz = ray[2] * invH2;
-    const inv = -1 / Math.sqrt(gx * gx + gy * gy + gz * gz);
-    normal[0] = gx * inv;
-    normal[1] = gy * inv;
-    normal[2] = gz * inv;
-  } else if (hitSurface === CYLINDER_SIDE) {
-    const inv = -1 / Math.sqrt(ray[0] * ray[0] + ray[1] * ray[1]);
-    normal[0] = ray[0] * inv;
-    normal[1] = ray[1] * inv;
-  } else {
-    ray[2] = shell[1];
-    normal[2] = -1;
-  }
-  const outcome = interfaceEvent(ENCAPSULANT, OUTSIDE);
-  if (outcome === TIR) outerTir++;
-  if (outcome !== TRANSMITTED) return GO_ON;
-  return hitSurface === DOME ? ESCAPED_DOME : hitSurface === CYLINDER_TOP ? ESCAPED_CYLINDER_TOP : ESCAPED_CYLINDER_SIDE;
+  if (behaviour === BEHAVIOUR_MIRROR ? mirrorEvent(o, axis) : behaviour === BEHAVIOUR_DIFFUSE ? diffuseEvent(o) : false) return true;
+  absorbedAt(entry);
+  return false;
 }
 
 /** Histogram bin of an escape direction: ⌊θ in degrees⌋, θ = acos(dz), clamped to 0..179. */
@@ -452,61 +427,95 @@ function polarBin(): number {
   return bin < POLAR_BINS ? bin : POLAR_BINS - 1;
 }
 
-// Extra slots of `fates` filled by the ray loop
-const LOST = 12;
-const ESCAPED_BELOW = 13;
-const EVENTS = 14;
+/** The ray reached the bounding sphere: escaped, credited to the last surface it met. */
+function escape(histogram: Float64Array): void {
+  const bin = lastSurface === NONE ? NONE : surfaces[lastSurface * SURFACE_STRIDE + S_BIN_ESCAPED] | 0;
+  if (bin === NONE) {
+    bins[BIN_GEOMETRY_ERROR]++;
+    return;
+  }
+  bins[bin]++;
+  histogram[polarBin()]++;
+  if (ray[5] < 0) counters[COUNTER_ESCAPED_BELOW]++;
+}
 
 /**
- * The ray loop proper: launches `rays` rays and follows each to its end, counting fates in `fates`.
- * Kept apart from the tally bookkeeping so the optimised loop never meets code it has not yet run
- * (which would throw it back to the interpreter at the end of every chunk).
+ * The ray loop proper: launches `rays` rays and follows each to its end, counting fates in `bins`.
+ * Kept apart from the tally bookkeeping so the optimised loop never meets code it has not yet run.
  */
 function runRays(rays: number, maxEvents: number, histogram: Float64Array, onProgress?: (raysDone: number) => void): void {
   for (let i = 0; i < rays; i++) {
     if (onProgress !== undefined && i > 0 && i % PROGRESS_EVERY === 0) onProgress(i);
     launch();
-    let inChip = true;
     let rayEvents = 0;
     for (;;) {
+      const entry = nearestBoundary();
+      // Nothing ahead in the outside medium: the bounding sphere
+      if (entry === NONE && medium === outside) {
+        escape(histogram);
+        break;
+      }
       // Event cap: the ray is lost
       if (rayEvents === maxEvents) {
-        fates[LOST]++;
+        bins[BIN_EVENT_CAP]++;
         break;
       }
       rayEvents++;
-      let step = inChip ? stepInChip() : stepInEncapsulant();
-      if (step === AT_SURFACE) step = inChip ? chipWallEvent() : encapsulantSurfaceEvent();
-      if (step === GO_ON) continue;
-      if (step === ENTER_ENCAPSULANT) {
-        inChip = false;
-        continue;
+      if (entry === NONE) {
+        bins[BIN_GEOMETRY_ERROR]++;
+        break;
       }
-      if (step === ENTER_CHIP) {
-        inChip = true;
-        continue;
-      }
-      // The ray ends here: one ledger bin
-      fates[step]++;
-      if (step <= ESCAPED_CYLINDER_SIDE) {
-        histogram[polarBin()]++;
-        if (ray[5] < 0) fates[ESCAPED_BELOW]++;
-      }
-      break;
+      if (!flight()) break;
+      if (!surfaceEvent(entry)) break;
     }
-    fates[EVENTS] += rayEvents;
+    counters[COUNTER_EVENTS] += rayEvents;
   }
 }
 
 /**
- * Traces `rays` rays of chunk `chunkIndex` and adds their fates to `tally`. The generator is seeded
- * from (seed, chunkIndex), so a chunk gives the same counts on any thread. Inputs are trusted: check
- * them first with validateTracePackage / validateTraceOptions.
+ * Traces `rays` rays of chunk `chunkIndex` through a compiled scene and adds their fates to `tally`
+ * (the named bins to tally.parts, and each to its older fixed count). The generator is seeded from
+ * (seed, chunkIndex), so a chunk gives the same counts on any thread.
  * @param rays rays in this chunk, integer ≥ 0
  * @param seed unsigned 32-bit seed of the whole run
- * @param maxEvents surface events after which a ray is counted lost (default 1000)
+ * @param maxEvents surface events after which a ray is counted lost
  * @param onProgress called with the rays done so far in this chunk, every 2048 rays
  * @returns tally
+ */
+export function traceSceneChunk(
+  scene: CompiledScene,
+  chunkIndex: number,
+  rays: number,
+  seed: number,
+  tally: Tally,
+  maxEvents: number = DEFAULT_MAX_EVENTS,
+  onProgress?: (raysDone: number) => void
+): Tally {
+  configure(scene);
+  seedChunk(seed, chunkIndex);
+  runRays(rays, maxEvents, tally.polarHistogram, onProgress);
+
+  tally.launched += rays;
+  for (let i = 0; i < bins.length; i++) {
+    const n = bins[i];
+    const name = scene.binNames[i];
+    tally.parts[name] = (tally.parts[name] ?? 0) + n;
+    tally[scene.binGroups[i]] += n;
+    const legacy = scene.binLegacyEscape[i];
+    if (legacy !== null) tally[legacy] += n;
+  }
+  tally.geometryErrors += bins[BIN_GEOMETRY_ERROR];
+  tally.events += counters[COUNTER_EVENTS];
+  tally.escapedBelowHorizon += counters[COUNTER_ESCAPED_BELOW];
+  tally.outerSurfaceTir += counters[COUNTER_TIR_OUTER];
+  tally.chipFaceTir += counters[COUNTER_TIR_CHIP];
+  return tally;
+}
+
+/**
+ * Traces `rays` rays of chunk `chunkIndex` through package `pkg` (compiled to its scene) and adds
+ * their fates to `tally`. Inputs are trusted: check them first with validateTracePackage /
+ * validateTraceOptions.
  */
 export function traceChunk(
   pkg: TracePackage,
@@ -517,34 +526,5 @@ export function traceChunk(
   maxEvents: number = DEFAULT_MAX_EVENTS,
   onProgress?: (raysDone: number) => void
 ): Tally {
-  configure(pkg);
-  fates.fill(0);
-  outerTir = 0;
-  chipTir = 0;
-  seedChunk(seed, chunkIndex);
-  runRays(rays, maxEvents, tally.polarHistogram, onProgress);
-
-  const escChipTop = fates[ESCAPED_CHIP_TOP];
-  const escChipSide = fates[ESCAPED_CHIP_SIDE];
-  const escDome = fates[ESCAPED_DOME];
-  const escCylTop = fates[ESCAPED_CYLINDER_TOP];
-  const escCylSide = fates[ESCAPED_CYLINDER_SIDE];
-  const geometryErrors = fates[GEOMETRY_ERROR];
-  tally.launched += rays;
-  tally.escaped += escChipTop + escChipSide + escDome + escCylTop + escCylSide;
-  tally.escapedBelowHorizon += fates[ESCAPED_BELOW];
-  tally.absorbedChip += fates[ABSORBED_CHIP];
-  tally.absorbedEncapsulant += fates[ABSORBED_ENCAPSULANT];
-  tally.absorbedBase += fates[ABSORBED_BASE];
-  tally.lost += fates[LOST] + geometryErrors;
-  tally.geometryErrors += geometryErrors;
-  tally.events += fates[EVENTS];
-  tally.escapedChipTop += escChipTop;
-  tally.escapedChipSide += escChipSide;
-  tally.escapedDome += escDome;
-  tally.escapedCylinderTop += escCylTop;
-  tally.escapedCylinderSide += escCylSide;
-  tally.outerSurfaceTir += outerTir;
-  tally.chipFaceTir += chipTir;
-  return tally;
+  return traceSceneChunk(compileScene(packageScene(pkg)), chunkIndex, rays, seed, tally, maxEvents, onProgress);
 }

@@ -19,3 +19,15 @@ export function withEncapsulant(pkg: TracePackage, encapsulant: TracePackage['en
 
 /** The bare chip: no encapsulant. */
 export const NO_ENCAPSULANT: TracePackage['encapsulant'] = { shape: 'none', radiusMm: 1, heightMm: 1, n: 1, absorptionPerMm: 0 };
+
+/** The mid-power cup of the bench: 2.6 mm floor, 3.0 mm top, 0.8 mm deep, white diffuse wall 0.93, silvered floor 0.95, flat fill. */
+export function cupPackage(chip: TracePackage['chip']): TracePackage {
+  return {
+    chip,
+    base: { kind: 'reflectance', reflectance: 0.95 },
+    encapsulant: { shape: 'dome', radiusMm: 1.4, heightMm: 1, n: 1.41, absorptionPerMm: 0.001 },
+    outsideN: 1,
+    polarization: 'average',
+    body: { kind: 'cup', floorRadiusMm: 1.3, topRadiusMm: 1.5, depthMm: 0.8, wallFinish: 'diffuse', wallReflectance: 0.93, fill: 'flat' }
+  };
+}

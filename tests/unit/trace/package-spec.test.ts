@@ -99,3 +99,35 @@ describe('emitterHeightMm(chip)', () => {
     expect(emitterHeightMm({ ...chip, emitterZMm: undefined })).toBe(0.075);
   });
 });
+
+describe('validateTracePackage(pkg): bodies, layers, mirror, texture', () => {
+  const cupBody = { kind: 'cup', floorRadiusMm: 1.3, topRadiusMm: 1.5, depthMm: 0.8, wallFinish: 'diffuse', wallReflectance: 0.93, fill: 'flat' } as const;
+  const layered = {
+    ...domePackage().chip,
+    heightMm: 0.155,
+    layers: [
+      { name: 'GaN', thicknessMm: 0.005, n: 2.45, absorptionPerMm: 0.5 },
+      { name: 'sapphire', thicknessMm: 0.15, n: 1.78, absorptionPerMm: 0 }
+    ],
+    emitterZMm: 0.002
+  };
+  it.each([
+    ['a chip wider than the cup floor', { body: { ...cupBody, floorRadiusMm: 0.6 } }, /body\.floorRadiusMm must be greater than the chip's half-diagonal 0\.707107 mm/],
+    ['a chip taller than the cup', { body: { ...cupBody, depthMm: 0.1 } }, /body\.depthMm must be greater than chip\.heightMm = 0\.15 mm/],
+    ['a top narrower than the floor', { body: { ...cupBody, topRadiusMm: 1 } }, /body\.topRadiusMm must be a number in \[1\.3, 10000\]/],
+    ['a dome wider than the rim', { body: { ...cupBody, fill: 'dome' }, encapsulant: { ...domePackage().encapsulant, radiusMm: 2 } }, /encapsulant\.radiusMm \(dome on the cup rim, at most body\.topRadiusMm\) must be a number in \[0\.000001, 1\.5\]/],
+    ['a wall reflectance above 1', { body: { ...cupBody, wallReflectance: 1.2 } }, /body\.wallReflectance must be a number in \[0, 1\]/],
+    ['a texture fraction above 1', { chip: { ...domePackage().chip, topScatter: 1.5 } }, /chip\.topScatter must be a number in \[0, 1\]/],
+    ['a layer of zero thickness', { chip: { ...layered, layers: [{ ...layered.layers[0], thicknessMm: 0 }, layered.layers[1]] } }, /chip\.layers\[0\]\.thicknessMm must be a number in/],
+    ['an emitter outside its layer', { chip: { ...layered, emitterZMm: 0.1 } }, /chip\.emitterZMm \(inside the emitting layer\) must be a number in \[0, 0\.005\]/],
+    ['layers not adding up to the chip height', { chip: { ...layered, heightMm: 0.2 } }, /chip\.heightMm must equal the layers' total thickness 0\.155 mm/],
+    ['a diffuse metal base', { base: { kind: 'metal', n: 0.5, k: 4 }, baseFinish: 'diffuse' }, /baseFinish 'diffuse' needs base\.kind 'reflectance'/],
+    ['a chip mirror reflectance below 0', { chip: { ...domePackage().chip, mirror: { kind: 'reflectance', reflectance: -0.1 } } }, /chip\.mirror\.reflectance must be a number in \[0, 1\]/]
+  ])('rejects %s with a message naming the field and range', (_, change, message) => {
+    expect(() => validateTracePackage({ ...domePackage(), ...change } as TracePackage)).toThrow(message);
+  });
+
+  it('accepts a layered chip in a flat-filled cup', () => {
+    expect(() => validateTracePackage({ ...domePackage(), chip: layered, body: cupBody })).not.toThrow();
+  });
+});

@@ -1,0 +1,272 @@
+/**
+ * Packs a scene description (scene.ts) into flat typed arrays for the ray loop, once per run: a
+ * medium table, a surface table (layouts in scene-layout.ts), each medium's list of bounding
+ * surfaces, and the ledger's named bins.
+ *
+ * Ledger bins, in order: 'lost:event cap', 'lost:geometry error', then 'medium:<name>' for each
+ * medium that absorbs (the outside never does), 'surface:<bin>' for each surface that can absorb
+ * (mirror, diffuse, absorber; surfaces naming the same bin share it) and 'escaped:<bin>' for each
+ * surface bordering the outside medium. A ray's escape is credited to the last surface it met.
+ */
+import {
+  BEHAVIOUR_ABSORBER,
+  BEHAVIOUR_DIFFUSE,
+  BEHAVIOUR_FRESNEL,
+  BEHAVIOUR_MIRROR,
+  BEHAVIOUR_TEXTURED,
+  BOUNDARY_BOX,
+  BOUNDARY_LIST,
+  COUNTER_TIR_CHIP,
+  COUNTER_TIR_OUTER,
+  MEDIUM_STRIDE,
+  M_ABSORPTION,
+  M_ASYMMETRY,
+  M_BIN,
+  M_BOUNDARY,
+  M_BOX_A,
+  M_BOX_B,
+  M_BOX_FACES,
+  M_BOX_Z0,
+  M_BOX_Z1,
+  M_INDEX,
+  M_IS_CHIP,
+  M_LIST_COUNT,
+  M_LIST_START,
+  M_PHOSPHOR,
+  M_SCATTERING,
+  NONE,
+  SHAPE_CYLINDER,
+  SHAPE_DISC,
+  SHAPE_FRUSTUM,
+  SHAPE_RECT,
+  SHAPE_SPHEROID_CAP,
+  SIDE_BEHIND,
+  SIDE_FRONT,
+  SURFACE_STRIDE,
+  S_B,
+  S_BEHAVIOUR,
+  S_BEHIND,
+  S_BIN_ABSORBED,
+  S_BIN_ESCAPED,
+  S_FRONT,
+  S_P,
+  S_SHAPE,
+  S_TIR_BEHIND,
+  S_TIR_FRONT
+} from './scene-layout';
+import type { LegacyEscape, SceneDescription, SceneSurface, Shape } from './scene';
+
+/** Which count of the older fixed ledger (Tally fields) a bin also adds to. */
+export type LedgerGroup = 'escaped' | 'absorbedChip' | 'absorbedEncapsulant' | 'absorbedBase' | 'lost';
+
+export interface CompiledScene {
+  /** Medium records, MEDIUM_STRIDE doubles each. */
+  media: Float64Array;
+  /** Surface records, SURFACE_STRIDE doubles each. */
+  surfaces: Float64Array;
+  /** Bounds entries (surface·2 + side), each medium's run at [M_LIST_START, + M_LIST_COUNT). */
+  bounds: Int32Array;
+  outside: number;
+  emitterMedium: number;
+  emitterVolume: boolean;
+  emitterZ: number;
+  track: boolean;
+  /** True when some medium absorbs (each ray then draws an optical depth). */
+  absorbing: boolean;
+  binNames: string[];
+  binGroups: LedgerGroup[];
+  binLegacyEscape: (LegacyEscape | null)[];
+  /** Medium and surface names by index, for messages and the drawing. */
+  mediumNames: string[];
+  surfaceNames: string[];
+}
+
+/**
+ * Writes a shape's kind and parameters into a surface record at offset o (layouts in scene-layout.ts).
+ * @returns out
+ */
+export function packShape(sh: Shape, out: Float64Array, o: number): Float64Array {
+  const p = o + S_P;
+  switch (sh.kind) {
+    case 'rect':
+      out[o + S_SHAPE] = SHAPE_RECT;
+      out.set([sh.axis, sh.at, sh.normalSign, sh.uMin, sh.uMax, sh.vMin, sh.vMax], p);
+      break;
+    case 'disc':
+      out[o + S_SHAPE] = SHAPE_DISC;
+      out.set([sh.at, sh.normalSign, sh.rInner * sh.rInner, sh.rOuter * sh.rOuter], p);
+      break;
+    case 'cylinder':
+      out[o + S_SHAPE] = SHAPE_CYLINDER;
+      out.set([sh.radius, sh.z0, sh.z1], p);
+      break;
+    case 'frustum':
+      out[o + S_SHAPE] = SHAPE_FRUSTUM;
+      out.set([sh.r0, sh.z0, sh.r1, sh.z1, (sh.r1 - sh.r0) / (sh.z1 - sh.z0)], p);
+      break;
+    case 'spheroid-cap':
+      out[o + S_SHAPE] = SHAPE_SPHEROID_CAP;
+      out.set([sh.radius, sh.height, sh.zCentre, 1 / (sh.radius * sh.radius), 1 / (sh.height * sh.height)], p);
+      break;
+  }
+  return out;
+}
+
+function absorbs(s: SceneSurface): boolean {
+  const k = s.behaviour.kind;
+  return k === 'mirror' || k === 'diffuse' || k === 'absorber';
+}
+
+/**
+ * Compiles a scene description. Throws an Error naming the problem when the description is not
+ * consistent (unknown medium, duplicate name, a box face that does not bound its box medium): those
+ * are builder mistakes, not user input.
+ */
+export function compileScene(scene: SceneDescription): CompiledScene {
+  const mediumIndex = new Map<string, number>();
+  scene.media.forEach((m, i) => {
+    if (mediumIndex.has(m.name)) throw new Error(`scene: duplicate medium name '${m.name}'`);
+    mediumIndex.set(m.name, i);
+  });
+  const surfaceIndex = new Map<string, number>();
+  scene.surfaces.forEach((s, i) => {
+    if (surfaceIndex.has(s.name)) throw new Error(`scene: duplicate surface name '${s.name}'`);
+    surfaceIndex.set(s.name, i);
+  });
+  const mediumOf = (name: string | null, where: string): number => {
+    if (name === null) return NONE;
+    const i = mediumIndex.get(name);
+    if (i === undefined) throw new Error(`scene: ${where} names unknown medium '${name}'`);
+    return i;
+  };
+  const outside = mediumOf(scene.outside, 'outside');
+
+  // Ledger bins; the first two are BIN_EVENT_CAP and BIN_GEOMETRY_ERROR (scene-layout.ts)
+  const binNames: string[] = ['lost:event cap', 'lost:geometry error'];
+  const binGroups: LedgerGroup[] = ['lost', 'lost'];
+  const binLegacyEscape: (LegacyEscape | null)[] = [null, null];
+  const binOf = (name: string, group: LedgerGroup, legacy: LegacyEscape | null = null): number => {
+    const found = binNames.indexOf(name);
+    if (found >= 0) return found;
+    binNames.push(name);
+    binGroups.push(group);
+    binLegacyEscape.push(legacy);
+    return binNames.length - 1;
+  };
+
+  // Media
+  const nm = scene.media.length;
+  const media = new Float64Array(nm * MEDIUM_STRIDE);
+  let absorbing = false;
+  scene.media.forEach((m, i) => {
+    const o = i * MEDIUM_STRIDE;
+    media[o + M_INDEX] = m.n;
+    media[o + M_ABSORPTION] = i === outside ? 0 : m.absorptionPerMm;
+    media[o + M_SCATTERING] = 0;
+    media[o + M_ASYMMETRY] = 0;
+    media[o + M_PHOSPHOR] = NONE;
+    media[o + M_IS_CHIP] = m.role === 'chip' ? 1 : 0;
+    if (i !== outside && m.absorptionPerMm > 0) {
+      absorbing = true;
+      media[o + M_BIN] = binOf(`medium:${m.name}`, m.role === 'chip' ? 'absorbedChip' : 'absorbedEncapsulant');
+    } else {
+      media[o + M_BIN] = NONE;
+    }
+    media[o + M_BOUNDARY] = m.box ? BOUNDARY_BOX : BOUNDARY_LIST;
+  });
+
+  // Surfaces
+  const ns = scene.surfaces.length;
+  const surfaces = new Float64Array(ns * SURFACE_STRIDE);
+  const lists: number[][] = scene.media.map(() => []);
+  scene.surfaces.forEach((s, i) => {
+    const o = i * SURFACE_STRIDE;
+    packShape(s.shape, surfaces, o);
+    const front = mediumOf(s.front, `surface '${s.name}'`);
+    const behind = mediumOf(s.behind, `surface '${s.name}'`);
+    surfaces[o + S_FRONT] = front;
+    surfaces[o + S_BEHIND] = behind;
+    const b = s.behaviour;
+    const q = o + S_B;
+    switch (b.kind) {
+      case 'fresnel':
+        surfaces[o + S_BEHAVIOUR] = BEHAVIOUR_FRESNEL;
+        break;
+      case 'textured':
+        surfaces[o + S_BEHAVIOUR] = BEHAVIOUR_TEXTURED;
+        surfaces[q] = b.scatteredFraction;
+        break;
+      case 'mirror':
+        surfaces[o + S_BEHAVIOUR] = BEHAVIOUR_MIRROR;
+        if (b.mirror.kind === 'metal') surfaces.set([-1, b.mirror.n, b.mirror.k, 0], q);
+        else surfaces.set([b.mirror.reflectance, 1, 0, Math.sqrt(b.mirror.reflectance)], q);
+        break;
+      case 'diffuse':
+        surfaces[o + S_BEHAVIOUR] = BEHAVIOUR_DIFFUSE;
+        surfaces[q] = b.reflectance;
+        break;
+      case 'absorber':
+        surfaces[o + S_BEHAVIOUR] = BEHAVIOUR_ABSORBER;
+        break;
+    }
+    const dielectric = b.kind === 'fresnel' || b.kind === 'textured';
+    if (dielectric && (front === NONE || behind === NONE)) {
+      throw new Error(`scene: surface '${s.name}' is an interface and needs a medium on both sides`);
+    }
+    surfaces[o + S_BIN_ABSORBED] = absorbs(s) ? binOf(`surface:${s.absorbedBin ?? s.name}`, 'absorbedBase') : NONE;
+    surfaces[o + S_BIN_ESCAPED] =
+      front === outside || behind === outside ? binOf(`escaped:${s.escapedBin ?? s.name}`, 'escaped', s.legacyEscape ?? null) : NONE;
+    // Debug TIR counters: from inside a chip layer, or from the encapsulant into the outside
+    const tirFrom = (from: number, to: number) =>
+      from === NONE ? NONE : media[from * MEDIUM_STRIDE + M_IS_CHIP] === 1 ? COUNTER_TIR_CHIP : to === outside ? COUNTER_TIR_OUTER : NONE;
+    surfaces[o + S_TIR_FRONT] = tirFrom(front, behind);
+    surfaces[o + S_TIR_BEHIND] = tirFrom(behind, front);
+    if (front !== NONE && !scene.media[front].box) lists[front].push(2 * i + SIDE_FRONT);
+    if (behind !== NONE && !scene.media[behind].box) lists[behind].push(2 * i + SIDE_BEHIND);
+  });
+
+  // Box media: their six faces, by the side the box lies on
+  scene.media.forEach((m, i) => {
+    if (!m.box) return;
+    const o = i * MEDIUM_STRIDE;
+    media[o + M_BOX_A] = m.box.a;
+    media[o + M_BOX_B] = m.box.b;
+    media[o + M_BOX_Z0] = m.box.z0;
+    media[o + M_BOX_Z1] = m.box.z1;
+    m.box.faces.forEach((faceName, f) => {
+      const s = surfaceIndex.get(faceName);
+      if (s === undefined) throw new Error(`scene: box medium '${m.name}' names unknown face '${faceName}'`);
+      const front = surfaces[s * SURFACE_STRIDE + S_FRONT];
+      const behind = surfaces[s * SURFACE_STRIDE + S_BEHIND];
+      if (front !== i && behind !== i) throw new Error(`scene: face '${faceName}' does not bound box medium '${m.name}'`);
+      media[o + M_BOX_FACES + f] = 2 * s + (front === i ? SIDE_FRONT : SIDE_BEHIND);
+    });
+  });
+
+  // Bounds lists, one run per medium
+  const flat: number[] = [];
+  lists.forEach((list, i) => {
+    media[i * MEDIUM_STRIDE + M_LIST_START] = flat.length;
+    media[i * MEDIUM_STRIDE + M_LIST_COUNT] = list.length;
+    flat.push(...list);
+  });
+
+  const emitterMedium = mediumOf(scene.emitter.medium, 'emitter');
+  if (!scene.media[emitterMedium].box) throw new Error(`scene: the emitter's medium '${scene.emitter.medium}' must be a box`);
+  return {
+    media,
+    surfaces,
+    bounds: Int32Array.from(flat),
+    outside,
+    emitterMedium,
+    emitterVolume: scene.emitter.mode === 'volume',
+    emitterZ: scene.emitter.z,
+    track: scene.polarization === 'track',
+    absorbing,
+    binNames,
+    binGroups,
+    binLegacyEscape,
+    mediumNames: scene.media.map((m) => m.name),
+    surfaceNames: scene.surfaces.map((s) => s.name)
+  };
+}

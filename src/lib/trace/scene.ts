@@ -1,0 +1,144 @@
+/**
+ * The readable description of a traced scene: named media (each a solid region of one material),
+ * named surfaces (a shape, the medium on each side, an optical behaviour) and the emitter. Builders
+ * (body-*.ts, package-scene.ts) make it from a package and own its fit checks; compile-scene.ts packs
+ * it into flat typed arrays for the ray loop; the drawing and the JSON echo read it as it is.
+ *
+ * Units mm, z up, the floor (or base plane) at z = 0, every body centred on the z axis.
+ * A surface's normal defines its two sides: `front` is the medium the normal points into, `behind`
+ * the other; null means no medium (an opaque body behind a mirror, diffuse reflector or absorber).
+ * A face shared by two bodies (two chip layers, chip and encapsulant) is one surface with a
+ * different medium on each side.
+ */
+
+/** Axis-aligned rectangle in the plane x_axis = at, normal along ±axis, bounds on the two other axes in order (x, y, z without `axis`). */
+export interface RectShape {
+  kind: 'rect';
+  axis: 0 | 1 | 2;
+  at: number;
+  /** +1: the normal points along +axis; −1: along −axis. */
+  normalSign: 1 | -1;
+  uMin: number;
+  uMax: number;
+  vMin: number;
+  vMax: number;
+}
+
+/** Annulus rInner ≤ r ≤ rOuter in the plane z = at (a disc for rInner = 0, a whole plane for rOuter = ∞), normal ±z. */
+export interface DiscShape {
+  kind: 'disc';
+  at: number;
+  normalSign: 1 | -1;
+  rInner: number;
+  rOuter: number;
+}
+
+/** Cylinder wall x² + y² = r², z0 ≤ z ≤ z1; normal points away from the axis. */
+export interface CylinderShape {
+  kind: 'cylinder';
+  radius: number;
+  z0: number;
+  z1: number;
+}
+
+/** Cone frustum wall from radius r0 at z0 to r1 at z1 (z1 > z0, r0, r1 > 0); normal points away from the axis. */
+export interface FrustumShape {
+  kind: 'frustum';
+  r0: number;
+  z0: number;
+  r1: number;
+  z1: number;
+}
+
+/**
+ * Upper cap z ≥ zCentre of the spheroid x²/R² + y²/R² + (z − zCentre)²/h² = 1; normal points outward.
+ */
+export interface SpheroidCapShape {
+  kind: 'spheroid-cap';
+  radius: number;
+  height: number;
+  zCentre: number;
+}
+
+/*
+ * Reserved for the beam-optics bodies: a surface of revolution from a sampled profile r(z) (points
+ * (z_i, r_i), z increasing, linear between them), normal away from the axis. Packed as shape kind
+ * SHAPE_REVOLUTION with the sample count and an offset into a per-scene profile table. It is not a
+ * member of `Shape` until its intersection (per-segment cone frustums, nearest valid root) exists.
+ */
+
+export type Shape = RectShape | DiscShape | CylinderShape | FrustumShape | SpheroidCapShape;
+
+/** A specular mirror: fixed reflectance R, or a metal by its n + ik (R at the angle from the medium in front). */
+export type MirrorSpec = { kind: 'reflectance'; reflectance: number } | { kind: 'metal'; n: number; k: number };
+
+export type Behaviour =
+  /** Dielectric interface between `front` and `behind`: Fresnel reflection or refraction. */
+  | { kind: 'fresnel' }
+  /**
+   * Textured (partly diffuse) dielectric interface: the Fresnel decision, then with probability
+   * `scatteredFraction` the new direction is replaced by a cosine-weighted one about the normal, in
+   * the half-space the ray goes into.
+   */
+  | { kind: 'textured'; scatteredFraction: number }
+  | { kind: 'mirror'; mirror: MirrorSpec }
+  /** Lambertian reflector: reflects with probability R into a cosine-weighted direction, else absorbs. */
+  | { kind: 'diffuse'; reflectance: number }
+  | { kind: 'absorber' };
+
+/** What a medium is in the package, for the summary's grouped ledger (chip, encapsulant) and the drawing. */
+export type MediumRole = 'chip' | 'encapsulant' | 'outside';
+
+export interface SceneMedium {
+  /** Unique name: the ledger bin of what it absorbs, the drawing's label. */
+  name: string;
+  role: MediumRole;
+  /** Real refractive index at the run's wavelength. */
+  n: number;
+  /** Bulk absorption coefficient, 1/mm. */
+  absorptionPerMm: number;
+  /**
+   * When set, the medium is exactly this axis-aligned box [−a, a] × [−b, b] × [z0, z1] and `faces`
+   * names its six bounding surfaces (+x, −x, +y, −y, +z, −z): the ray loop then finds the exit by the
+   * slab method instead of testing each surface.
+   */
+  box?: { a: number; b: number; z0: number; z1: number; faces: [string, string, string, string, string, string] };
+}
+
+/** Which summary count of the older fixed ledger an escape through this surface also adds to. */
+export type LegacyEscape = 'escapedChipTop' | 'escapedChipSide' | 'escapedDome' | 'escapedCylinderTop' | 'escapedCylinderSide';
+
+export interface SceneSurface {
+  /** Unique name (drawing label). */
+  name: string;
+  shape: Shape;
+  /** Medium name on the normal's side, or null (opaque). */
+  front: string | null;
+  /** Medium name on the other side, or null (opaque). */
+  behind: string | null;
+  behaviour: Behaviour;
+  /** Ledger bin for rays absorbed here (several surfaces may share one, e.g. 'base'); default `name`. */
+  absorbedBin?: string;
+  /** Ledger bin for rays whose last surface before the bounding sphere was this one; default `name`. */
+  escapedBin?: string;
+  legacyEscape?: LegacyEscape;
+}
+
+export interface SceneEmitter {
+  /** Medium the rays start in (a box medium). */
+  medium: string;
+  /** 'plane': uniform over the box's footprint at height z; 'volume': uniform in the box. */
+  mode: 'plane' | 'volume';
+  /** Emitting plane height, mm (used in 'plane' mode). */
+  z: number;
+}
+
+export interface SceneDescription {
+  media: SceneMedium[];
+  surfaces: SceneSurface[];
+  /** Name of the outside medium: reaching the scene's bounding sphere in it is an escape. */
+  outside: string;
+  emitter: SceneEmitter;
+  /** 'average': reflect with probability (Rs + Rp)/2; 'track': carry each ray's field. */
+  polarization: 'average' | 'track';
+}

@@ -1,0 +1,216 @@
+/**
+ * Ray–surface intersection for each shape kind of the compiled scene (layouts in scene-layout.ts),
+ * and the unit normal facing the incident side at a hit.
+ *
+ * A ray in a medium meets a surface only when it crosses it from that medium's side: from the front
+ * (the normal's side) it must move against the normal, from behind along it. That one rule keeps a
+ * ray from re-hitting the surface it stands on, so no distance guard and no nudge is needed:
+ * - planes (rect, disc): the sign of d·n decides, t = (at − p_k)/d_k ≥ 0, then the bounds;
+ * - quadrics f(p + t d) = A t² + 2B t + C with f < 0 behind (cylinder, frustum, spheroid): the
+ *   crossing from behind is the root where f rises, t = (−B + √(B² − AC))/A, the crossing from the
+ *   front the other one, t = (−B − √(B² − AC))/A (whatever the sign of A), each in its
+ *   cancellation-free form; then the z range of the shape. A ray standing on the surface has that
+ *   root at 0 only if it is crossing, never when it has just crossed.
+ * Each function writes the distance (mm) to hit[0] and returns true on a hit.
+ * Sources: T. L. Kay, J. T. Kajiya, SIGGRAPH '86 (planes, slabs); W. H. Press et al., Numerical
+ * Recipes, 3rd ed., §5.6 (stable quadratic roots).
+ */
+import * as layout from './scene-layout';
+
+// The layout's constants as module constants: under tsx (command line, bench) an imported binding is a
+// getter, which the optimiser does not always inline in a large function (measured: 3× slower loop)
+const { SHAPE_CYLINDER, SHAPE_DISC, SHAPE_FRUSTUM, SHAPE_RECT, SHAPE_SPHEROID_CAP, SIDE_FRONT, S_P, S_SHAPE } = layout;
+
+/** Rect: axis, at, normalSign, uMin, uMax, vMin, vMax from offset p. */
+export function intersectRect(s: Float64Array, p: number, side: number, ray: Float64Array, hit: Float64Array): boolean {
+  const k = s[p] | 0;
+  const sigma = s[p + 2];
+  const dk = ray[3 + k];
+  // From the front the ray moves against the normal σ·ê_k
+  if (side === SIDE_FRONT ? sigma * dk >= 0 : sigma * dk <= 0) return false;
+  const t = (s[p + 1] - ray[k]) / dk;
+  if (!(t >= 0)) return false;
+  // The two other axes in order
+  const iu = k === 0 ? 1 : 0;
+  const iv = k === 2 ? 1 : 2;
+  const u = ray[iu] + t * ray[3 + iu];
+  if (!(u >= s[p + 3] && u <= s[p + 4])) return false;
+  const v = ray[iv] + t * ray[3 + iv];
+  if (!(v >= s[p + 5] && v <= s[p + 6])) return false;
+  hit[0] = t;
+  return true;
+}
+
+/** Disc / annulus / plane z = at: at, normalSign, rInner², rOuter² from offset p. */
+export function intersectDisc(s: Float64Array, p: number, side: number, ray: Float64Array, hit: Float64Array): boolean {
+  const sigma = s[p + 1];
+  const dz = ray[5];
+  if (side === SIDE_FRONT ? sigma * dz >= 0 : sigma * dz <= 0) return false;
+  const t = (s[p] - ray[2]) / dz;
+  if (!(t >= 0)) return false;
+  const x = ray[0] + t * ray[3];
+  const y = ray[1] + t * ray[4];
+  const r2 = x * x + y * y;
+  if (!(r2 >= s[p + 2] && r2 <= s[p + 3])) return false;
+  hit[0] = t;
+  return true;
+}
+
+/**
+ * The root of A t² + 2B t + C = 0 where the ray crosses from `side`, or −1 when there is none. From
+ * behind with A > 0 (a closed quadric seen from inside) a negative discriminant is roundoff of a point
+ * a hair outside: it is read as 0 (the tangent point), never NaN.
+ */
+function quadricRoot(A: number, B: number, C: number, side: number): number {
+  let D = B * B - A * C;
+  if (side === SIDE_FRONT) {
+    if (D < 0 || A === 0) return -1;
+    const sq = Math.sqrt(D);
+    // t = (−B − √D)/A
+    return B < 0 ? C / (sq - B) : -(B + sq) / A;
+  }
+  if (A === 0) return -1;
+  if (D < 0) {
+    if (A < 0) return -1;
+    D = 0;
+  }
+  const sq = Math.sqrt(D);
+  // t = (−B + √D)/A; from inside a closed quadric (A > 0) a point a hair outside gives 0, not t < 0
+  const t = B > 0 ? -C / (B + sq) : (sq - B) / A;
+  return A > 0 && t < 0 ? 0 : t;
+}
+
+/** Cylinder wall about z: radius, z0, z1 from offset p. */
+export function intersectCylinder(s: Float64Array, p: number, side: number, ray: Float64Array, hit: Float64Array): boolean {
+  const px = ray[0];
+  const py = ray[1];
+  const dx = ray[3];
+  const dy = ray[4];
+  const R = s[p];
+  // f = x² + y² − R²
+  const A = dx * dx + dy * dy;
+  if (!(A > 0)) return false;
+  const t = quadricRoot(A, px * dx + py * dy, px * px + py * py - R * R, side);
+  if (!(t >= 0)) return false;
+  const z = ray[2] + t * ray[5];
+  if (!(z >= s[p + 1] && z <= s[p + 2])) return false;
+  hit[0] = t;
+  return true;
+}
+
+/** Cone frustum wall about z: r0, z0, r1, z1, slope from offset p. */
+export function intersectFrustum(s: Float64Array, p: number, side: number, ray: Float64Array, hit: Float64Array): boolean {
+  const px = ray[0];
+  const py = ray[1];
+  const dx = ray[3];
+  const dy = ray[4];
+  const dz = ray[5];
+  const k = s[p + 4];
+  // f = x² + y² − ρ(z)², ρ(z) = r0 + k (z − z0)
+  const rho = s[p] + k * (ray[2] - s[p + 1]);
+  const kdz = k * dz;
+  const t = quadricRoot(dx * dx + dy * dy - kdz * kdz, px * dx + py * dy - rho * kdz, px * px + py * py - rho * rho, side);
+  if (!(t >= 0)) return false;
+  const z = ray[2] + t * dz;
+  if (!(z >= s[p + 1] && z <= s[p + 3])) return false;
+  hit[0] = t;
+  return true;
+}
+
+/**
+ * Spheroid cap z ≥ zCentre: R, h, zCentre from offset p. Scaling z by R/h maps the spheroid to a
+ * sphere of radius R: with q = (x, y, (z − zc)R/h) and v = (dx, dy, dz·R/h), A = v·v, B = q·v,
+ * C = q·q − R².
+ */
+export function intersectSpheroidCap(s: Float64Array, p: number, side: number, ray: Float64Array, hit: Float64Array): boolean {
+  const px = ray[0];
+  const py = ray[1];
+  const dx = ray[3];
+  const dy = ray[4];
+  const R = s[p];
+  const scale = R / s[p + 1];
+  const zc = s[p + 2];
+  const qz = (ray[2] - zc) * scale;
+  const vz = ray[5] * scale;
+  const t = quadricRoot(dx * dx + dy * dy + vz * vz, px * dx + py * dy + qz * vz, px * px + py * py + qz * qz - R * R, side);
+  if (!(t >= 0)) return false;
+  if (!(ray[2] + t * ray[5] >= zc)) return false;
+  hit[0] = t;
+  return true;
+}
+
+/**
+ * Intersects the surface record at offset o from `side` (SIDE_FRONT / SIDE_BEHIND); see the file comment.
+ * @param s surface records; @param o record offset
+ */
+export function intersectSurface(s: Float64Array, o: number, side: number, ray: Float64Array, hit: Float64Array): boolean {
+  const p = o + S_P;
+  switch (s[o + S_SHAPE] | 0) {
+    case SHAPE_RECT:
+      return intersectRect(s, p, side, ray, hit);
+    case SHAPE_DISC:
+      return intersectDisc(s, p, side, ray, hit);
+    case SHAPE_CYLINDER:
+      return intersectCylinder(s, p, side, ray, hit);
+    case SHAPE_FRUSTUM:
+      return intersectFrustum(s, p, side, ray, hit);
+    case SHAPE_SPHEROID_CAP:
+      return intersectSpheroidCap(s, p, side, ray, hit);
+    default:
+      return false;
+  }
+}
+
+/**
+ * Puts the ray exactly on a planar surface it has reached (roundoff of the step), and writes the unit
+ * normal facing the incident side (the side the ray comes from: cos θi = −d·n ≥ 0) into `normal`.
+ * Returns the axis (0, 1, 2) of an axis-aligned plane, −1 for a curved surface.
+ */
+export function surfaceNormal(s: Float64Array, o: number, side: number, ray: Float64Array, normal: Float64Array): number {
+  const p = o + S_P;
+  // +1 when the normal on the incident side is the shape's own normal
+  const toward = side === SIDE_FRONT ? 1 : -1;
+  normal[0] = 0;
+  normal[1] = 0;
+  normal[2] = 0;
+  switch (s[o + S_SHAPE] | 0) {
+    case SHAPE_RECT: {
+      const k = s[p] | 0;
+      ray[k] = s[p + 1];
+      normal[k] = toward * s[p + 2];
+      return k;
+    }
+    case SHAPE_DISC:
+      ray[2] = s[p];
+      normal[2] = toward * s[p + 1];
+      return 2;
+    case SHAPE_CYLINDER: {
+      // outward (x, y, 0)/r
+      const inv = toward / Math.sqrt(ray[0] * ray[0] + ray[1] * ray[1]);
+      normal[0] = ray[0] * inv;
+      normal[1] = ray[1] * inv;
+      return -1;
+    }
+    case SHAPE_FRUSTUM: {
+      // outward ∇f ∝ (x, y, −k ρ(z))
+      const k = s[p + 4];
+      const gz = -k * (s[p] + k * (ray[2] - s[p + 1]));
+      const inv = toward / Math.sqrt(ray[0] * ray[0] + ray[1] * ray[1] + gz * gz);
+      normal[0] = ray[0] * inv;
+      normal[1] = ray[1] * inv;
+      normal[2] = gz * inv;
+      return -1;
+    }
+    default: {
+      // Spheroid: outward ∇(x²/R² + y²/R² + (z − zc)²/h²) ∝ (x/R², y/R², (z − zc)/h²)
+      const gx = ray[0] * s[p + 3];
+      const gy = ray[1] * s[p + 3];
+      const gz = (ray[2] - s[p + 2]) * s[p + 4];
+      const inv = toward / Math.sqrt(gx * gx + gy * gy + gz * gz);
+      normal[0] = gx * inv;
+      normal[1] = gy * inv;
+      normal[2] = gz * inv;
+      return -1;
+    }
+  }
+}
