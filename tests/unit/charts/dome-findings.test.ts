@@ -1,16 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { domeGap, lostExplanation, type TraceFacts } from '../../../src/lib/charts/dome-findings';
 import type { TracePackage } from '../../../src/lib/trace/package-spec';
+import { domePackage } from '../../support/fixtures';
 
-function pkg(): TracePackage {
-  return {
-    chip: { widthMm: 1, lengthMm: 1, heightMm: 0.15, n: 2.49, absorptionPerMm: 0.5, emitterZMm: 0.14, emission: 'plane' },
-    base: { kind: 'reflectance', reflectance: 0.92 },
-    encapsulant: { shape: 'dome', radiusMm: 2.5, heightMm: 2.5, n: 1.42, absorptionPerMm: 0.001 },
-    outsideN: 1,
-    polarization: 'average'
-  };
-}
+const pkg = domePackage;
+
 
 function trace(extraction: number, stderr: number, ledger: Partial<TraceFacts['ledger']> = {}): TraceFacts {
   const L = { escaped: extraction, chip: 0, encapsulant: 0, base: 0, lost: 0, ...ledger };

@@ -1,11 +1,11 @@
 import { describe, it, expect } from 'vitest';
 import { extractionCurve } from '../../../src/lib/decisions/extraction-curve';
 import { rankingChart } from '../../../src/lib/decisions/ranking-chart';
-import { rankEncapsulants, encapsulantCandidates } from '../../../src/lib/decisions/rank-encapsulants';
+import { rankEncapsulants } from '../../../src/lib/decisions/rank-encapsulants';
 import { escapeCone } from '../../../src/lib/optics/index';
-import { findMaterial, listMaterials } from '../../../src/lib/materials/index';
 import { chartTable } from '../../../src/lib/charts/csv';
 import { assertInDelta, EPS } from '../../support/assert';
+import { rankInput } from '../../support/fixtures';
 
 describe('extractionCurve(nChip, nOut, points)', () => {
   it('runs from n = 1 to the chip index; at n = 1 in air it is the bare escape cone (4 ε)', () => {
@@ -28,16 +28,7 @@ describe('extractionCurve(nChip, nOut, points)', () => {
 });
 
 describe('rankingChart(ranking)', () => {
-  const ranking = rankEncapsulants({
-    chip: { material: findMaterial('gan')! },
-    outside: { n: 1 },
-    chipWidthMm: 1,
-    chipLengthMm: 1,
-    radiusMm: 2.5,
-    wavelengthNm: 450,
-    candidates: encapsulantCandidates(listMaterials()),
-    current: { label: 'Methyl silicone', n: 1.41, materialId: 'silicone-methyl' }
-  });
+  const ranking = rankEncapsulants(rankInput({ current: { label: 'Methyl silicone', n: 1.41, materialId: 'silicone-methyl' } }));
   const spec = rankingChart(ranking);
 
   it('has the curve, one marker series per candidate placed on the curve, and the current index marked', () => {

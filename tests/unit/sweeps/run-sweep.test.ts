@@ -4,7 +4,7 @@ import { planRadiusSweep } from '../../../src/lib/sweeps/plan-radius-sweep';
 import { runSweep, type SweepTracer } from '../../../src/lib/sweeps/run-sweep';
 import { summarize } from '../../../src/lib/trace/summary';
 import { traceSync } from '../../../src/lib/trace/trace';
-import { domePackage, pointSourcePackage } from './fixtures';
+import { domePackage, pointSourcePackage, ROUND_INDICES } from '../../support/fixtures';
 
 /** The real tracer on this thread, as the sweep runner takes it. */
 const syncTracer: SweepTracer = async (pkg, options, onProgress) => {
@@ -20,7 +20,7 @@ const fakeTracer: SweepTracer = async (pkg, _options, onProgress) => {
 
 describe('runSweep(plan, trace, options)', () => {
   it('traces every point in order and passes each result on', async () => {
-    const plan = planIndexSweep(domePackage(), [1.2, 1.4, 1.6]);
+    const plan = planIndexSweep(domePackage(ROUND_INDICES), [1.2, 1.4, 1.6]);
     const seen: number[][] = [];
     const run = await runSweep(plan, fakeTracer, { rays: 10, seed: 1, onPoint: (r) => seen.push(r.map((p) => p.x)) });
     expect(run.cancelled).toBe(false);
@@ -31,7 +31,7 @@ describe('runSweep(plan, trace, options)', () => {
   });
 
   it('reports whole-sweep progress that never goes back and ends at 1', async () => {
-    const plan = planIndexSweep(domePackage(), [1.2, 1.4, 1.6, 1.8]);
+    const plan = planIndexSweep(domePackage(ROUND_INDICES), [1.2, 1.4, 1.6, 1.8]);
     const progress: number[] = [];
     await runSweep(plan, fakeTracer, { rays: 10, seed: 1, onProgress: (f) => progress.push(f) });
     // per point: half-way, then done → (i + 0.5)/4, (i + 1)/4
@@ -39,7 +39,7 @@ describe('runSweep(plan, trace, options)', () => {
   });
 
   it('stops at the next point once the signal fires and keeps the points already done', async () => {
-    const plan = planIndexSweep(domePackage(), [1.2, 1.4, 1.6]);
+    const plan = planIndexSweep(domePackage(ROUND_INDICES), [1.2, 1.4, 1.6]);
     const ctl = new AbortController();
     const run = await runSweep(plan, fakeTracer, { rays: 10, seed: 1, signal: ctl.signal, onPoint: () => ctl.abort() });
     expect(run.cancelled).toBe(true);
@@ -47,7 +47,7 @@ describe('runSweep(plan, trace, options)', () => {
   });
 
   it('treats a rejected trace after a cancel as a cancel, and any other rejection as an error', async () => {
-    const plan = planIndexSweep(domePackage(), [1.2, 1.4]);
+    const plan = planIndexSweep(domePackage(ROUND_INDICES), [1.2, 1.4]);
     const ctl = new AbortController();
     const cancelling: SweepTracer = async () => {
       ctl.abort();
@@ -62,7 +62,7 @@ describe('runSweep(plan, trace, options)', () => {
   });
 
   it('rejects a ray count that is not a whole number ≥ 1', async () => {
-    const plan = planIndexSweep(domePackage(), [1.5]);
+    const plan = planIndexSweep(domePackage(ROUND_INDICES), [1.5]);
     await expect(runSweep(plan, fakeTracer, { rays: 0, seed: 1 })).rejects.toThrow(RangeError);
     await expect(runSweep(plan, fakeTracer, { rays: 1.5, seed: 1 })).rejects.toThrow(/rays/);
   });
@@ -88,7 +88,7 @@ describe('runSweep(plan, trace, options)', () => {
     // physics.md §4: below R = r·n_enc/n_out (here R/r = 1.5) rays from the chip's outer parts meet the
     // dome beyond the critical angle. Common random numbers make the two estimates positively
     // correlated, so the independent-error bound √(σ1² + σ2²) is conservative; k = 4.
-    const run = await runSweep(planRadiusSweep(domePackage(), [1.05, 2]), syncTracer, { rays: 30_000, seed: 11 });
+    const run = await runSweep(planRadiusSweep(domePackage(ROUND_INDICES), [1.05, 2]), syncTracer, { rays: 30_000, seed: 11 });
     const [small, large] = run.results;
     const sigma = Math.hypot(small.stderr, large.stderr);
     expect(large.extraction - small.extraction).toBeGreaterThan(4 * sigma);
