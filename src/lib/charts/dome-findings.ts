@@ -210,7 +210,7 @@ export function radiusNote(pkg: TracePackage, closed: ClosedFormFacts): string |
   return (
     `The dome's radius (${mm(enc.radiusMm)}) is already past the no-TIR radius (${mm(closed.minRadiusNoTirMm)}: ` +
     "half-diagonal × encapsulant index ÷ outside index). Every ray from the chip already meets the dome inside its " +
-    'critical angle, nearly square on, so a larger dome has no trapped light left to free: the extraction is set by the ' +
+    'critical angle, so a larger dome has no trapped light left to free: the extraction is set by the ' +
     'indices, the chip and the base, not by the radius. ' +
     (absorbs
       ? `A larger dome only lengthens the path through the encapsulant, which absorbs (α = ${fmtPlain(enc.absorptionPerMm)} /mm), so it loses a little more light.`

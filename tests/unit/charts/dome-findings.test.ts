@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { domeGap, lostExplanation, type TraceFacts } from '../../../src/lib/charts/dome-findings';
+import { domeGap, lostExplanation, radiusNote, type TraceFacts } from '../../../src/lib/charts/dome-findings';
 import type { TracePackage } from '../../../src/lib/trace/package-spec';
 import { domePackage } from '../../support/fixtures';
 
@@ -86,5 +86,28 @@ describe('lostExplanation(pkg, trace)', () => {
   it('says nothing below 1 % lost and no geometry errors; reports geometry errors on their own', () => {
     expect(lostExplanation(pkg(), trace(0.3, 0.001, { lost: 0.009 }))).toBeNull();
     expect(lostExplanation(pkg(), { ...trace(0.3, 0.001), geometryErrors: 3 })).toMatch(/3 rays stopped on a geometry error/);
+  });
+});
+
+describe('radiusNote(pkg, closed)', () => {
+  it('explains that a hemisphere past the no-TIR radius gains nothing from growing, and names the absorption', () => {
+    const text = radiusNote(pkg(), closed)!;
+    expect(text).toMatch(/2\.5 mm\) is already past the no-TIR radius \(1 mm/);
+    expect(text).toMatch(/absorbs \(α = 0\.001 \/mm\)/);
+    const clear = domePackage();
+    clear.encapsulant.absorptionPerMm = 0;
+    expect(radiusNote(clear, closed)).toMatch(/clear encapsulant/);
+  });
+
+  it('says nothing below the no-TIR radius, for a flattened dome or for a cylinder', () => {
+    expect(radiusNote(pkg(), { ...closed, noTir: false })).toBeNull();
+    const flat = domePackage();
+    flat.encapsulant.heightMm = 1;
+    expect(radiusNote(flat, closed)).toBeNull();
+    expect(radiusNote({ ...pkg(), encapsulant: { ...pkg().encapsulant, shape: 'cylinder' } }, closed)).toBeNull();
+  });
+
+  it('comes with every gap finding, agreeing or not', () => {
+    expect(domeGap(pkg(), closed, trace(0.0753, 0.001)).radiusNote).toBe(radiusNote(pkg(), closed));
   });
 });
