@@ -45,6 +45,15 @@ describe('summarize(tally)', () => {
     assertInDelta(s.farField.beamAngleDeg ?? NaN, 180, 1);
   });
 
+  it('bounds the beam angle at 180°: light still above half its peak below the horizon gets a sentence, not 200°', () => {
+    // Uniform intensity out to 100° from the normal: the half maximum lies about 10° below the horizon.
+    const s = summarize(tallyFor((th) => (th < 100 ? 1 : 0), 1e6));
+    expect(s.farField.beamAngleDeg).toBeNull();
+    expect(s.farField.beamAngleNote).toMatch(/^Wider than 180°: .* falls to half only 10\.\d° below it/);
+    const lambert = summarize(tallyFor((th) => Math.max(0, Math.cos(th * RAD)), 1e6));
+    expect(lambert.farField.beamAngleNote).toBeNull();
+  });
+
   it('gives the binomial standard error √(p(1 − p)/N) and ledger fractions that sum to 1', () => {
     const t = createTally();
     t.launched = 1000;
