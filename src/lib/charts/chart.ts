@@ -17,7 +17,7 @@ import {
   Tooltip,
   type Plugin
 } from 'chart.js';
-import { chartConfig, equalUnitsAspectRatio, FALLBACK_PALETTE, seriesColor, type ChartPalette } from './chart-config';
+import { chartConfig, equalUnitsAspectRatio, FALLBACK_PALETTE, labelPlugin, seriesColor, type ChartPalette } from './chart-config';
 import type { ChartSpec } from './spec';
 
 Chart.register(
@@ -142,7 +142,7 @@ export function mountChart(canvas: HTMLCanvasElement, spec: ChartSpec): ChartHan
   const live: Live = { spec, palette: readPalette(canvas) };
   const make = () => {
     const config = chartConfig(live.spec, live.palette);
-    config.plugins = [backgroundPlugin(live), errorBarPlugin(live), equalUnitsPlugin(live)];
+    config.plugins = [backgroundPlugin(live), errorBarPlugin(live), equalUnitsPlugin(live), labelPlugin(() => live)];
     return new Chart(canvas, config);
   };
   let chart = make();

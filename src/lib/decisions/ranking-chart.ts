@@ -21,7 +21,7 @@ export function rankingChart(ranking: EncapsulantRanking, points = 61): ChartSpe
   const line = curve.n.map((n, i) => ({ x: n, y: curve.etaDome[i] * 100 }));
   // y range up to the next multiple of 5 % above the highest point
   const top = Math.ceil((Math.max(...line.map((p) => p.y), ...ranking.rows.map((r) => r.etaDome * 100)) * 1.02) / 5) * 5;
-  const series: SeriesSpec[] = [{ label: 'Closed form η_dome(n), one face', points: line, color: 0 }];
+  const series: SeriesSpec[] = [{ label: 'Closed form: extraction under a dome η(n), one face', points: line, color: 0 }];
   ranking.rows.forEach((r, i) => {
     series.push({
       label: `${r.name}${r.isCurrent ? ' (current)' : ''}`,

@@ -12,7 +12,7 @@ describe('escapeIndexChart', () => {
     expect(geo.points).toHaveLength(61);
     expect(geo.points[0].x).toBe(1);
     expect(geo.points[60].x).toBe(2.5);
-    expect(spec.x).toMatchObject({ title: 'Surrounding index n_out', min: 1, max: 2.5 });
+    expect(spec.x).toMatchObject({ title: 'Surrounding index nₒᵤₜ', min: 1, max: 2.5 });
     expect(spec.y.title).toBe('Escape, one face (%)');
   });
 
