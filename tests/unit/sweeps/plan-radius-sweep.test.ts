@@ -23,7 +23,7 @@ describe('planRadiusSweep(pkg, values)', () => {
     // physics.md §4 (computed): R_min = 0.7071 · 1.41 = 0.997 mm, so R_min / r = 1.41 (rounding of the table ±5e-4 mm)
     assertInDelta(plan.marker!.x * HALF_DIAGONAL, 0.997, 5e-4);
     assertInDelta(plan.marker!.x, 1.41, 1e-12);
-    expect(plan.marker!.label).toMatch(/No-TIR/);
+    expect(plan.marker!.label).toMatch(/no-TIR radius\): R\/r = 1\.41/);
   });
 
   it("skips radii too small to hold the chip's top corners", () => {
