@@ -39,12 +39,12 @@ test.describe('dome page', () => {
     await openDome(page);
     await expect(page.getByRole('heading', { name: 'Dome encapsulant', level: 1 })).toBeVisible();
     await expect(page.getByTestId('closed-eta-dome')).toHaveText(/^\d+\.\d+ %$/);
-    // physics.md §4 (computed): GaN n 2.5 under a 1.41 / 1.50 dome gains 2.26 / 2.60; the demo's methyl
+    // computed; dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3: GaN n 2.5 under a 1.41 / 1.50 dome gains 2.26 / 2.60; the demo's methyl
     // silicone (n 1.419 at 450 nm) must lie between them.
     const gain = await numberIn(page.getByTestId('closed-gain'));
     expect(gain).toBeGreaterThan(2.26);
     expect(gain).toBeLessThan(2.6);
-    // physics.md §4: a 1 × 1 mm chip under n 1.41 needs R ≥ 0.997 mm; n 1.419 needs a hair more (≤ 1.01 mm).
+    // dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3: a 1 × 1 mm chip under n 1.41 needs R ≥ 0.997 mm; n 1.419 needs a hair more (≤ 1.01 mm).
     const minRadius = await numberIn(page.getByTestId('closed-min-radius'));
     expect(minRadius).toBeGreaterThanOrEqual(0.997);
     expect(minRadius).toBeLessThan(1.01);
@@ -117,7 +117,7 @@ test.describe('dome page', () => {
     await page.getByRole('textbox', { name: 'Encapsulant index n' }).fill('1.53');
     await expect(eta).not.toHaveText(`${before} %`);
     expect(await numberIn(eta)).toBeGreaterThan(before);
-    // physics.md §4 (computed): GaN 2.5 under 1.50 gains 2.60 and under 1.53 gains 2.73 (±0.02 for n_chip 2.487).
+    // computed; dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3: GaN 2.5 under 1.50 gains 2.60 and under 1.53 gains 2.73 (±0.02 for n_chip 2.487).
     const gain = await numberIn(page.getByTestId('closed-gain'));
     expect(gain).toBeGreaterThan(2.6);
     expect(gain).toBeLessThan(2.75);

@@ -1,7 +1,7 @@
 /**
  * Encapsulant ranking against things outside the ranking code:
  * - closed-form dome gains for a planar face, GaN (2.5) under 1.41 / 1.50 / 1.53: ≈ 2.26 / 2.60 / 2.73
- *   (computed values of the project's physics notes; Schubert, Light-Emitting Diodes, 2nd ed., ch. 5,
+ *   (computed values; Schubert, Light-Emitting Diodes, 2nd ed., ch. 5,
  *   "a factor of about 2–3", from memory);
  * - the ordering of library encapsulants for a GaN chip follows their index (η_dome rises with n over
  *   1.4–1.6: a larger escape cone outweighs the slightly larger dome-surface reflection);
@@ -25,7 +25,7 @@ function ganRanking(nChip?: number) {
   );
 }
 
-describe('closed-form ranking (computed values, physics notes §4)', () => {
+describe('closed-form ranking (computed values, dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3)', () => {
   it('reproduces the dome gains 2.26 / 2.60 / 2.73 of GaN (n 2.5) under 1.41 / 1.50 / 1.53 (tolerance 0.005: 3-figure table)', () => {
     const r = rankEncapsulants(rankInput({ chip: { n: 2.5 }, candidates: [], current: { label: 'typed', n: 1.41, materialId: null } }));
     expect(r.rows).toEqual([]);
@@ -45,7 +45,7 @@ describe('closed-form ranking (computed values, physics notes §4)', () => {
     expect(pos('silicone-phenyl')).toBeLessThan(pos('silicone-methyl'));
   });
 
-  it('the no-TIR radius is r·n_enc/n_out: 0.997 mm for a 1 × 1 mm chip under 1.41 (physics notes §4; 1e-3 mm)', () => {
+  it('the no-TIR radius is r·n_enc/n_out: 0.997 mm for a 1 × 1 mm chip under 1.41 (dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3; 1e-3 mm)', () => {
     const r = ganRanking(2.45);
     const methyl = r.rows.find((x) => x.id === 'silicone-methyl')!;
     assertInDelta(methyl.minRadiusNoTirMm, (Math.SQRT2 / 2) * methyl.nEnc, 1e-12);

@@ -21,15 +21,15 @@ describe('planIndexSweep(pkg, values)', () => {
     }
   });
 
-  it('gives the closed form η_F(2.5 → 1.5)·(1 − 0.04) = 0.08444 at n = 1.5 (physics.md table, 4 digits)', () => {
-    // computed: η_F(2.5 → 1.5) = 0.08796 (physics.md §2) and R_normal(1.5 → air) = 0.04 (common practice);
+  it('gives the closed form η_F(2.5 → 1.5)·(1 − 0.04) = 0.08444 at n = 1.5 (computed, 4 digits)', () => {
+    // computed: η_F(2.5 → 1.5) = 0.08796 (escape cone ½∫T sin θ dθ: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5) and R_normal(1.5 → air) = 0.04 (common practice);
     // the table is rounded to 4 significant digits, so ±1e-5 on the product.
     const plan = planIndexSweep(domePackage(ROUND_INDICES), [1.5]);
     assertInDelta(plan.points[0].closedForm, 0.08796 * 0.96, 1e-5);
   });
 
   it('gives the bare-chip escape η_F(2.5 → 1) = 0.03243 at n = 1 (an air dome has no Fresnel loss)', () => {
-    // physics.md §2, computed, 4 significant digits → ±1e-5
+    // computed; escape cone ½∫T sin θ dθ: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5, 4 significant digits → ±1e-5
     assertInDelta(planIndexSweep(domePackage(ROUND_INDICES), [1]).points[0].closedForm, 0.03243, 1e-5);
   });
 

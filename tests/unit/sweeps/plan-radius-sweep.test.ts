@@ -16,11 +16,11 @@ describe('planRadiusSweep(pkg, values)', () => {
     }
   });
 
-  it('marks the no-TIR radius at R/r = n_enc/n_out: 1 × 1 mm chip, n 1.41 → R ≥ 0.997 mm (physics.md §4)', () => {
+  it('marks the no-TIR radius at R/r = n_enc/n_out: 1 × 1 mm chip, n 1.41 → R ≥ 0.997 mm (dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3)', () => {
     const pkg = domePackage(ROUND_INDICES);
     pkg.encapsulant.n = 1.41;
     const plan = planRadiusSweep(pkg);
-    // physics.md §4 (computed): R_min = 0.7071 · 1.41 = 0.997 mm, so R_min / r = 1.41 (rounding of the table ±5e-4 mm)
+    // computed; dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3: R_min = 0.7071 · 1.41 = 0.997 mm, so R_min / r = 1.41 (rounding of the table ±5e-4 mm)
     assertInDelta(plan.marker!.x * HALF_DIAGONAL, 0.997, 5e-4);
     assertInDelta(plan.marker!.x, 1.41, 1e-12);
     expect(plan.marker!.label).toMatch(/no-TIR radius\): R\/r = 1\.41/);

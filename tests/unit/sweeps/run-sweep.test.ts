@@ -68,7 +68,7 @@ describe('runSweep(plan, trace, options)', () => {
   });
 
   it('reproduces 0.5·(1 − 0.04) = 0.48 for a point source at the centre of a 1.5 hemisphere on an absorbing base', async () => {
-    // physics.md §4 (Monte Carlo must reproduce). The emitter sits 0.1 µm above the base, 1.4e-4 of R
+    // An exact result the Monte Carlo must reproduce (closed form: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5). The emitter sits 0.1 µm above the base, 1.4e-4 of R
     // or less, which shifts the value by < 1e-4 — far below σ ≈ 0.0035 at 20 000 rays. k = 4 standard errors.
     const plan = planRadiusSweep(pointSourcePackage(0), [1000, 5000]);
     const run = await runSweep(plan, syncTracer, { rays: 20_000, seed: 7 });
@@ -77,7 +77,7 @@ describe('runSweep(plan, trace, options)', () => {
     }
   });
 
-  it('lets every ray out over a perfect, lossless mirror (physics.md §4: extraction 1)', async () => {
+  it('lets every ray out over a perfect, lossless mirror (extraction 1: every ray meets the dome square on, common practice)', async () => {
     // Every ray escapes unless the event cap stops it; reflected rays return to the dome at the same
     // normal incidence, so a ray survives k reflections with probability 0.04^k: none reach the cap.
     const run = await runSweep(planRadiusSweep(pointSourcePackage(1), [1000]), syncTracer, { rays: 5_000, seed: 3 });
@@ -85,7 +85,7 @@ describe('runSweep(plan, trace, options)', () => {
   });
 
   it('shows the trap of a dome below the no-TIR radius: R/r = 1.05 extracts less than R/r = 2', async () => {
-    // physics.md §4: below R = r·n_enc/n_out (here R/r = 1.5) rays from the chip's outer parts meet the
+    // dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3: below R = r·n_enc/n_out (here R/r = 1.5) rays from the chip's outer parts meet the
     // dome beyond the critical angle. Common random numbers make the two estimates positively
     // correlated, so the independent-error bound √(σ1² + σ2²) is conservative; k = 4.
     const run = await runSweep(planRadiusSweep(domePackage(ROUND_INDICES), [1.05, 2]), syncTracer, { rays: 30_000, seed: 11 });

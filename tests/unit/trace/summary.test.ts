@@ -27,7 +27,7 @@ function tallyFor(intensity: (thetaDeg: number) => number, escaped: number) {
 }
 
 describe('summarize(tally)', () => {
-  // Lambertian I(θ) = I0 cos θ, I0 = Φ/π, full width at half maximum 120° (physics.md §6, common practice).
+  // Lambertian I(θ) = I0 cos θ, I0 = Φ/π, full width at half maximum 120° (common practice).
   it('reads a Lambertian histogram as relative intensity cos θ, beam angle 120° and on-axis ≈ 1', () => {
     const s = summarize(tallyFor((th) => Math.max(0, Math.cos(th * RAD)), 1e6));
     // 5-bin smoothing of cos θ and the 20-step midpoint rule: ±0.2° on the beam angle
