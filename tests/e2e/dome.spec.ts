@@ -3,6 +3,7 @@
  * the sweeps and the export. Drives the page by role and label.
  */
 import { expect, test, type Locator, type Page } from '@playwright/test';
+import { drawnPixels } from './chart-pixels';
 
 /** Opens /dome on the demo scenario and waits until the app has started (it writes the scenario into the link). */
 async function openDome(page: Page): Promise<void> {
@@ -15,19 +16,6 @@ async function numberIn(locator: Locator): Promise<number> {
   const text = (await locator.textContent()) ?? '';
   const m = text.replace(/,/g, '').match(/-?\d+(\.\d+)?/);
   return m ? Number(m[0]) : Number.NaN;
-}
-
-/** How many pixels of a canvas differ from its corner pixel (the chart's background). */
-async function drawnPixels(canvas: Locator): Promise<number> {
-  return canvas.evaluate((el) => {
-    const c = el as HTMLCanvasElement;
-    const data = c.getContext('2d')!.getImageData(0, 0, c.width, c.height).data;
-    let n = 0;
-    for (let i = 0; i < data.length; i += 4) {
-      if (data[i] !== data[0] || data[i + 1] !== data[1] || data[i + 2] !== data[2]) n++;
-    }
-    return n;
-  });
 }
 
 async function setRays(page: Page, rays: number): Promise<void> {
