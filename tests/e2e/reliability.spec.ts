@@ -5,7 +5,7 @@
  * killed or cannot load leaves the page usable and the next run completes; a second tab sees the
  * scenario. Driven by role and label like the other browser tests.
  */
-import { expect, test, type BrowserContext, type Locator, type Page } from '@playwright/test';
+import { expect, test, type BrowserContext, type Page } from '@playwright/test';
 import { drawnPixels } from './chart-pixels';
 
 const PAGES = ['/', '/escape', '/stack', '/dome', '/materials', '/compare', '/claim', '/report'];

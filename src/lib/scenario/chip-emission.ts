@@ -7,8 +7,9 @@
  * Diodes, 2nd ed., Cambridge 2006, chs. 12–13: AlGaInP red to yellow-green, InGaN/GaN near-UV to green,
  * GaAs infrared, GaP green to red with dopants) — from memory, rounded to the nearest 5 nm.
  */
+import { findMaterial } from '../materials/index';
+import { designWavelengthNm } from './resolve';
 import type { EmissionSpec, Scenario } from './schema';
-import type { ResolvedScenario } from './resolve';
 
 export interface EmissionRange {
   minNm: number;
@@ -38,15 +39,16 @@ export interface EmissionAdvice {
 
 /**
  * Advice when the scenario's chip is a library material whose emission range does not hold the
- * design wavelength; null otherwise (typed index, user material, a wavelength in range).
+ * design wavelength; null otherwise (typed index, user material, a wavelength in range). Needs no
+ * index, so it also answers for a chip whose formula cannot be evaluated at the present wavelength.
  */
-export function emissionAdvice(scenario: Scenario, resolved: ResolvedScenario): EmissionAdvice | null {
+export function emissionAdvice(scenario: Scenario): EmissionAdvice | null {
   const id = scenario.chip.medium.kind === 'material' ? scenario.chip.medium.id : null;
   const range = id ? CHIP_EMISSION[id] : undefined;
-  if (!range) return null;
-  const nm = resolved.wavelengthNm;
+  if (!id || !range) return null;
+  const nm = designWavelengthNm(scenario.emission);
   if (nm >= range.minNm && nm <= range.maxNm) return null;
-  return { chip: resolved.chip.label, range, currentNm: nm, movable: scenario.emission.kind !== 'table' };
+  return { chip: findMaterial(id)?.name ?? id, range, currentNm: nm, movable: scenario.emission.kind !== 'table' };
 }
 
 /** The emission moved to `wavelengthNm`: the single wavelength, or the Gaussian's peak (its width kept). */
