@@ -1,8 +1,11 @@
-import type { Page } from '@playwright/test';
+import type { Locator, Page } from '@playwright/test';
 
-/** Counts pixels of the index-th chart canvas that differ from its top-left pixel (the opaque background). */
-export async function inkedPixels(page: Page, index: number): Promise<number> {
-  return page.locator('figure.chart canvas').nth(index).evaluate((el) => {
+/**
+ * Counts pixels of a chart canvas that differ clearly (summed RGB difference > 30) from its top-left
+ * pixel, the opaque background: something was drawn. Faint antialiasing does not count.
+ */
+export async function drawnPixels(canvas: Locator): Promise<number> {
+  return canvas.evaluate((el) => {
     const c = el as HTMLCanvasElement;
     const ctx = c.getContext('2d');
     if (!ctx || c.width === 0 || c.height === 0) return 0;
@@ -13,4 +16,9 @@ export async function inkedPixels(page: Page, index: number): Promise<number> {
     }
     return n;
   });
+}
+
+/** {@link drawnPixels} of the index-th chart on the page. */
+export async function inkedPixels(page: Page, index: number): Promise<number> {
+  return drawnPixels(page.locator('figure.chart canvas').nth(index));
 }

@@ -9,18 +9,7 @@
 import { readFile } from 'node:fs/promises';
 import { expect, test, type Page } from '@playwright/test';
 import { parseIes } from '../../src/lib/export/ies';
-
-async function inkedPixels(page: Page, index: number): Promise<number> {
-  return page.locator('figure.chart canvas').nth(index).evaluate((el) => {
-    const c = el as HTMLCanvasElement;
-    const ctx = c.getContext('2d');
-    if (!ctx || c.width === 0 || c.height === 0) return 0;
-    const d = ctx.getImageData(0, 0, c.width, c.height).data;
-    let n = 0;
-    for (let i = 0; i < d.length; i += 4) if (Math.abs(d[i] - d[0]) + Math.abs(d[i + 1] - d[1]) + Math.abs(d[i + 2] - d[2]) > 30) n++;
-    return n;
-  });
-}
+import { inkedPixels } from './chart-pixels';
 
 const ranking = (page: Page) => page.getByTestId('ranking-table');
 const rowOf = (page: Page, name: RegExp) => ranking(page).getByRole('row').filter({ has: page.getByRole('rowheader', { name }) });

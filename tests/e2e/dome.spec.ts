@@ -4,6 +4,7 @@
  * and the export. Drives the page by role and label.
  */
 import { expect, test, type Locator, type Page } from '@playwright/test';
+import { drawnPixels } from './chart-pixels';
 
 /** Opens /dome on the demo scenario and waits until the app has started (it writes the scenario into the link). */
 async function openDome(page: Page): Promise<void> {
@@ -18,19 +19,6 @@ async function numberIn(locator: Locator): Promise<number> {
   return m ? Number(m[0]) : Number.NaN;
 }
 
-/** How many pixels of a canvas differ from its corner pixel (the chart's background). */
-async function drawnPixels(canvas: Locator): Promise<number> {
-  return canvas.evaluate((el) => {
-    const c = el as HTMLCanvasElement;
-    const data = c.getContext('2d')!.getImageData(0, 0, c.width, c.height).data;
-    let n = 0;
-    for (let i = 0; i < data.length; i += 4) {
-      if (data[i] !== data[0] || data[i + 1] !== data[1] || data[i + 2] !== data[2]) n++;
-    }
-    return n;
-  });
-}
-
 async function setRays(page: Page, rays: number): Promise<void> {
   await page.getByRole('textbox', { name: 'Rays', exact: true }).fill(String(rays));
 }
@@ -40,12 +28,12 @@ test.describe('dome page', () => {
     await openDome(page);
     await expect(page.getByRole('heading', { name: 'Dome encapsulant', level: 1 })).toBeVisible();
     await expect(page.getByTestId('closed-eta-dome')).toHaveText(/^\d+\.\d+ %$/);
-    // physics.md §4 (computed): GaN n 2.5 under a 1.41 / 1.50 dome gains 2.26 / 2.60; the demo's methyl
+    // computed; dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3: GaN n 2.5 under a 1.41 / 1.50 dome gains 2.26 / 2.60; the demo's methyl
     // silicone (n 1.419 at 450 nm) must lie between them.
     const gain = await numberIn(page.getByTestId('closed-gain'));
     expect(gain).toBeGreaterThan(2.26);
     expect(gain).toBeLessThan(2.6);
-    // physics.md §4: a 1 × 1 mm chip under n 1.41 needs R ≥ 0.997 mm; n 1.419 needs a hair more (≤ 1.01 mm).
+    // dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3: a 1 × 1 mm chip under n 1.41 needs R ≥ 0.997 mm; n 1.419 needs a hair more (≤ 1.01 mm).
     const minRadius = await numberIn(page.getByTestId('closed-min-radius'));
     expect(minRadius).toBeGreaterThanOrEqual(0.997);
     expect(minRadius).toBeLessThan(1.01);
@@ -128,7 +116,7 @@ test.describe('dome page', () => {
     await page.getByRole('textbox', { name: 'Encapsulant index n' }).fill('1.53');
     await expect(eta).not.toHaveText(`${before} %`);
     expect(await numberIn(eta)).toBeGreaterThan(before);
-    // physics.md §4 (computed): GaN 2.5 under 1.50 gains 2.60 and under 1.53 gains 2.73 (±0.02 for n_chip 2.487).
+    // computed; dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3: GaN 2.5 under 1.50 gains 2.60 and under 1.53 gains 2.73 (±0.02 for n_chip 2.487).
     const gain = await numberIn(page.getByTestId('closed-gain'));
     expect(gain).toBeGreaterThan(2.6);
     expect(gain).toBeLessThan(2.75);

@@ -1,6 +1,6 @@
 /**
  * Escape-cone page, driven by role and label. Expected numbers are the computed check values of the
- * project's physics notes (escape cone table, from θc = asin(n2/n1), (1 − cos θc)/2 and the
+ * escape-cone formulas (Schubert, Light-Emitting Diodes, 2nd ed., ch. 5: from θc = asin(n2/n1), (1 − cos θc)/2 and the
  * Fresnel-weighted integral); the page prints four significant digits, so matching the printed text
  * is a tolerance of half a unit in the fourth digit.
  */
@@ -102,7 +102,7 @@ test('a bad index shows an error naming the field and range, and keeps the last 
 });
 
 test('defaults follow the scenario: GaN chip into the methyl silicone, or into air', async ({ page }) => {
-  // Demo scenario: GaN, n(450 nm) = 2.4869 (computed from the Barker & Ilegems 1973 formula, physics notes §5),
+  // Demo scenario: GaN, n(450 nm) = 2.4869 (computed from the formula of Barker & Ilegems, Phys. Rev. B 7, 743 (1973)),
   // into methyl silicone, n ≈ 1.41 (common practice; the library's dispersion gives a little more at 450 nm).
   // θc = asin(1.41/2.487) = 34.5°; 1.43 would give 35.1°. The window 33°–36° allows for that spread.
   const text = (await page.getByTestId('critical-angle').textContent()) ?? '';

@@ -1,6 +1,6 @@
 /**
- * Materials page and user materials, driven by role and label. Index checks use the project's physics
- * notes (§5): GaN n(450 nm) = 2.4869 computed from Barker & Ilegems (1973); fused silica from
+ * Materials page and user materials, driven by role and label. Index checks:
+ * GaN n(450 nm) = 2.4869 computed from Barker & Ilegems (1973); fused silica from
  * Malitson (1965), n(450 nm) = 1.46557 computed from the published formula. The table prints four
  * significant digits, so matching the printed text is a tolerance of half a unit in the fourth digit.
  */

@@ -5,7 +5,8 @@
  * killed or cannot load leaves the page usable and the next run completes; a second tab sees the
  * scenario. Driven by role and label like the other browser tests.
  */
-import { expect, test, type BrowserContext, type Locator, type Page } from '@playwright/test';
+import { expect, test, type BrowserContext, type Page } from '@playwright/test';
+import { drawnPixels } from './chart-pixels';
 
 const PAGES = ['/', '/escape', '/stack', '/dome', '/materials', '/compare', '/claim', '/report'];
 
@@ -30,19 +31,6 @@ async function watchCsp(context: BrowserContext, page: Page): Promise<string[]> 
 async function open(page: Page, path: string): Promise<void> {
   await page.goto(path);
   await expect(page).toHaveURL(/[?&]s=2\./);
-}
-
-/** Pixels of a canvas that differ from its corner pixel (something was drawn). */
-async function drawnPixels(canvas: Locator): Promise<number> {
-  return canvas.evaluate((el) => {
-    const c = el as HTMLCanvasElement;
-    const data = c.getContext('2d')!.getImageData(0, 0, c.width, c.height).data;
-    let n = 0;
-    for (let i = 0; i < data.length; i += 4) {
-      if (data[i] !== data[0] || data[i + 1] !== data[1] || data[i + 2] !== data[2]) n++;
-    }
-    return n;
-  });
 }
 
 function b64url(text: string): string {

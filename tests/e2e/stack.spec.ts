@@ -1,6 +1,6 @@
 /**
  * Layer-stack page, driven by role and label. Expected numbers are check values of the project's
- * physics notes (§3, planar stacks): incoherent 2.5 → 1.5 → 1.0 gives T = 90.23 % against a bare
+ * stack formulas (Macleod, Thin-Film Optical Filters, 4th ed., ch. 2): incoherent 2.5 → 1.5 → 1.0 gives T = 90.23 % against a bare
  * 81.63 % (computed); a quarter-wave MgF2 layer (1.38) on glass (1.52) gives R = 1.260 % at its design
  * wavelength (published as "1.3 %" in optics course notes; 1.260 % computed). The page prints four
  * significant digits, so matching the printed text is a tolerance of half a unit in the fourth digit.
@@ -58,7 +58,7 @@ test('the starting stack shows R, T, A, extraction against bare, the trapped-lig
   await expect(page.locator('main')).not.toContainText('NaN');
 });
 
-test('incoherent 2.5 → 1.5 → air gives T = 90.23 % against a bare 81.63 % (physics notes §3, computed)', async ({ page }) => {
+test('incoherent 2.5 → 1.5 → air gives T = 90.23 % against a bare 81.63 % (computed; incoherent and thin-film stacks: Macleod, Thin-Film Optical Filters, 4th ed., ch. 2)', async ({ page }) => {
   await typedChipIntoAir(page, '2.5');
   await page.getByLabel(/Thick layers \(incoherent/).check();
   await typedLayer(page, 1, '1.5', '1000');
@@ -67,9 +67,9 @@ test('incoherent 2.5 → 1.5 → air gives T = 90.23 % against a bare 81.63 % (p
   await expect(page.getByTestId('normal-T')).toHaveText('90.23 %');
   await expect(page.getByRole('row', { name: /Transmittance T/ })).toContainText('81.63 %');
   await expect(page.getByTestId('normal-A')).toHaveText('0 %');
-  // Escape cone into air asin(1/2.5) = 23.58° (physics notes §2, computed), unchanged by the stack.
+  // Escape cone into air asin(1/2.5) = 23.58° (computed; escape cone ½∫T sin θ dθ: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5), unchanged by the stack.
   await expect(page.getByRole('row', { name: /Escape cone/ })).toContainText('23.58°');
-  // Bare Fresnel-weighted escape 2.5 → 1: 3.243 % (physics notes §2, computed).
+  // Bare Fresnel-weighted escape 2.5 → 1: 3.243 % (computed; escape cone ½∫T sin θ dθ: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5).
   await expect(page.getByTestId('extraction-bare')).toHaveText('3.243 %');
   // Thick mode draws no R(λ) chart and says why.
   await expect(page.locator('figure.chart')).toHaveCount(2);
@@ -79,12 +79,12 @@ test('incoherent 2.5 → 1.5 → air gives T = 90.23 % against a bare 81.63 % (p
   await expect(page.getByText(/Beyond 36\.9°, rays are totally reflected back into the chip/)).toBeVisible();
 });
 
-test('quarter-wave MgF2 (1.38) on glass (1.52) gives R = 1.260 % at its design wavelength (physics notes §3)', async ({ page }) => {
+test('quarter-wave MgF2 (1.38) on glass (1.52) gives R = 1.260 % at its design wavelength (incoherent and thin-film stacks: Macleod, Thin-Film Optical Filters, 4th ed., ch. 2)', async ({ page }) => {
   await typedChipIntoAir(page, '1.52');
   // d = λ/(4n) = 450 nm / (4 · 1.38) = 81.5217… nm at the scenario wavelength 450 nm.
   await typedLayer(page, 1, '1.38', String(450 / (4 * 1.38)));
   await expect(page.getByTestId('normal-R')).toHaveText('1.260 %');
-  // Bare glass: ((1.52 − 1)/(1.52 + 1))² = 4.258 % (physics notes §3, computed).
+  // Bare glass: ((1.52 − 1)/(1.52 + 1))² = 4.258 % (computed; incoherent and thin-film stacks: Macleod, Thin-Film Optical Filters, 4th ed., ch. 2).
   await expect(page.getByRole('row', { name: /Reflectance R/ })).toContainText('4.258 %');
 });
 
@@ -94,7 +94,7 @@ test('the quarter-wave button adds n = √(n_chip·n_exit), which cancels normal
   await expect(page.getByText(/No layers: the chip meets the exit medium directly/)).toBeVisible();
   // With no layers the stack is the bare interface (exact identity).
   await expect(page.getByTestId('extraction')).toHaveText(await page.getByTestId('extraction-bare').innerText());
-  // √1.52 = 1.2329 (physics notes example: singleLayerOptimumIndex(1, 1.52) ≈ 1.2329)
+  // √1.52 = 1.2329 (ideal single-layer coating index √(n₀·nₛ): E. Hecht, Optics, thin-film section)
   await page.getByRole('button', { name: /Add quarter-wave layer n = √\(n.*\) = 1\.233/ }).click();
   await expect(page.getByLabel('Layer 1 index n')).toHaveValue('1.233');
   // n is rounded to 4 digits, so R is not exactly 0: ((1.52 − 1.233²)/(1.52 + 1.233²))² ≈ 9e-9. Below 0.001 %.
@@ -224,7 +224,7 @@ test('results export as JSON with the scenario; charts save PNG and CSV', async 
   expect(doc.scenario.chip.medium).toEqual({ kind: 'index', n: 2.5, k: 0 });
   expect(doc.stack.items[0]).toEqual({ kind: 'layer', medium: { kind: 'index', n: 1.5, k: 0 }, thicknessNm: 100 });
   expect(`${(doc.results.extraction.stack.unpolarised * 100).toPrecision(4)} %`).toBe(shown);
-  expect(doc.results.extraction.bare.unpolarised).toBeCloseTo(0.03243, 5); // physics notes §2, computed
+  expect(doc.results.extraction.bare.unpolarised).toBeCloseTo(0.03243, 5); // computed; escape cone ½∫T sin θ dθ: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5
   expect(doc.results.escapeConeDeg).toBeCloseTo(23.578, 3); // asin(1/2.5), computed
   expect(doc.results.whereTheLightGoes.join(' ')).toContain('cannot widen');
 

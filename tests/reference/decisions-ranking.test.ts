@@ -1,7 +1,7 @@
 /**
  * Encapsulant ranking against things outside the ranking code:
  * - closed-form dome gains for a planar face, GaN (2.5) under 1.41 / 1.50 / 1.53: ≈ 2.26 / 2.60 / 2.73
- *   (computed values of the project's physics notes; Schubert, Light-Emitting Diodes, 2nd ed., ch. 5,
+ *   (computed values; Schubert, Light-Emitting Diodes, 2nd ed., ch. 5,
  *   "a factor of about 2–3", from memory);
  * - the ordering of library encapsulants for a GaN chip follows their index (η_dome rises with n over
  *   1.4–1.6: a larger escape cone outweighs the slightly larger dome-surface reflection);
@@ -9,44 +9,29 @@
  *   within k = 3 standard errors of each difference.
  */
 import { describe, it, expect } from 'vitest';
-import { rankEncapsulants, encapsulantCandidates } from '../../src/lib/decisions/rank-encapsulants';
-import { findMaterial, listMaterials } from '../../src/lib/materials/index';
+import { rankEncapsulants } from '../../src/lib/decisions/rank-encapsulants';
+import { findMaterial } from '../../src/lib/materials/index';
 import { demoScenario, toTracePackage } from '../../src/lib/scenario/index';
 import { traceSync } from '../../src/lib/trace/trace';
 import { summarize } from '../../src/lib/trace/summary';
 import { assertInDelta } from '../support/assert';
+import { rankInput } from '../support/fixtures';
 
 const K = 3;
 
 function ganRanking(nChip?: number) {
-  return rankEncapsulants({
-    chip: nChip === undefined ? { material: findMaterial('gan')! } : { n: nChip },
-    outside: { n: 1 },
-    chipWidthMm: 1,
-    chipLengthMm: 1,
-    radiusMm: 2.5,
-    wavelengthNm: 450,
-    candidates: encapsulantCandidates(listMaterials(), [], { optics: true }),
-    current: { label: 'typed', n: 1.41, materialId: null }
-  });
+  return rankEncapsulants(
+    rankInput({ chip: nChip === undefined ? { material: findMaterial('gan')! } : { n: nChip }, current: { label: 'typed', n: 1.41, materialId: null } })
+  );
 }
 
-describe('closed-form ranking (computed values, physics notes §4)', () => {
+describe('closed-form ranking (computed values, dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3)', () => {
   it('reproduces the dome gains 2.26 / 2.60 / 2.73 of GaN (n 2.5) under 1.41 / 1.50 / 1.53 (tolerance 0.005: 3-figure table)', () => {
-    const r = rankEncapsulants({
-      chip: { n: 2.5 },
-      outside: { n: 1 },
-      chipWidthMm: 1,
-      chipLengthMm: 1,
-      radiusMm: 2.5,
-      wavelengthNm: 450,
-      candidates: [],
-      current: { label: 'typed', n: 1.41, materialId: null }
-    });
+    const r = rankEncapsulants(rankInput({ chip: { n: 2.5 }, candidates: [], current: { label: 'typed', n: 1.41, materialId: null } }));
     expect(r.rows).toEqual([]);
     assertInDelta(r.current.etaDome / r.etaBare, 2.26, 0.005);
     for (const [n, g] of [[1.5, 2.6], [1.53, 2.73]]) {
-      const s = rankEncapsulants({ ...{ chip: { n: 2.5 }, outside: { n: 1 }, chipWidthMm: 1, chipLengthMm: 1, radiusMm: 2.5, wavelengthNm: 450, candidates: [] }, current: { label: 't', n, materialId: null } });
+      const s = rankEncapsulants(rankInput({ chip: { n: 2.5 }, candidates: [], current: { label: 't', n, materialId: null } }));
       assertInDelta(s.current.etaDome / s.etaBare, g, 0.005, `n_enc = ${n}`);
     }
   });
@@ -60,7 +45,7 @@ describe('closed-form ranking (computed values, physics notes §4)', () => {
     expect(pos('silicone-phenyl')).toBeLessThan(pos('silicone-methyl'));
   });
 
-  it('the no-TIR radius is r·n_enc/n_out: 0.997 mm for a 1 × 1 mm chip under 1.41 (physics notes §4; 1e-3 mm)', () => {
+  it('the no-TIR radius is r·n_enc/n_out: 0.997 mm for a 1 × 1 mm chip under 1.41 (dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3; 1e-3 mm)', () => {
     const r = ganRanking(2.45);
     const methyl = r.rows.find((x) => x.id === 'silicone-methyl')!;
     assertInDelta(methyl.minRadiusNoTirMm, (Math.SQRT2 / 2) * methyl.nEnc, 1e-12);

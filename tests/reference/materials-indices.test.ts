@@ -1,6 +1,6 @@
 /**
  * Reference checks of the material library against values outside the project.
- * Tags as in the project's physics notes: published (source named), computed from published formula
+ * Tags: published (source named), computed from published formula
  * (the source's formula worked in double precision by hand, not by this code), common practice,
  * from memory (recalled, loose tolerance).
  */
@@ -123,7 +123,7 @@ describe('semiconductors, recalled values (from memory, loose tolerances) and pu
 
 describe('metals', () => {
   it('Ag at 550 nm: n = 0.04382, k = 3.6101; R into air 0.9876 and into 1.5: 0.9829', () => {
-    // published n, k: K. M. McPeak et al., ACS Photonics 2, 326 (2015), their 550 nm row; R computed as
+    // published n, k: K. M. McPeak et al., ACS Photonics 2, 326 (2015), their 550 nm row; R computed (Born & Wolf, Principles of Optics, §14.2) as
     // ((n − n0)² + k²)/((n + n0)² + k²). Tolerance: half a unit in the last quoted digit.
     const r = indexAt(findMaterial('ag')!, 550);
     expectWithin(r.n, 0.04382, 5e-6);

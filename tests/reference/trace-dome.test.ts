@@ -1,5 +1,5 @@
 /**
- * Reference checks of the Monte Carlo tracer with a dome encapsulant (physics.md §4). Monte Carlo
+ * Reference checks of the Monte Carlo tracer with a dome encapsulant (dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3). Monte Carlo
  * tolerances: k = 4 binomial standard errors, σ = √(p(1 − p)/N), with p the expected value.
  */
 import { describe, expect, it } from 'vitest';
@@ -10,8 +10,8 @@ import { traceSync } from '../../src/lib/trace/trace';
 
 const K = 4;
 
-describe('reference: dome encapsulant (physics.md §4)', () => {
-  // physics.md §4: η_dome = η_F(chip → encapsulant) · (1 − R_normal(encapsulant → air)) for a chip small
+describe('reference: dome encapsulant (dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3)', () => {
+  // dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3: η_dome = η_F(chip → encapsulant) · (1 − R_normal(encapsulant → air)) for a chip small
   // against the dome, taken from the core's domeEstimate. Geometry that makes the closed form exact up to
   // small terms: a 1 × 1 mm chip 0.01 µm thick (W/H = 1e5: side escapes ≈ 5e-5, see
   // trace-escape-cone.test.ts) on an absorbing base, under a dome R = 100 mm, so rays meet the dome within
@@ -35,7 +35,7 @@ describe('reference: dome encapsulant (physics.md §4)', () => {
     expect(s.tir.outerSurface).toBe(0);
   });
 
-  // physics.md §4: a source at distance r from the centre of a sphere of radius R meets the surface at
+  // dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3: a source at distance r from the centre of a sphere of radius R meets the surface at
   // sin θ ≤ r/R (sine rule), so no ray is trapped while r ≤ R · nOut/nEnc (the inner aplanatic point,
   // Born & Wolf, from memory). R = 1 mm, nEnc = 1.5: r_max = 0.667 mm. The source is a tall 1e-4 mm
   // chip index-matched to the dome (invisible), emitting at height r on the axis; base absorbing.

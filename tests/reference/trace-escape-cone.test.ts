@@ -1,6 +1,6 @@
 /**
  * Reference checks of the Monte Carlo tracer against the Fresnel-weighted escape cone of one planar
- * face (physics.md §2). Monte Carlo tolerances: k = 4 binomial standard errors, σ = √(p(1 − p)/N).
+ * face (escape cone ½∫T sin θ dθ: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5). Monte Carlo tolerances: k = 4 binomial standard errors, σ = √(p(1 − p)/N).
  *
  * Set-up: a chip n = 2.45 in air on an absorbing base (reflectance 0). A ray leaves through the top only
  * on its first top hit (whatever the top reflects, or totally reflects, goes down and is absorbed), so
@@ -17,7 +17,7 @@ import { summarize } from '../../src/lib/trace/summary';
 import { traceSync } from '../../src/lib/trace/trace';
 
 const K = 4;
-// physics.md §2: η_F(2.45 → 1) = 0.03408 (computed). The core's integral is the reference; the table
+// escape cone ½∫T sin θ dθ: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5: η_F(2.45 → 1) = 0.03408 (computed). The core's integral is the reference; the table
 // value checks it to its 4 significant digits.
 const etaF = escapeCone(2.45, 1).fresnel;
 
@@ -31,8 +31,8 @@ function chipInAir(widthMm: number, heightMm: number, polarization: TracePackage
   };
 }
 
-describe('reference: escape through one planar face, chip 2.45 → air (physics.md §2)', () => {
-  it('the core gives η_F(2.45 → 1) = 0.03408 [computed, physics.md §2; 5e-6 for the 4 printed digits]', () => {
+describe('reference: escape through one planar face, chip 2.45 → air (escape cone ½∫T sin θ dθ: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5)', () => {
+  it('the core gives η_F(2.45 → 1) = 0.03408 [computed; escape cone ½∫T sin θ dθ: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; 5e-6 for the 4 printed digits]', () => {
     expect(Math.abs(etaF - 0.03408)).toBeLessThanOrEqual(5e-6);
   });
 

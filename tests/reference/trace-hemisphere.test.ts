@@ -1,6 +1,6 @@
 /**
  * Reference checks of the Monte Carlo tracer with a point source at the centre of a hemispherical dome
- * (physics.md §4). Monte Carlo tolerances: k = 4 binomial standard errors, σ = √(p(1 − p)/N) with p the
+ * (dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3). Monte Carlo tolerances: k = 4 binomial standard errors, σ = √(p(1 − p)/N) with p the
  * expected value. The "point source" is a 1e-4 mm chip index-matched to the dome (no interface, no
  * absorption) emitting at 5e-5 mm above the base: its rays meet a 1 mm dome within 5e-5 rad of normal
  * incidence, which changes R by under 1e-8 — far below σ.
@@ -23,8 +23,8 @@ function pointInHemisphere(base: TraceBase, polarization: TracePackage['polariza
   };
 }
 
-describe('reference: point source at the centre of a hemisphere n = 1.5 (physics.md §4)', () => {
-  // physics.md §4: absorbing base → 0.5 · (1 − 0.04) = 0.48 (R = 0.04 for 1.5 / air at normal incidence,
+describe('reference: point source at the centre of a hemisphere n = 1.5 (dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3)', () => {
+  // dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3: absorbing base → 0.5 · (1 − 0.04) = 0.48 (R = 0.04 for 1.5 / air at normal incidence,
   // common practice); only the upward half reaches the dome, and what it reflects comes back to the base.
   it('on an absorbing base extracts 0.5 · (1 − 0.04) = 0.48 (within 4σ)', () => {
     const N = 400_000;
@@ -35,7 +35,7 @@ describe('reference: point source at the centre of a hemisphere n = 1.5 (physics
     expect(s.tir.outerSurface).toBe(0);
   });
 
-  // physics.md §4: on a perfect reflector with no absorption every ray escapes (1.0).
+  // dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3: on a perfect reflector with no absorption every ray escapes (1.0).
   it('on a perfect mirror with no absorption lets every ray out (exactly, none lost)', () => {
     const N = 100_000;
     const s = summarize(traceSync(pointInHemisphere({ kind: 'reflectance', reflectance: 1 }), { rays: N, seed: 2 }));

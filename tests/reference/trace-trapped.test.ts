@@ -1,5 +1,5 @@
 /**
- * Reference check of light trapping in a lossless box chip (physics.md §2: a cuboid has up to six escape
+ * Reference check of light trapping in a lossless box chip (escape cone ½∫T sin θ dθ: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5: a cuboid has up to six escape
  * cones, summed without overlap while θc < 45°).
  *
  * A specular box keeps |dx|, |dy|, |dz| of a ray forever (reflections only flip signs; the perfect mirror

@@ -211,7 +211,7 @@ export async function run(argv: string[]): Promise<void> {
     extraction: s.extraction, stderr: s.stderr, ledger: s.ledger, counts: s.counts,
     escapedBelowHorizon: s.escapedBelowHorizon, perSurface: s.perSurface, eventsPerRay: s.eventsPerRay,
     geometryErrors: s.geometryErrors, raysPerSecond: rays / seconds, seconds,
-    farField: { beamAngleDeg: s.farField.beamAngleDeg, onAxisVsLambertian: s.farField.onAxisVsLambertian, bins: s.farField.bins },
+    farField: { beamAngleDeg: s.farField.beamAngleDeg, beamAngleNote: s.farField.beamAngleNote, onAxisVsLambertian: s.farField.onAxisVsLambertian, bins: s.farField.bins },
     notes
   };
   const rows: Row[] = [
@@ -219,7 +219,7 @@ export async function run(argv: string[]): Promise<void> {
     ['escaped', percent(s.ledger.escaped, 2)], ['  of which below the horizon', percent(s.escapedBelowHorizon, 2)],
     ['absorbed in the chip', percent(s.ledger.chip, 2)], ['absorbed in the encapsulant', percent(s.ledger.encapsulant, 2)],
     ['absorbed at the base', percent(s.ledger.base, 2)], ['lost (event cap)', percent(s.ledger.lost, 2)],
-    ['beam angle (full width at half maximum)', s.farField.beamAngleDeg === null ? '—' : s.farField.beamAngleDeg.toFixed(1), s.farField.beamAngleDeg === null ? '' : '°'],
+    ['beam angle (full width at half maximum)', s.farField.beamAngleDeg === null ? `— ${s.farField.beamAngleNote ?? ''}` : s.farField.beamAngleDeg.toFixed(1), s.farField.beamAngleDeg === null ? '' : '°'],
     ['on-axis intensity vs Lambertian', s.farField.onAxisVsLambertian === null ? '—' : s.farField.onAxisVsLambertian.toFixed(3), '×'],
     ['events per ray', s.eventsPerRay.toFixed(2)], ['rays', rays], ['threads', threads],
     ['speed', (rays / seconds / 1e6).toFixed(2), 'million rays/s']

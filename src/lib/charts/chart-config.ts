@@ -2,7 +2,7 @@
  * ChartSpec → Chart.js configuration, given the colours of the current theme. Pure (types only from
  * Chart.js), so it is tested in Node; `chart.ts` does the drawing.
  */
-import type { ChartConfiguration, ChartDataset, ScaleOptionsByType } from 'chart.js';
+import type { ChartConfiguration, ChartDataset, Plugin, ScaleOptionsByType } from 'chart.js';
 import type { AxisSpec, ChartSpec, SeriesSpec } from './spec';
 
 /** Theme colours read from CSS custom properties (see app.css, --chart-*). */
@@ -155,4 +155,28 @@ export function chartConfig(spec: ChartSpec, palette: ChartPalette): ChartConfig
       plugins: { legend, tooltip }
     }
   } as ChartConfiguration;
+}
+
+/**
+ * Draws a spec's `labels` (e.g. a polar plot's angle marks) in the theme's muted ink, centred on their
+ * data coordinates, after the datasets. `current` returns the spec and palette being drawn.
+ */
+export function labelPlugin(current: () => { spec: ChartSpec; palette: ChartPalette }): Plugin {
+  return {
+    id: 'outcoupleLabels',
+    afterDatasetsDraw(chart) {
+      const { spec, palette } = current();
+      if (!spec.labels || spec.labels.length === 0) return;
+      const { ctx } = chart;
+      const xScale = chart.scales.x;
+      const yScale = chart.scales.y;
+      ctx.save();
+      ctx.fillStyle = palette.muted;
+      ctx.font = `12px ${palette.fontFamily}`;
+      ctx.textAlign = 'center';
+      ctx.textBaseline = 'middle';
+      for (const l of spec.labels) ctx.fillText(l.text, xScale.getPixelForValue(l.x), yScale.getPixelForValue(l.y));
+      ctx.restore();
+    }
+  };
 }

@@ -20,7 +20,7 @@ import {
   type ChartConfiguration,
   type Plugin
 } from 'chart.js';
-import { chartConfig, equalUnitsAspectRatio, FALLBACK_PALETTE, seriesColor, type ChartPalette } from './chart-config';
+import { chartConfig, equalUnitsAspectRatio, FALLBACK_PALETTE, labelPlugin, seriesColor, type ChartPalette } from './chart-config';
 import { SLIDE_SIZE, type SlideHeader } from './slide';
 import type { ChartSpec } from './spec';
 
@@ -146,7 +146,7 @@ export function mountChart(canvas: HTMLCanvasElement, spec: ChartSpec): ChartHan
   const live: Live = { spec, palette: readPalette(canvas) };
   const make = () => {
     const config = chartConfig(live.spec, live.palette);
-    config.plugins = [backgroundPlugin(live), errorBarPlugin(live), equalUnitsPlugin(live)];
+    config.plugins = [backgroundPlugin(live), errorBarPlugin(live), equalUnitsPlugin(live), labelPlugin(() => live)];
     return new Chart(canvas, config);
   };
   let chart = make();

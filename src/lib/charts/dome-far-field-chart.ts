@@ -17,8 +17,10 @@ export interface FarFieldSample {
 export interface FarFieldInput {
   /** Bins of equal width in θ, from 0° up, in order. */
   bins: readonly FarFieldSample[];
-  /** Full width at half maximum (°), or null when it does not exist. */
+  /** Full width at half maximum (°, at most 180), or null when it does not exist. */
   beamAngleDeg: number | null;
+  /** Why there is no beam angle (e.g. wider than 180°), for the text alternative. */
+  beamAngleNote?: string | null;
   /** Mean intensity over the 0–5° cap over I0, or null. */
   onAxisVsLambertian: number | null;
   /** Draw up to 180° (light escapes below the horizon) instead of 0–90°. */
@@ -115,7 +117,7 @@ export function domeFarFieldChart(input: FarFieldInput, group = 3): ChartSpec {
   const ratio = input.onAxisVsLambertian;
   const facts = empty
     ? 'no light escaped in this trace, so only the Lambertian reference is drawn'
-    : `beam angle (full width at half maximum) ${beam !== null && Number.isFinite(beam) ? `${beam.toFixed(1)}°` : 'not defined'}; on-axis intensity ${ratio !== null && Number.isFinite(ratio) ? `${ratio.toFixed(2)} times` : 'not available against'} a Lambertian of the same flux`;
+    : `beam angle (full width at half maximum) ${beam !== null && Number.isFinite(beam) ? `${beam.toFixed(1)}°` : `not defined${input.beamAngleNote ? ` (${input.beamAngleNote.replace(/\.$/, '')})` : ''}`}; on-axis intensity ${ratio !== null && Number.isFinite(ratio) ? `${ratio.toFixed(2)} times` : 'not available against'} a Lambertian of the same flux`;
   return {
     kind: 'line',
     title: 'Far field: intensity against polar angle',

@@ -3,6 +3,7 @@
  * error, and the likely reasons; and what the "lost" share of the ledger means. Pure: numbers in,
  * sentences out, so the rules are tested in Node.
  */
+import { fmtIndex, fmtPlain, fmtPoints } from '../components/format';
 import type { TracePackage } from '../trace/package-spec';
 import type { LedgerFractions } from './dome-ledger-chart';
 
@@ -52,6 +53,8 @@ export interface GapFinding {
   headline: string;
   /** Likely causes, most likely first; empty when they agree. */
   reasons: GapReason[];
+  /** Why a larger dome changes nothing, when the dome is a hemisphere past the no-TIR radius; else null. */
+  radiusNote: string | null;
 }
 
 /** Disagreement threshold: k standard errors (k = 3) and at least 1 % absolute. */
@@ -68,9 +71,7 @@ function pct(x: number): string {
 
 /** A difference of two fractions in percentage points: 0.311 → "31.1 percentage points". */
 function points(x: number): string {
-  const v = x * 100;
-  const text = v >= 10 ? v.toFixed(1) : v >= 1 ? v.toFixed(2) : v.toPrecision(2);
-  return `${text} percentage ${text === '1.00' ? 'point' : 'points'}`;
+  return fmtPoints(x, 3);
 }
 
 function mm(x: number): string {
@@ -94,7 +95,8 @@ export function domeGap(pkg: TracePackage, closed: ClosedFormFacts, trace: Trace
     : disagree
       ? `The trace is ${points(Math.abs(delta))} ${sign} than the closed form: more than ${GAP_K} standard errors (${points(GAP_K * sigma)}) and more than ${points(GAP_MIN_ABS)}.`
       : `The trace and the closed form agree within ${GAP_K} standard errors (${points(GAP_K * sigma)}) or ${points(GAP_MIN_ABS)}: they differ by ${points(Math.abs(delta))}.`;
-  if (!disagree) return { delta, sigma, disagree, headline, reasons: [] };
+  const note = radiusNote(pkg, closed);
+  if (!disagree) return { delta, sigma, disagree, headline, reasons: [], radiusNote: note };
 
   const reasons: GapReason[] = [];
   const enc = pkg.encapsulant;
@@ -149,14 +151,14 @@ export function domeGap(pkg: TracePackage, closed: ClosedFormFacts, trace: Trace
       reason: {
         key: 'chip-absorption',
         text:
-          `Re-absorption in the chip: ${pct(L.chip)} of the light is absorbed in the chip (α = ${pkg.chip.absorptionPerMm} /mm) ` +
+          `Re-absorption in the chip: ${pct(L.chip)} of the light is absorbed in the chip (α = ${fmtPlain(pkg.chip.absorptionPerMm)} /mm) ` +
           'while it bounces outside the escape cones; the closed form assumes a single pass without absorption.'
       }
     });
   }
   if (L.base >= LOSS_NOTE_MIN) {
     const what =
-      pkg.base.kind === 'reflectance' ? `reflectance ${pkg.base.reflectance}` : `a metal, n + ik = ${pkg.base.n} + ${pkg.base.k}i`;
+      pkg.base.kind === 'reflectance' ? `reflectance ${pkg.base.reflectance}` : `a metal, n + ik = ${fmtIndex(pkg.base.n, pkg.base.k, 3)}`;
     losses.push({
       share: L.base,
       reason: {
@@ -170,7 +172,7 @@ export function domeGap(pkg: TracePackage, closed: ClosedFormFacts, trace: Trace
       share: L.encapsulant,
       reason: {
         key: 'encapsulant-absorption',
-        text: `Absorption in the encapsulant: ${pct(L.encapsulant)} of the light is absorbed on its way through (α = ${enc.absorptionPerMm} /mm); the closed form takes the encapsulant as clear.`
+        text: `Absorption in the encapsulant: ${pct(L.encapsulant)} of the light is absorbed on its way through (α = ${fmtPlain(enc.absorptionPerMm)} /mm); the closed form takes the encapsulant as clear.`
       }
     });
   }
@@ -190,7 +192,30 @@ export function domeGap(pkg: TracePackage, closed: ClosedFormFacts, trace: Trace
   } else {
     reasons.push(...losses.map((l) => l.reason));
   }
-  return { delta, sigma, disagree, headline, reasons };
+  return { delta, sigma, disagree, headline, reasons, radiusNote: note };
+}
+
+/**
+ * Why a hemispherical dome at or past the no-TIR radius R ≥ r·n_enc/n_out gains nothing from growing:
+ * a point at distance ≤ r from the centre meets the sphere at sin θ ≤ r/R (sine rule), so every ray
+ * is already inside the critical angle; a larger R only lengthens the path through the encapsulant.
+ * Null for other shapes (the sine rule is for a sphere centred on the chip) and below the radius
+ * (the findings name that as a cause instead).
+ * @see M. Born, E. Wolf, Principles of Optics, §4.2.3 (aplanatic points of a sphere, r = R/n)
+ */
+export function radiusNote(pkg: TracePackage, closed: ClosedFormFacts): string | null {
+  const enc = pkg.encapsulant;
+  if (enc.shape !== 'dome' || !closed.noTir || Math.abs(enc.heightMm / enc.radiusMm - 1) > 0.01) return null;
+  const absorbs = enc.absorptionPerMm > 0;
+  return (
+    `The dome's radius (${mm(enc.radiusMm)}) is already past the no-TIR radius (${mm(closed.minRadiusNoTirMm)}: ` +
+    "half-diagonal × encapsulant index ÷ outside index). Every ray from the chip already meets the dome inside its " +
+    'critical angle, so a larger dome has no trapped light left to free: the extraction is set by the ' +
+    'indices, the chip and the base, not by the radius. ' +
+    (absorbs
+      ? `A larger dome only lengthens the path through the encapsulant, which absorbs (α = ${fmtPlain(enc.absorptionPerMm)} /mm), so it loses a little more light.`
+      : 'In this clear encapsulant a larger dome only moves where the few per cent it reflects back land on the base, so the extraction barely changes.')
+  );
 }
 
 /**

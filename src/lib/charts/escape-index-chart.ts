@@ -39,7 +39,7 @@ export function escapeIndexChart(nIn: number, nOutNow: number, escape: EscapeFn,
       `Line chart of the escape fraction through one flat face, in percent, against the surrounding index from ${fmt(lo, 3)} to ${fmt(hi, 4)}, ` +
       `for light starting in index ${fmt(nIn, 4)}: geometric cone and Fresnel-weighted. ` +
       `At the chosen surrounding index ${fmt(nOutNow, 4)} the Fresnel-weighted fraction is ${fmt(now.fresnel * 100, 3)} percent.`,
-    x: { title: 'Surrounding index n_out', min: lo, max: hi },
+    x: { title: 'Surrounding index nₒᵤₜ', min: lo, max: hi },
     y: { title: 'Escape, one face (%)', min: 0, max: top },
     series: [
       { label: 'Geometric cone (1 − cos θc)/2', points: geometric, color: 3, dashed: true },

@@ -2,9 +2,10 @@
  * A far-field (angular intensity) plot drawn in x–y: each sample at polar angle θ from the package
  * normal (+z) with intensity I is placed at (I·sin θ, I·cos θ), so the curve's distance from the
  * origin is the intensity in that direction. Thin guide circles mark 25, 50, 75 and 100 % of the
- * largest intensity; guide rays mark every 30°.
+ * largest intensity; guide rays mark every 30°, each labelled with its angle from the normal just
+ * beyond the outer circle (unsigned: the far field of a package is symmetric about its normal).
  */
-import type { ChartPoint, ChartSpec, SeriesSpec } from './spec';
+import type { ChartLabel, ChartPoint, ChartSpec, SeriesSpec } from './spec';
 
 export interface PolarSeriesInput {
   label: string;
@@ -26,6 +27,9 @@ export interface PolarChartOptions {
 
 const GUIDE_FRACTIONS = [0.25, 0.5, 0.75, 1];
 const GUIDE_STEPS = 48;
+/** Angle labels sit at this multiple of the outer circle's radius; the axes reach a little beyond. */
+const LABEL_RADIUS = 1.1;
+const AXIS_REACH = 1.2;
 
 function arc(radius: number, lower: boolean): ChartPoint[] {
   const pts: ChartPoint[] = [];
@@ -69,8 +73,12 @@ export function polarChart(input: PolarSeriesInput[], opts: PolarChartOptions): 
     color: 0,
     role: 'guide' as const
   }));
+  const labels: ChartLabel[] = [];
   for (let deg = lower ? -180 : -90; deg <= (lower ? 150 : 90); deg += 30) {
     const t = (deg * Math.PI) / 180;
+    // On the horizon of a half-plane plot the label sits just above the axis, inside the plot.
+    const lift = !lower && Math.abs(deg) === 90 ? 0.06 * R : 0;
+    labels.push({ x: LABEL_RADIUS * R * Math.sin(t), y: LABEL_RADIUS * R * Math.cos(t) + lift, text: `${Math.abs(deg)}°` });
     guides.push({
       label: `${deg}°`,
       points: [
@@ -82,7 +90,7 @@ export function polarChart(input: PolarSeriesInput[], opts: PolarChartOptions): 
     });
   }
 
-  const m = 1.05 * R;
+  const m = AXIS_REACH * R;
   const rows: (string | number)[][] = [];
   input.forEach((s) => {
     const n = Math.min(s.thetaRad.length, s.intensity.length);
@@ -104,6 +112,7 @@ export function polarChart(input: PolarSeriesInput[], opts: PolarChartOptions): 
     x: { title: `${opts.intensityLabel} · sin θ`, min: -m, max: m },
     y: { title: `${opts.intensityLabel} · cos θ`, min: lower ? -m : 0, max: m },
     series: [...guides, ...data],
+    labels,
     csv: { headers: ['series', 'angle from normal θ (°)', opts.intensityLabel], rows }
   };
 }

@@ -49,6 +49,13 @@ export interface AxisSpec {
   log?: boolean;
 }
 
+/** A short text drawn in the plot at data coordinates (x, y), centred there: a polar plot's angle marks. */
+export interface ChartLabel {
+  x: number;
+  y: number;
+  text: string;
+}
+
 export interface ChartSpec {
   kind: ChartKind;
   /** Shown above the chart and used in file names and button labels. */
@@ -60,6 +67,8 @@ export interface ChartSpec {
   series: SeriesSpec[];
   /** Bar charts: category names; a bar series' point x is the category's index. */
   categories?: string[];
+  /** Texts drawn inside the plot area (e.g. "30°" at the end of a polar guide ray). */
+  labels?: ChartLabel[];
   /** CSV to export instead of the default table built from the series (e.g. polar: angle and intensity). */
   csv?: { headers: string[]; rows: (string | number)[][] };
 }

@@ -35,10 +35,31 @@ export function fmtNumber(x: number, digits = 4, reason = 'not defined'): string
   return text === '-0' || /^-0\.0*$/.test(text) ? text.slice(1) : text;
 }
 
-/** A fraction as a percentage with `digits` significant digits: 0.04174 → "4.174 %". */
+/** Percentages below this magnitude print as "< 0.001 %": nothing on a page is known that finely. */
+export const SMALLEST_PERCENT = 0.001;
+
+/**
+ * A fraction as a percentage with `digits` significant digits: 0.04174 → "4.174 %". A share smaller
+ * than 0.001 % in magnitude prints "< 0.001 %" ("> −0.001 %" below zero) rather than a power of ten,
+ * and a share of 10⁶ % or more keeps the power of ten of {@link fmtNumber}.
+ */
 export function fmtPercent(fraction: number, digits = 4, reason = 'not defined'): string {
   if (typeof fraction !== 'number' || !Number.isFinite(fraction)) return missing(reason);
-  return `${fmtNumber(fraction * 100, digits)} %`;
+  const pct = fraction * 100;
+  if (pct !== 0 && Math.abs(pct) < SMALLEST_PERCENT) return pct > 0 ? `< ${SMALLEST_PERCENT} %` : `> −${SMALLEST_PERCENT} %`;
+  // Rounding to `digits` may still land below the floor (0.0010004 → "0.001000"): that is fine, it is ≥ it.
+  return `${fmtNumber(pct, digits)} %`;
+}
+
+/**
+ * A difference of two fractions in percentage points, `digits` significant digits, the same floor as
+ * {@link fmtPercent}: 0.311 → "31.1 percentage points", 0.01 → "1.00 percentage point",
+ * 1.6e-9 → "< 0.001 percentage points".
+ */
+export function fmtPoints(difference: number, digits = 3, reason = 'not defined'): string {
+  if (typeof difference !== 'number' || !Number.isFinite(difference)) return missing(reason);
+  const text = fmtPercent(difference, digits).replace(/ %$/, '');
+  return `${text} percentage ${/^1(\.0*)?$/.test(text) ? 'point' : 'points'}`;
 }
 
 /** An angle given in radians, printed in degrees: 0.41152 → "23.58°". */

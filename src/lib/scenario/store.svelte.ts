@@ -8,7 +8,7 @@ import { browser } from '$app/environment';
 import { replaceState } from '$app/navigation';
 import { page } from '$app/state';
 import { DEMO_SCENARIO, demoScenario } from './defaults';
-import { loadSaved } from '$lib/components/saved-item';
+import { loadSaved } from './saved-item';
 import { readScenario } from './read-scenario';
 import { resolveScenario, type ResolvedScenario } from './resolve';
 import { parseScenario, type ParseResult, type Scenario } from './schema';

@@ -56,7 +56,7 @@ export function planRadiusSweep(pkg: TracePackage, values: readonly number[] = D
     closedFormLine: line,
     closedFormLabel: 'Closed form (point source, one face)',
     skipped,
-    marker: { x: noTir, label: `No-TIR radius R/r = ${Number(noTir.toPrecision(3))}` },
+    marker: { x: noTir, label: `No total internal reflection from here (no-TIR radius): R/r = ${Number(noTir.toPrecision(3))}` },
     currentX: current >= first && current <= last ? current : null
   };
 }

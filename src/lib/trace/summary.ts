@@ -9,11 +9,13 @@
  * I0 = Φ/π (so a Lambertian reads cos θ).
  * - onAxisVsLambertian: mean intensity over the 0–5° cap over I0 (a Lambertian gives (1 + cos 5°)/2
  *   = 0.9981; the cap keeps the count large enough to be steady).
- * - beamAngleDeg: full angle at half maximum. Each bin's intensity is smoothed over ±2 bins (counts
- *   over solid angle of the 5° window, clipped at 0° and 180°); from the peak outward the first
- *   crossing below half the peak is interpolated linearly between bin centres; the full angle is
- *   twice that polar angle (so it exceeds 180° when the half-maximum lies below the horizon). null
- *   when nothing escaped or the intensity never falls to half.
+ * - beamAngleDeg: full width at half maximum (FWHM), at most 180°. Each bin's intensity is smoothed
+ *   over ±2 bins (counts over solid angle of the 5° window, clipped at 0° and 180°); from the peak
+ *   outward the first crossing below half the peak is interpolated linearly between bin centres; the
+ *   full angle is twice that polar angle. When the intensity is still above half its peak at the
+ *   horizon (the crossing lies more than half a bin below 90°) the width is not a beam angle of the
+ *   upper half space: beamAngleDeg is null and beamAngleNote says so. null, with its reason in
+ *   beamAngleNote, also when nothing escaped or the intensity never falls to half.
  * Sources: Lambertian I(θ) = I0 cos θ with Φ = π I0 and FWHM 120° (common practice); solid angle of a
  * polar zone 2π (cos θ1 − cos θ2) (common practice).
  */
@@ -76,7 +78,10 @@ export interface TraceSummary {
   /** Set when geometry errors occurred. */
   geometryNote: string | null;
   farField: {
+    /** Full width at half maximum, degrees, in [0, 180]; null when not defined (see beamAngleNote). */
     beamAngleDeg: number | null;
+    /** Why beamAngleDeg is null, as a sentence; null when it is defined. */
+    beamAngleNote: string | null;
     onAxisVsLambertian: number | null;
     bins: FarFieldBin[];
   };
@@ -85,6 +90,8 @@ export interface TraceSummary {
 const RAD = Math.PI / 180;
 const ON_AXIS_CAP_DEG = 5;
 const SMOOTH_HALF_WIDTH = 2;
+/** Half a 1° bin: a half-maximum crossing closer to the horizon than this is read as at the horizon. */
+const HORIZON_SLACK_DEG = 0.5;
 
 /** Solid angle of the polar zone [θ1, θ2] in degrees: 2π (cos θ1 − cos θ2), steradians. */
 function zoneSolidAngle(theta1Deg: number, theta2Deg: number): number {
@@ -101,7 +108,7 @@ function farField(histogram: Float64Array, escaped: number): TraceSummary['farFi
   const bins: FarFieldBin[] = [];
   if (escaped === 0) {
     for (let i = 0; i < POLAR_BINS; i++) bins.push({ thetaDeg: i + 0.5, relativeIntensity: 0 });
-    return { beamAngleDeg: null, onAxisVsLambertian: null, bins };
+    return { beamAngleDeg: null, beamAngleNote: 'No light escaped, so there is no beam to measure.', onAxisVsLambertian: null, bins };
   }
   const i0 = escaped / Math.PI;
   for (let i = 0; i < POLAR_BINS; i++) {
@@ -128,17 +135,27 @@ function farField(histogram: Float64Array, escaped: number): TraceSummary['farFi
       peakBin = i;
     }
   }
-  let beamAngleDeg: number | null = null;
+  let halfMaxDeg: number | null = null;
   const half = peak / 2;
   for (let i = peakBin + 1; i < POLAR_BINS; i++) {
     if (smooth[i] < half) {
       // linear interpolation between bin centres i − 1 + 0.5 and i + 0.5
       const f = (smooth[i - 1] - half) / (smooth[i - 1] - smooth[i]);
-      beamAngleDeg = 2 * (i - 0.5 + f);
+      halfMaxDeg = i - 0.5 + f;
       break;
     }
   }
-  return { beamAngleDeg, onAxisVsLambertian, bins };
+  if (halfMaxDeg === null) {
+    return { beamAngleDeg: null, beamAngleNote: 'The intensity never falls to half its peak, so the beam has no half-maximum width.', onAxisVsLambertian, bins };
+  }
+  if (halfMaxDeg > 90 + HORIZON_SLACK_DEG) {
+    const note =
+      `Wider than 180°: the intensity is still above half its peak at the horizon and falls to half only ` +
+      `${(halfMaxDeg - 90).toFixed(1)}° below it, because light leaves the package heading downwards ` +
+      `(out of its sides, close to the base). A mounting board would block that part.`;
+    return { beamAngleDeg: null, beamAngleNote: note, onAxisVsLambertian, bins };
+  }
+  return { beamAngleDeg: Math.min(180, 2 * halfMaxDeg), beamAngleNote: null, onAxisVsLambertian, bins };
 }
 
 const PART_KINDS: readonly LedgerPart['kind'][] = ['escaped', 'medium', 'surface', 'lost'];

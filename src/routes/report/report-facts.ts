@@ -60,7 +60,7 @@ export function closedFormRows(s: Scenario, r: ResolvedScenario): FactRow[] {
     rows.push(
       ['Under a dome of the encapsulant, one face', fmtPercent(d.etaDome, 4)],
       ['Dome gain, ideal one-face reference', fmtUnit(d.gain, '×', 4)],
-      ['No-TIR dome radius r·n_enc/n_out', fmtUnit(d.minRadiusNoTirMm, 'mm', 4)],
+      ['No-TIR dome radius (no total internal reflection): half-diagonal × encapsulant index ÷ outside index', fmtUnit(d.minRadiusNoTirMm, 'mm', 4)],
       ['Scenario dome large enough for no TIR', d.noTir ? 'yes' : 'no: light from the corners is trapped']
     );
   }

@@ -6,7 +6,7 @@
 import { browser } from '$app/environment';
 import { replaceState } from '$app/navigation';
 import { page } from '$app/state';
-import { loadSaved } from '$lib/components/saved-item';
+import { loadSaved } from '$lib/scenario/saved-item';
 import { userMaterials } from '$lib/materials-user';
 import { carryUserMaterials, checkStack, defaultStack, type StackDoc } from './stack-doc';
 import { decodeStackParam, encodeStackParam, STACK_PARAM } from './stack-url';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { chartConfig, equalUnitsAspectRatio, FALLBACK_PALETTE, seriesColor } from '../../../src/lib/charts/chart-config';
+import { chartConfig, equalUnitsAspectRatio, FALLBACK_PALETTE, labelPlugin, seriesColor } from '../../../src/lib/charts/chart-config';
 import { polarChart } from '../../../src/lib/charts/polar-chart';
 import type { ChartSpec } from '../../../src/lib/charts/spec';
 
@@ -75,5 +75,19 @@ describe('equalUnitsAspectRatio(canvasW, canvasH, plotW, plotH, xSpan, ySpan)', 
     expect(equalUnitsAspectRatio(400, 300, 340, 200, 0.01, 10)).toBe(0.5);
     expect(equalUnitsAspectRatio(400, 300, 340, 200, 100, 0.01)).toBe(3);
     expect(equalUnitsAspectRatio(0, 0, 0, 0, 1, 1)).toBe(2);
+  });
+});
+
+describe('labelPlugin(current)', () => {
+  it("draws each of the spec's labels at its data coordinates, in the muted ink, after the datasets", () => {
+    const drawn: [string, number, number][] = [];
+    const ctx = { save() {}, restore() {}, fillText: (t: string, x: number, y: number) => drawn.push([t, x, y]), fillStyle: '', font: '', textAlign: '', textBaseline: '' };
+    const scale = (k: number) => ({ getPixelForValue: (v: number) => k * v });
+    const spec = { ...line, labels: [{ x: 1, y: 2, text: '30°' }] };
+    const plugin = labelPlugin(() => ({ spec, palette: FALLBACK_PALETTE }));
+    const chart = { ctx, scales: { x: scale(10), y: scale(-5) } };
+    (plugin.afterDatasetsDraw as unknown as (c: unknown) => void)(chart);
+    expect(drawn).toEqual([['30°', 10, -10]]);
+    expect(ctx.fillStyle).toBe(FALLBACK_PALETTE.muted);
   });
 });

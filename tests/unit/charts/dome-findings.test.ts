@@ -1,16 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { domeGap, lostExplanation, type TraceFacts } from '../../../src/lib/charts/dome-findings';
+import { domeGap, lostExplanation, radiusNote, type TraceFacts } from '../../../src/lib/charts/dome-findings';
 import type { TracePackage } from '../../../src/lib/trace/package-spec';
+import { domePackage } from '../../support/fixtures';
 
-function pkg(): TracePackage {
-  return {
-    chip: { widthMm: 1, lengthMm: 1, heightMm: 0.15, n: 2.49, absorptionPerMm: 0.5, emitterZMm: 0.14, emission: 'plane' },
-    base: { kind: 'reflectance', reflectance: 0.92 },
-    encapsulant: { shape: 'dome', radiusMm: 2.5, heightMm: 2.5, n: 1.42, absorptionPerMm: 0.001 },
-    outsideN: 1,
-    polarization: 'average'
-  };
-}
+const pkg = domePackage;
+
 
 function trace(extraction: number, stderr: number, ledger: Partial<TraceFacts['ledger']> = {}): TraceFacts {
   const L = { escaped: extraction, chip: 0, encapsulant: 0, base: 0, lost: 0, ...ledger };
@@ -92,5 +86,28 @@ describe('lostExplanation(pkg, trace)', () => {
   it('says nothing below 1 % lost and no geometry errors; reports geometry errors on their own', () => {
     expect(lostExplanation(pkg(), trace(0.3, 0.001, { lost: 0.009 }))).toBeNull();
     expect(lostExplanation(pkg(), { ...trace(0.3, 0.001), geometryErrors: 3 })).toMatch(/3 rays stopped on a geometry error/);
+  });
+});
+
+describe('radiusNote(pkg, closed)', () => {
+  it('explains that a hemisphere past the no-TIR radius gains nothing from growing, and names the absorption', () => {
+    const text = radiusNote(pkg(), closed)!;
+    expect(text).toMatch(/2\.5 mm\) is already past the no-TIR radius \(1 mm/);
+    expect(text).toMatch(/absorbs \(α = 0\.001 \/mm\)/);
+    const clear = domePackage();
+    clear.encapsulant.absorptionPerMm = 0;
+    expect(radiusNote(clear, closed)).toMatch(/clear encapsulant/);
+  });
+
+  it('says nothing below the no-TIR radius, for a flattened dome or for a cylinder', () => {
+    expect(radiusNote(pkg(), { ...closed, noTir: false })).toBeNull();
+    const flat = domePackage();
+    flat.encapsulant.heightMm = 1;
+    expect(radiusNote(flat, closed)).toBeNull();
+    expect(radiusNote({ ...pkg(), encapsulant: { ...pkg().encapsulant, shape: 'cylinder' } }, closed)).toBeNull();
+  });
+
+  it('comes with every gap finding, agreeing or not', () => {
+    expect(domeGap(pkg(), closed, trace(0.0753, 0.001)).radiusNote).toBe(radiusNote(pkg(), closed));
   });
 });

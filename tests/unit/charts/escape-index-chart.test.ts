@@ -12,11 +12,11 @@ describe('escapeIndexChart', () => {
     expect(geo.points).toHaveLength(61);
     expect(geo.points[0].x).toBe(1);
     expect(geo.points[60].x).toBe(2.5);
-    expect(spec.x).toMatchObject({ title: 'Surrounding index n_out', min: 1, max: 2.5 });
+    expect(spec.x).toMatchObject({ title: 'Surrounding index nₒᵤₜ', min: 1, max: 2.5 });
     expect(spec.y.title).toBe('Escape, one face (%)');
   });
 
-  // Computed check values from the project physics notes, §2 (given to 4 digits: tolerance half a unit).
+  // Check values computed from the escape-cone integral (Schubert, Light-Emitting Diodes, 2nd ed., ch. 5) (given to 4 digits: tolerance half a unit).
   it('2.5 → 1: geometric 4.174 %, Fresnel-weighted 3.243 %', () => {
     assertInDelta(at(geo.points, 1).y, 4.174, 0.0005);
     assertInDelta(at(fres.points, 1).y, 3.243, 0.0005);

@@ -19,10 +19,10 @@ describe('polarChart', () => {
   it('draws the upper half plane only when all angles are within ±90°, with equal axis ranges', () => {
     const spec = polarChart([{ label: 'a', thetaRad: theta, intensity: theta.map(() => 2) }], { title: 'F', intensityLabel: 'I (W/sr)' });
     expect(spec.kind).toBe('polar');
-    expect(spec.x).toMatchObject({ min: -2.1, max: 2.1 });
-    expect(spec.y).toMatchObject({ min: 0, max: 2.1 });
+    expect(spec.x).toMatchObject({ min: -2.4, max: 2.4 });
+    expect(spec.y).toMatchObject({ min: 0, max: 2.4 });
     const full = polarChart([{ label: 'b', thetaRad: [0, Math.PI], intensity: [1, 1] }], { title: 'F', intensityLabel: 'I' });
-    expect(full.y.min).toBe(-1.05);
+    expect(full.y.min).toBe(-1.2);
   });
 
   it('adds guide circles at 25–100 % of the maximum and guide rays every 30°, left out of the CSV', () => {
@@ -38,6 +38,27 @@ describe('polarChart', () => {
     const spec = polarChart([{ label: 'a', thetaRad: [0, 0.1, NaN], intensity: [NaN, -1, 1] }], { title: 'F', intensityLabel: 'I' });
     expect(spec.series.filter((s) => s.role !== 'guide')[0].points).toHaveLength(0);
     expect(spec.ariaLabel).toBe('F: no intensity to draw yet.');
-    expect(spec.x.max).toBeCloseTo(1.05, 12);
+    expect(spec.x.max).toBeCloseTo(1.2, 12);
+  });
+});
+
+describe('polarChart angle labels', () => {
+  it('labels every 30° guide ray with its unsigned angle from the normal, beyond the outer circle', () => {
+    const spec = polarChart([{ label: 'a', thetaRad: [0], intensity: [2] }], { title: 'F', intensityLabel: 'I' });
+    expect(spec.labels?.map((l) => l.text)).toEqual(['90°', '60°', '30°', '0°', '30°', '60°', '90°']);
+    const zero = spec.labels![3];
+    assertInDelta(zero.x, 0, 1e-12);
+    assertInDelta(zero.y, 2.2, 1e-12);
+    // every label lies inside the axis ranges, so none is clipped
+    for (const l of spec.labels!) {
+      expect(Math.abs(l.x)).toBeLessThanOrEqual(spec.x.max!);
+      expect(l.y).toBeGreaterThanOrEqual(spec.y.min!);
+      expect(l.y).toBeLessThanOrEqual(spec.y.max!);
+    }
+  });
+
+  it('labels the whole circle 0–180° when light heads below the horizon', () => {
+    const spec = polarChart([{ label: 'b', thetaRad: [0, Math.PI], intensity: [1, 1] }], { title: 'F', intensityLabel: 'I' });
+    expect(spec.labels?.map((l) => l.text)).toEqual(['180°', '150°', '120°', '90°', '60°', '30°', '0°', '30°', '60°', '90°', '120°', '150°']);
   });
 });

@@ -24,7 +24,7 @@ describe('stackAngleChart(input)', () => {
   });
 
   it('marks the escape cone with a vertical marker line at the given angle, left out of the CSV', () => {
-    // 24.09° = arcsin(1/2.45), the critical angle 2.45 → air (physics notes, computed)
+    // 24.09° = arcsin(1/2.45), the critical angle 2.45 → air (computed, Snell's law)
     const spec = stackAngleChart({ ...base, criticalDeg: 24.09 });
     const marker = spec.series.find((s) => s.role === 'marker')!;
     expect(marker.points).toEqual([

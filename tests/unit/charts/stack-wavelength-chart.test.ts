@@ -15,7 +15,7 @@ describe('finiteRuns(x, y, scale)', () => {
 
 describe('stackWavelengthChart(input)', () => {
   const w = [400, 500, 600, 700];
-  // 0.04258 = ((1.52 − 1)/(1.52 + 1))², bare glass (physics notes §3, computed); 0.0126 the quarter-wave MgF2 value
+  // 0.04258 = ((1.52 − 1)/(1.52 + 1))², bare glass (computed; incoherent and thin-film stacks: Macleod, Thin-Film Optical Filters, 4th ed., ch. 2); 0.0126 the quarter-wave MgF2 value
   const R = [0.02, 0.0126, 0.018, 0.03];
   const bareR = [0.04258, 0.04258, 0.04258, 0.04258];
 

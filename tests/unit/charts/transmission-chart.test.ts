@@ -33,7 +33,7 @@ describe('transmissionChart', () => {
   it('marks the critical angle asin(1/2.5) = 23.578° with a vertical line from 0 to 100 %', () => {
     const m = spec.series[3];
     expect(m.role).toBe('marker');
-    assertInDelta(m.points[0].x, 23.578, 5e-4); // computed check value 23.58° (physics notes)
+    assertInDelta(m.points[0].x, 23.578, 5e-4); // computed check value 23.58° (computed: θc = asin(n₂/n₁), Snell's law)
     expect(m.points.map((p) => p.y)).toEqual([0, 100]);
     expect(m.points[0].x).toBe(m.points[1].x);
     expect(spec.ariaLabel).toMatch(/critical angle, 23\.58 degrees/);

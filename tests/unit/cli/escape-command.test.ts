@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { runCli, runJson } from './run-cli';
 
 describe('outcouple escape', () => {
-  it('escape --n-in 2.45 --n-out 1 gives θc 24.09°, geometric 0.04355, Fresnel-weighted 0.03408 (physics.md §2, computed)', () => {
+  it('escape --n-in 2.45 --n-out 1 gives θc 24.09°, geometric 0.04355, Fresnel-weighted 0.03408 (computed; escape cone ½∫T sin θ dθ: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5)', () => {
     const out = runJson(['escape', '--n-in', '2.45', '--n-out', '1']);
     expect(out.criticalAngleDeg).toBeCloseTo(24.09, 2);
     expect(Math.abs(out.escapeFractionGeometric - 0.04355)).toBeLessThan(1e-4);
@@ -14,7 +14,7 @@ describe('outcouple escape', () => {
 
   it('escape --in GaN --out air reads both media from the library at the wavelength', () => {
     const out = runJson(['escape', '--in', 'GaN', '--out', 'air', '--wavelength', '450']);
-    expect(out.nIn).toBeCloseTo(2.4869, 3); // Barker & Ilegems 1973 formula at 450 nm (physics.md §5)
+    expect(out.nIn).toBeCloseTo(2.4869, 3); // Barker & Ilegems, Phys. Rev. B 7, 743 (1973), formula at 450 nm
     expect(out.nOut).toBeCloseTo(1, 3);
   });
 

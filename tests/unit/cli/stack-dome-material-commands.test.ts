@@ -9,7 +9,7 @@ describe('outcouple stack', () => {
     expect(out.A).toBeCloseTo(0, 12); // lossless layers
   });
 
-  it('--incoherent 2.5 → 1.5 (thick) → 1 at normal incidence gives T = 0.9023 (physics.md §3, computed)', () => {
+  it('--incoherent 2.5 → 1.5 (thick) → 1 at normal incidence gives T = 0.9023 (computed; incoherent and thin-film stacks: Macleod, Thin-Film Optical Filters, 4th ed., ch. 2)', () => {
     const out = runJson(['stack', '--n-in', '2.5', '--layer', '1.5:1000', '--n-out', '1', '--incoherent']);
     expect(out.T).toBeCloseTo(0.9023, 4);
   });
@@ -29,7 +29,7 @@ describe('outcouple stack', () => {
 });
 
 describe('outcouple dome', () => {
-  it('dome --n-chip 2.45 --n-enc 1.41 --chip 1x1 --radius 2.5: gain ≈ 2.26, no-TIR radius 0.997 mm (physics.md §4, computed)', () => {
+  it('dome --n-chip 2.45 --n-enc 1.41 --chip 1x1 --radius 2.5: gain ≈ 2.26, no-TIR radius 0.997 mm (computed; dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3)', () => {
     const out = runJson(['dome', '--n-chip', '2.45', '--n-enc', '1.41', '--chip', '1x1', '--radius', '2.5']);
     expect(out.etaBare).toBeCloseTo(0.03408, 4);
     expect(out.gain).toBeCloseTo(2.26, 1);

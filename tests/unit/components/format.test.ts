@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { fmtDeg, fmtIndex, fmtNumber, fmtPercent, fmtPlain, fmtUnit, missing, plainName } from '../../../src/lib/components/format';
+import { fmtDeg, fmtIndex, fmtNumber, fmtPercent, fmtPlain, fmtPoints, fmtUnit, missing, plainName } from '../../../src/lib/components/format';
 
 describe('fmtNumber', () => {
   it.each([
@@ -40,6 +40,25 @@ describe('fmtPercent, fmtDeg, fmtUnit, fmtIndex, fmtPlain', () => {
     expect(fmtPercent(0.0417424)).toBe('4.174 %');
     expect(fmtPercent(0.5, 4)).toBe('50.00 %');
     expect(fmtPercent(NaN, 4, 'no data')).toBe('— (no data)');
+  });
+
+  it.each([
+    [4.444e-10, '< 0.001 %'],
+    [1.6e-9, '< 0.001 %'],
+    [-3e-9, '> −0.001 %'],
+    [0, '0 %'],
+    [1e-5, '0.001000 %'],
+    [1.234e-4, '0.01234 %']
+  ])('fmtPercent(%s) is "%s": no power of ten for a tiny share', (x, text) => {
+    expect(fmtPercent(x)).toBe(text);
+    expect(fmtPercent(x)).not.toMatch(/10⁻|e-/);
+  });
+
+  it('fmtPoints names a difference in percentage points, singular for exactly one', () => {
+    expect(fmtPoints(0.311)).toBe('31.1 percentage points');
+    expect(fmtPoints(0.01)).toBe('1.00 percentage point');
+    expect(fmtPoints(1.6e-9)).toBe('< 0.001 percentage points');
+    expect(fmtPoints(NaN)).toBe('— (not defined)');
   });
 
   it('fmtDeg takes radians: asin(1/2.5) → "23.58°" (computed: 23.578°)', () => {

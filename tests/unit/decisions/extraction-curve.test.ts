@@ -2,11 +2,11 @@ import { describe, it, expect } from 'vitest';
 import { extractionCurve } from '../../../src/lib/decisions/extraction-curve';
 import type { TraceSummary } from '../../../src/lib/trace/summary';
 import { rankingChart } from '../../../src/lib/decisions/ranking-chart';
-import { rankEncapsulants, encapsulantCandidates } from '../../../src/lib/decisions/rank-encapsulants';
+import { rankEncapsulants } from '../../../src/lib/decisions/rank-encapsulants';
 import { escapeCone } from '../../../src/lib/optics/index';
-import { findMaterial, listMaterials } from '../../../src/lib/materials/index';
 import { chartTable } from '../../../src/lib/charts/csv';
 import { assertInDelta, EPS } from '../../support/assert';
+import { rankInput } from '../../support/fixtures';
 
 describe('extractionCurve(nChip, nOut, points)', () => {
   it('runs from n = 1 to the chip index; at n = 1 in air it is the bare escape cone (4 ε)', () => {
@@ -29,16 +29,7 @@ describe('extractionCurve(nChip, nOut, points)', () => {
 });
 
 describe('rankingChart(ranking, traced)', () => {
-  const ranking = rankEncapsulants({
-    chip: { material: findMaterial('gan')! },
-    outside: { n: 1 },
-    chipWidthMm: 1,
-    chipLengthMm: 1,
-    radiusMm: 2.5,
-    wavelengthNm: 450,
-    candidates: encapsulantCandidates(listMaterials(), [], { optics: true }),
-    current: { label: 'Methyl silicone', n: 1.41, materialId: 'silicone-methyl' }
-  });
+  const ranking = rankEncapsulants(rankInput({ current: { label: 'Methyl silicone', n: 1.41, materialId: 'silicone-methyl' } }));
   const spec = rankingChart(ranking);
 
   it('places each candidate on the reference curve with its own colour-and-marker pair, and marks the current index', () => {

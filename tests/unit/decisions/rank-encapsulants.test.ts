@@ -1,10 +1,11 @@
 import { describe, it, expect } from 'vitest';
-import { rankEncapsulants, encapsulantCandidates, type RankInput } from '../../../src/lib/decisions/rank-encapsulants';
-import { findMaterial, indexAt, listMaterials } from '../../../src/lib/materials/index';
+import { rankEncapsulants, encapsulantCandidates } from '../../../src/lib/decisions/rank-encapsulants';
+import { listMaterials } from '../../../src/lib/materials/index';
 import type { Material } from '../../../src/lib/materials/types';
 import { gaussianSpectrum, monochromatic } from '../../../src/lib/photometry/index';
 import { domeEstimate } from '../../../src/lib/optics/index';
 import { assertInDelta, EPS } from '../../support/assert';
+import { rankInput as input } from '../../support/fixtures';
 
 const userGlass: Material = {
   id: 'user-high-index',
@@ -17,19 +18,6 @@ const userGlass: Material = {
   provenance: 'user supplied'
 };
 
-function input(over: Partial<RankInput> = {}): RankInput {
-  return {
-    chip: { material: findMaterial('gan')! },
-    outside: { n: 1 },
-    chipWidthMm: 1,
-    chipLengthMm: 1,
-    radiusMm: 2.5,
-    wavelengthNm: 450,
-    candidates: encapsulantCandidates(listMaterials(), [], { optics: true }),
-    current: { label: 'Methyl silicone', n: indexAt(findMaterial('silicone-methyl')!, 450).n, materialId: 'silicone-methyl' },
-    ...over
-  };
-}
 
 describe('encapsulantCandidates(library, user)', () => {
   it('takes the library encapsulants (optics only on request) and any non-metal user material', () => {

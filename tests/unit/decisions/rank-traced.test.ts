@@ -6,7 +6,7 @@ import { indexAt } from '../../../src/lib/materials/dispersion';
 import type { Tracer } from '../../../src/lib/runs/tracer';
 import { summarize, type TraceSummary } from '../../../src/lib/trace/summary';
 import { traceSync } from '../../../src/lib/trace/trace';
-import { domePackage, NO_ENCAPSULANT, withEncapsulant } from '../trace/fixtures';
+import { domePackage, NO_ENCAPSULANT, withEncapsulant } from '../../support/fixtures';
 
 const seen: { n: number; seed: number; rays: number }[] = [];
 const syncTracer: Tracer = async (pkg, { rays, seed }) => {

@@ -65,7 +65,7 @@ describe('spectralSummary(scenario)', () => {
   });
 
   it('luminous efficacy of monochromatic radiation is Km·V(λ) (published: CIE 015 / ISO 23539 V(λ); BIPM SI brochure Km = 683 lm/W)', () => {
-    // physics.md §6: V(555) = 1.000, V(450) = 0.038 (CIE 1924, published). Tolerance: half a unit
+    // V(555) = 1.000, V(450) = 0.038 (CIE 1924 photopic V(λ), published in CIE 015 / ISO 23539). Tolerance: half a unit
     // in the last published digit of V, times Km (683 × 0.0005 = 0.34 lm/W).
     assertInDelta(spectralSummary(withEmission({ kind: 'single', wavelengthNm: 555 })).luminousEfficacyLmPerW, 683, 0.34);
     assertInDelta(spectralSummary(withEmission({ kind: 'single', wavelengthNm: 450 })).luminousEfficacyLmPerW, 683 * 0.038, 0.34);
@@ -96,7 +96,7 @@ describe('spectralSummary(scenario)', () => {
   });
 
   it('luminous weighting of a broad blue band favours the long-wavelength side, where a GaN chip escapes more (computed; V(λ) published, CIE 1924)', () => {
-    // Why: V(λ) rises steeply across a blue band (0.038 at 450 nm, 0.323 at 500 nm, physics.md §6), so
+    // Why: V(λ) rises steeply across a blue band (0.038 at 450 nm, 0.323 at 500 nm: CIE 1924 V(λ), CIE 015), so
     // luminous weights lean to longer λ; GaN has normal dispersion (n falls with λ), so there the
     // escape cone is wider and η_F larger. Hence luminous > radiometric for the bare chip.
     const s = spectralSummary(withEmission({ kind: 'gaussian', peakNm: 450, fwhmNm: 30 }));
@@ -145,7 +145,7 @@ describe('spectralSummary(scenario)', () => {
     s.chip.medium = { kind: 'index', n: 2.5, k: 0 };
     s.encapsulant.medium = { kind: 'index', n: 1.5, k: 0 };
     const r = spectralSummary(s);
-    // physics.md §2: η_F(2.5 → 1) = 0.03243 (computed); constant indices give the same value in every mode
+    // escape cone ½∫T sin θ dθ: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5: η_F(2.5 → 1) = 0.03243 (computed); constant indices give the same value in every mode
     assertInDelta(r.bare.atPeak, 0.03243, 5e-6);
     // a sum of 241 shares times one constant: rounding ≤ 241 ulp-sized steps, so 256·ε relative
     const tol = 256 * EPS * r.bare.atPeak;

@@ -40,7 +40,7 @@ describe('readUserMaterialForm(form, takenIds)', () => {
     if (r.ok) assertInDelta(indexAt(r.material, 587.56).n, 1.5168, 5e-5);
   });
 
-  it('keeps the two forms apart: glass-form numbers read as µm give a different index (the commonest bug, physics notes §5)', () => {
+  it('keeps the two forms apart: glass-form numbers read as µm give a different index (the commonest bug, common practice)', () => {
     const asResonance = readUserMaterialForm(form({ name: 'Mixed', model: 'sellmeier', terms: schott.slice(0, 2), rangeMinNm: '300', rangeMaxNm: '2500' }), none);
     const asGlass = readUserMaterialForm(form({ name: 'Mixed', model: 'sellmeier-glass', terms: schott.slice(0, 2), rangeMinNm: '300', rangeMaxNm: '2500' }), none);
     expect(asResonance.ok && asGlass.ok).toBe(true);

@@ -5,14 +5,14 @@ import { matchesFilter, materialRow, modelLabel } from '../../../src/routes/mate
 import { assertInDelta } from '../../support/assert';
 
 describe('materialRow(material, wavelengthNm)', () => {
-  it('gives GaN n(450 nm) = 2.4869 (Barker & Ilegems 1973 formula, physics notes §5, computed; ±5e-5)', () => {
+  it('gives GaN n(450 nm) = 2.4869 (Barker & Ilegems, Phys. Rev. B 7, 743 (1973), formula computed; ±5e-5)', () => {
     const r = materialRow(findMaterial('gan')!, 450);
     assertInDelta(r.n!, 2.4869, 5e-5);
     expect(r.inRange).toBe(true);
     expect(r.model).toBe('Sellmeier (C in µm)');
   });
 
-  it('gives a reason instead of a number across a pole (GaAs formula pole at 874.6 nm, physics notes §5)', () => {
+  it('gives a reason instead of a number across a pole (GaAs formula pole at 874.6 nm: Skauli et al., J. Appl. Phys. 94, 6447 (2003))', () => {
     const r = materialRow(findMaterial('gaas')!, 450);
     expect(r.n).toBeNull();
     expect(r.inRange).toBe(false);

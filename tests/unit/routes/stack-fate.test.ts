@@ -20,7 +20,7 @@ function fate(nChip: number, layers: ExpandedLayer[], nExit: number, exitLabel =
 
 describe('describeFate(input)', () => {
   it('says where each band of angles goes for SiO2 on a 2.45 chip into air', () => {
-    // Critical angles: asin(1/2.45) = 24.09° (physics notes §2, computed); asin(1.46/2.45) = 36.57° (computed).
+    // Critical angles: asin(1/2.45) = 24.09° (computed; escape cone ½∫T sin θ dθ: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5); asin(1.46/2.45) = 36.57° (computed).
     const text = fate(2.45, [layer(1.46, 'SiO2 film', 0)], 1);
     expect(text).toEqual([
       'Rays leaving the chip within 24.1° of the normal reach air; the stack changes only how much of them is reflected on the way (Fresnel losses).',

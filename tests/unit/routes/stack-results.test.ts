@@ -1,5 +1,6 @@
 // Tests of the /stack page's computation (src/routes/stack/stack-results.ts, stack-layers.ts),
-// against the check values of the project's physics notes §2–3.
+// against values computed from the escape-cone integral (Schubert, Light-Emitting Diodes, 2nd ed., ch. 5) and
+// the stack formulas (Macleod, Thin-Film Optical Filters, 4th ed., ch. 2).
 import { describe, expect, it } from 'vitest';
 import { findMaterial } from '../../../src/lib/materials';
 import { defaultStack, type StackDoc, type StackItem } from '../../../src/routes/stack/stack-doc';
@@ -20,13 +21,13 @@ function results(d: StackDoc, nChip: number, nExit: number, wavelengthNm = 450) 
 
 describe('computeStack(doc, chip, exit, wavelengthNm, find)', () => {
   // Tolerance 5e-5: the notes give four decimals, so half a unit in the last place.
-  it('incoherent 2.5 → 1.5 → 1.0 at normal incidence: T = 0.9023, bare 0.8163 (physics notes §3, computed)', () => {
+  it('incoherent 2.5 → 1.5 → 1.0 at normal incidence: T = 0.9023, bare 0.8163 (computed; incoherent and thin-film stacks: Macleod, Thin-Film Optical Filters, 4th ed., ch. 2)', () => {
     const r = results(doc('thick', [typed(1.5, 1e6)]), 2.5, 1);
     assertInDelta(r.normal.T, 0.9023, 5e-5);
     assertInDelta(1 - r.bareNormalR, 0.8163, 5e-5);
   });
 
-  it('incoherent geometric ladder 2.5 → 1 in N equal-ratio steps: N = 2: 0.9035, 5: 0.9596 (physics notes §3, computed)', () => {
+  it('incoherent geometric ladder 2.5 → 1 in N equal-ratio steps: N = 2: 0.9035, 5: 0.9596 (computed; incoherent and thin-film stacks: Macleod, Thin-Film Optical Filters, 4th ed., ch. 2)', () => {
     for (const [N, T] of [
       [2, 0.9035],
       [5, 0.9596]
@@ -37,7 +38,7 @@ describe('computeStack(doc, chip, exit, wavelengthNm, find)', () => {
     }
   });
 
-  it('quarter-wave MgF2 (1.38) on glass (1.52) at the design wavelength: R = 0.01260, bare 0.04258 (physics notes §3; ±5e-6)', () => {
+  it('quarter-wave MgF2 (1.38) on glass (1.52) at the design wavelength: R = 0.01260, bare 0.04258 (incoherent and thin-film stacks: Macleod, Thin-Film Optical Filters, 4th ed., ch. 2; ±5e-6)', () => {
     const r = results(doc('thin', [typed(1.38, 550 / (4 * 1.38))]), 1.52, 1, 550);
     assertInDelta(r.normal.R, 0.0126, 5e-6);
     assertInDelta(r.bareNormalR, 0.04258, 5e-6);
@@ -48,7 +49,7 @@ describe('computeStack(doc, chip, exit, wavelengthNm, find)', () => {
     assertInDelta(r.normal.R, r.bareNormalR, 1e-12);
   });
 
-  it('no layers gives the bare escape cone: 2.45 → 1, θc 24.09°, η_F 0.03408 (physics notes §2, computed; ±5e-6)', () => {
+  it('no layers gives the bare escape cone: 2.45 → 1, θc 24.09°, η_F 0.03408 (computed; escape cone ½∫T sin θ dθ: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; ±5e-6)', () => {
     const r = results(doc('thin', []), 2.45, 1);
     assertInDelta(r.escapeConeDeg!, 24.09, 5e-3);
     assertInDelta(r.extraction.fresnel, 0.03408, 5e-6);
@@ -108,7 +109,7 @@ describe('reflectanceSpectrum(items, chipAt, exitAt, find, from, to, points)', (
       return 1;
     }, find, 500, 800, 7);
     expect(s.wavelengthNm).toEqual([500, 550, 600, 650, 700, 750, 800]);
-    assertInDelta(s.R[1], 0.0126, 5e-6); // the quarter-wave design point (physics notes §3)
+    assertInDelta(s.R[1], 0.0126, 5e-6); // the quarter-wave design point (incoherent and thin-film stacks: Macleod, Thin-Film Optical Filters, 4th ed., ch. 2)
     expect(s.R[1]).toBeLessThan(s.R[0]);
     expect(Number.isNaN(s.R[5]) && Number.isNaN(s.bareR[6])).toBe(true);
   });
@@ -116,7 +117,7 @@ describe('reflectanceSpectrum(items, chipAt, exitAt, find, from, to, points)', (
 
 describe('computeStack notes', () => {
   it('warns that thick-layer mode is the wrong model for a metal film, and not in thin-film mode', () => {
-    // Silver at 550 nm, n = 0.04382, k = 3.6101 (McPeak et al. 2015, physics notes §1)
+    // Silver at 550 nm, n = 0.04382, k = 3.6101 (K. M. McPeak et al., ACS Photonics 2, 326 (2015))
     const silver = typed(0.04382, 20, 3.6101);
     const thick = computeStack(doc('thick', [silver]), medium(2.45), medium(1), 550, find);
     expect(thick.ok && thick.results.notes.join(' ')).toMatch(/Use thin-film mode for metal/);

@@ -5,7 +5,7 @@ import { packageKey } from '../../../src/lib/runs/trace-key';
 import type { Tracer } from '../../../src/lib/runs/tracer';
 import { summarize } from '../../../src/lib/trace/summary';
 import { traceSync } from '../../../src/lib/trace/trace';
-import { domePackage, NO_ENCAPSULANT, withEncapsulant } from '../trace/fixtures';
+import { domePackage, NO_ENCAPSULANT, withEncapsulant } from '../../support/fixtures';
 
 /** The synchronous tracer as a Tracer, reporting progress in two steps. */
 const syncTracer: Tracer = async (pkg, { rays, seed, onProgress }) => {

@@ -4,7 +4,7 @@ import type { Tracer } from '../../../src/lib/runs/tracer';
 import { packageKey, traceKey, canonicalJson, fnv1a64 } from '../../../src/lib/runs/trace-key';
 import { summarize } from '../../../src/lib/trace/summary';
 import { traceSync } from '../../../src/lib/trace/trace';
-import { domePackage } from '../trace/fixtures';
+import { domePackage } from '../../support/fixtures';
 
 /** An in-memory Web Storage stand-in; `quota` refuses texts longer than it. */
 function memoryStore(quota = Infinity): TextStore & { data: Map<string, string> } {

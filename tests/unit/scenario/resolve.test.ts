@@ -14,7 +14,7 @@ describe('designWavelengthNm', () => {
 
 describe('resolveScenario', () => {
   it('GaN at 450 nm: n = 2.4869 from the Barker & Ilegems (Phys. Rev. B 7, 743, 1973) formula', () => {
-    // Check value computed from the published formula (project physics notes §5). Tolerance 5e-4: the
+    // Check value computed from the published formula (Barker & Ilegems, Phys. Rev. B 7, 743 (1973)). Tolerance 5e-4: the
     // library may round its coefficients; sources spread ±0.05, so this only pins the formula used.
     const r = resolveScenario(DEMO_SCENARIO);
     expect(r.wavelengthNm).toBe(450);

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { flipChipOnSapphire, singleBoxChip, thinFilmChip } from '../../../src/lib/trace/chip-presets';
 import { validateTracePackage } from '../../../src/lib/trace/package-spec';
-import { domePackage } from './fixtures';
+import { domePackage } from '../../support/fixtures';
 
 describe('chip presets', () => {
   it('flipChipOnSapphire(): GaN emitting below the sapphire, on its own mirror, valid in a package', () => {

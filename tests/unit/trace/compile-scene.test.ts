@@ -3,7 +3,7 @@ import { compileScene } from '../../../src/lib/trace/compile-scene';
 import { packageScene } from '../../../src/lib/trace/package-scene';
 import type { SceneDescription } from '../../../src/lib/trace/scene';
 import { BOUNDARY_BOX, BOUNDARY_LIST, MEDIUM_STRIDE, M_BOUNDARY, M_LIST_COUNT, SURFACE_STRIDE, S_BEHAVIOUR, BEHAVIOUR_MIRROR } from '../../../src/lib/trace/scene-layout';
-import { domePackage } from './fixtures';
+import { domePackage } from '../../support/fixtures';
 
 describe('compileScene(description)', () => {
   const scene = compileScene(packageScene(domePackage()));

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { createNodeTracePool, traceParallel } from '../../../src/lib/trace/node/node-pool';
 import { traceSync } from '../../../src/lib/trace/trace';
-import { domePackage } from './fixtures';
+import { domePackage } from '../../support/fixtures';
 
 describe('traceParallel(pkg, options, threads) — Node worker threads', () => {
   // 3 chunks (40 000 rays at 16 384 per chunk), so two threads really share the work

@@ -5,7 +5,7 @@ import { packageScene } from '../../../src/lib/trace/package-scene';
 import { validateTracePackage, type TracePackage } from '../../../src/lib/trace/package-spec';
 import { createTally } from '../../../src/lib/trace/tally';
 import { traceChunk } from '../../../src/lib/trace/trace-chunk';
-import { NO_ENCAPSULANT, cupPackage, domePackage, withEncapsulant } from './fixtures';
+import { NO_ENCAPSULANT, cupPackage, domePackage, withEncapsulant } from '../../support/fixtures';
 
 const cup = cupPackage(flipChipOnSapphire());
 const packages: [string, TracePackage][] = [

@@ -5,7 +5,7 @@ import {
   validateTracePackage,
   type TracePackage
 } from '../../../src/lib/trace/package-spec';
-import { NO_ENCAPSULANT, domePackage, withEncapsulant } from './fixtures';
+import { NO_ENCAPSULANT, domePackage, withEncapsulant } from '../../support/fixtures';
 
 /** A copy of the dome package with one field replaced by a path like 'chip.n'. */
 function withField(path: string, value: unknown): TracePackage {

@@ -59,7 +59,7 @@ describe('trackedInterface(d, n, [cosThetaI, etaI, etaT, u])', () => {
     assertInDelta(lo, 0.1479, 5e-5);
   });
 
-  // Air → 1.5 at 45°: Rs = 0.09201, Rp = 0.008472 (physics.md §1, computed). A field at azimuth ψ from s
+  // Air → 1.5 at 45°: Rs = 0.09201, Rp = 0.008472 (computed; Fresnel equations: Born & Wolf, Principles of Optics, §1.5.2). A field at azimuth ψ from s
   // reflects with R = Rs cos²ψ + Rp sin²ψ; the choice must flip at that R (to 1e-9 of bisection).
   it.each([0, 0.3, 0.7854, 1.2, 1.5708])('reflects light polarised at ψ = %s rad from s with Rs cos²ψ + Rp sin²ψ', (psi) => {
     const theta = Math.PI / 4;

@@ -27,7 +27,7 @@ function tallyFor(intensity: (thetaDeg: number) => number, escaped: number) {
 }
 
 describe('summarize(tally)', () => {
-  // Lambertian I(θ) = I0 cos θ, I0 = Φ/π, full width at half maximum 120° (physics.md §6, common practice).
+  // Lambertian I(θ) = I0 cos θ, I0 = Φ/π, full width at half maximum 120° (common practice).
   it('reads a Lambertian histogram as relative intensity cos θ, beam angle 120° and on-axis ≈ 1', () => {
     const s = summarize(tallyFor((th) => Math.max(0, Math.cos(th * RAD)), 1e6));
     // 5-bin smoothing of cos θ and the 20-step midpoint rule: ±0.2° on the beam angle
@@ -43,6 +43,15 @@ describe('summarize(tally)', () => {
     const s = summarize(tallyFor((th) => (th < 90 ? 1 : 0), 1e6));
     assertInDelta(s.farField.onAxisVsLambertian ?? NaN, 0.5, 1e-4);
     assertInDelta(s.farField.beamAngleDeg ?? NaN, 180, 1);
+  });
+
+  it('bounds the beam angle at 180°: light still above half its peak below the horizon gets a sentence, not 200°', () => {
+    // Uniform intensity out to 100° from the normal: the half maximum lies about 10° below the horizon.
+    const s = summarize(tallyFor((th) => (th < 100 ? 1 : 0), 1e6));
+    expect(s.farField.beamAngleDeg).toBeNull();
+    expect(s.farField.beamAngleNote).toMatch(/^Wider than 180°: .* falls to half only 10\.\d° below it/);
+    const lambert = summarize(tallyFor((th) => Math.max(0, Math.cos(th * RAD)), 1e6));
+    expect(lambert.farField.beamAngleNote).toBeNull();
   });
 
   it('gives the binomial standard error √(p(1 − p)/N) and ledger fractions that sum to 1', () => {

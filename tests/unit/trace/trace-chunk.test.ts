@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { TracePackage } from '../../../src/lib/trace/package-spec';
 import { createTally, mergeTally, type Tally } from '../../../src/lib/trace/tally';
 import { traceChunk } from '../../../src/lib/trace/trace-chunk';
-import { NO_ENCAPSULANT, domePackage, withEncapsulant } from './fixtures';
+import { NO_ENCAPSULANT, domePackage, withEncapsulant } from '../../support/fixtures';
 
 function ledgerSum(t: Tally): number {
   return t.escaped + t.absorbedChip + t.absorbedEncapsulant + t.absorbedBase + t.lost;

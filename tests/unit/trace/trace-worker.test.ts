@@ -5,7 +5,7 @@ import { traceChunk } from '../../../src/lib/trace/trace-chunk';
 import type { TraceReply, TraceRequest } from '../../../src/lib/trace/trace-messages';
 import { startTrace } from '../../../src/lib/trace/trace-pool';
 import { traceSync } from '../../../src/lib/trace/trace';
-import { domePackage } from './fixtures';
+import { domePackage } from '../../support/fixtures';
 
 function replies(worker: Worker, request: TraceRequest): Promise<TraceReply[]> {
   return new Promise((resolve) => {

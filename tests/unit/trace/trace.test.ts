@@ -3,7 +3,7 @@ import { chunkPlan, raysInChunk } from '../../../src/lib/trace/chunk-plan';
 import { createTally } from '../../../src/lib/trace/tally';
 import { traceSync } from '../../../src/lib/trace/trace';
 import { traceChunk } from '../../../src/lib/trace/trace-chunk';
-import { domePackage } from './fixtures';
+import { domePackage } from '../../support/fixtures';
 
 describe('traceSync(pkg, options, onProgress)', () => {
   it('is the chunk plan traced in order: the same tally as tracing each chunk by hand', () => {

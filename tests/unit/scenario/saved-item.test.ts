@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { loadSaved, type ReadSaved } from '../../../src/lib/components/saved-item';
+import { loadSaved, type ReadSaved } from '../../../src/lib/scenario/saved-item';
 
 /** A Map-backed Storage; `refuseWrites` imitates a full or locked store. */
 function memoryStorage(items: Record<string, string>, refuseWrites = false): Storage {
