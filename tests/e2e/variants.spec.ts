@@ -56,7 +56,7 @@ test('two kept variants are traced side by side with the ratio to the first, and
   expect(doc.variants[1].results.bareChip.extraction).toBeGreaterThan(0);
 
   const [png] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Save charts (PNG)' }).click()]);
-  expect(png.suggestedFilename()).toBe('variants-a-vs-b-charts.png');
+  expect(png.suggestedFilename()).toBe('outcouple-variants-a-vs-b-charts.png');
   const bytes = await readFile((await png.path())!);
   expect(bytes.readUInt32BE(16)).toBe(1600); // PNG IHDR width
   await png.saveAs('test-results/variants-charts.png');

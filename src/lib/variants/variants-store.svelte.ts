@@ -7,7 +7,7 @@
 import { browser } from '$app/environment';
 import { replaceState } from '$app/navigation';
 import { page } from '$app/state';
-import { loadSaved } from '$lib/components/saved-item';
+import { loadSaved } from '$lib/scenario/saved-item';
 import type { Scenario } from '$lib/scenario/schema';
 import { emptyVariants, readVariants, VARIANTS_STORAGE_KEY, type VariantsDoc } from './variants-doc';
 import { keepVariant, removeVariant, renameVariant, type EditResult } from './variants-edit';

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { loadSaved } from '../../../src/lib/components/saved-item';
+import { loadSaved } from '../../../src/lib/scenario/saved-item';
 import { demoScenario } from '../../../src/lib/scenario/defaults';
 import { MAX_VARIANTS, readVariants, VARIANTS_STORAGE_KEY } from '../../../src/lib/variants/variants-doc';
 import { twoVariants } from './fixtures';
