@@ -8,6 +8,7 @@ import { findMaterial, indexAt, userMaterialField } from '../materials/index';
 import type { Material } from '../materials/types';
 import { designWavelengthNm } from './resolve';
 import { LIMITS, MATERIAL_ID_PATTERN, type NumberLimit, rangeMessage } from './limits';
+import { packageFitProblems } from './package-fit';
 
 export const SCENARIO_VERSION = 2;
 
@@ -188,8 +189,27 @@ function checkIndexExists(ctx: Ctx, path: (string | number)[], field: string, m:
   }
 }
 
-function fmtMm(x: number): string {
-  return `${Number(x.toPrecision(3))} mm`;
+/**
+ * A material's real index at the design wavelength must lie in the range every package computation
+ * takes (a typed index is held there by its own field check); a formula far outside its data range can
+ * leave it (a Sellmeier fit near its pole).
+ */
+function checkIndexInRange(ctx: Ctx, path: (string | number)[], field: string, m: Material | undefined, wavelengthNm: number): void {
+  if (!m) return;
+  let n: number;
+  try {
+    n = indexAt(m, wavelengthNm).n;
+  } catch {
+    return; // reported by checkIndexExists
+  }
+  const L = LIMITS.indexN;
+  if (!(n >= L.min && n <= L.max)) {
+    ctx.addIssue({
+      code: 'custom',
+      path,
+      message: `${field} index n must be between ${L.min} and ${L.max}; ${m.name} gives ${Number(n.toPrecision(4))} at ${wavelengthNm} nm.`
+    });
+  }
 }
 
 /** Checks that span more than one field: materials exist, the emitter is inside the chip, the chip fits. */
@@ -209,43 +229,14 @@ function crossChecks(s: ObjectScenario, ctx: Ctx): void {
   checkIndexExists(ctx, ['chip', 'medium'], 'Chip material', materialOf(s.chip.medium), wl);
   checkIndexExists(ctx, ['encapsulant', 'medium'], 'Encapsulant material', materialOf(s.encapsulant.medium), wl);
   checkIndexExists(ctx, ['outside'], 'Outside medium material', materialOf(s.outside), wl);
+  checkIndexInRange(ctx, ['chip', 'medium'], 'Chip', materialOf(s.chip.medium), wl);
+  if (s.encapsulant.shape !== 'none') checkIndexInRange(ctx, ['encapsulant', 'medium'], 'Encapsulant', materialOf(s.encapsulant.medium), wl);
+  checkIndexInRange(ctx, ['outside'], 'Outside medium', materialOf(s.outside), wl);
   if (s.base.kind === 'metal') checkIndexExists(ctx, ['base', 'id'], 'Base metal', findMaterial(s.base.id), wl);
   if (s.base.kind === 'metal') checkMaterial(ctx, ['base', 'id'], 'Base metal', s.base.id, true);
 
-  if (s.chip.emitterZMm > s.chip.heightMm) {
-    ctx.addIssue({
-      code: 'custom',
-      path: ['chip', 'emitterZMm'],
-      message: `Emitter height must be between 0 and the chip height (${fmtMm(s.chip.heightMm)}).`
-    });
-  }
-
-  // The chip's top corners decide whether it fits: both shapes keep or lose width going up.
-  const rho = Math.hypot(s.chip.widthMm / 2, s.chip.lengthMm / 2);
-  const H = s.chip.heightMm;
-  const e = s.encapsulant;
-  if (e.shape !== 'none' && e.heightMm <= H) {
-    ctx.addIssue({
-      code: 'custom',
-      path: ['encapsulant', 'heightMm'],
-      message: `Encapsulant height must be more than the chip height (${fmtMm(H)}) and at most ${LIMITS.sizeMm.max} mm.`
-    });
-  } else if (e.shape === 'dome') {
-    // Dome = upper half of the spheroid x²/R² + y²/R² + z²/h² = 1: corner inside ⇔ R > ρ / √(1 − H²/h²).
-    const minR = rho / Math.sqrt(1 - (H * H) / (e.heightMm * e.heightMm));
-    if (e.radiusMm <= minR) {
-      ctx.addIssue({
-        code: 'custom',
-        path: ['encapsulant', 'radiusMm'],
-        message: `Encapsulant radius must be more than ${fmtMm(minR)} (so the chip's corners are inside the dome) and at most ${LIMITS.sizeMm.max} mm.`
-      });
-    }
-  } else if (e.shape === 'cylinder' && e.radiusMm <= rho) {
-    ctx.addIssue({
-      code: 'custom',
-      path: ['encapsulant', 'radiusMm'],
-      message: `Encapsulant radius must be more than the chip's half-diagonal (${fmtMm(rho)}) and at most ${LIMITS.sizeMm.max} mm.`
-    });
+  for (const problem of packageFitProblems(s.chip, s.encapsulant)) {
+    ctx.addIssue({ code: 'custom', path: problem.path.split('.'), message: problem.message });
   }
 
   if (s.emission.kind === 'table') {
