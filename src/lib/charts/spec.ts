@@ -30,6 +30,8 @@ export interface SeriesSpec {
   /** Draw a marker at each point (default: false for lines, true for scatter). */
   markers?: boolean;
   dashed?: boolean;
+  /** Bar charts: a palette slot per point (e.g. the claim among its bounds); default `color` for all. */
+  pointColors?: number[];
 }
 
 export interface AxisSpec {
