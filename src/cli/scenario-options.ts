@@ -38,23 +38,23 @@ const NAMES = ['scenario', 'wavelength', 'n-chip', 'chip-material', 'chip', 'emi
 
 export const SCENARIO_OPTIONS: OptionSpec = Object.fromEntries(NAMES.map((name) => [name, { type: 'string' as const }]));
 
-/** Scenario path prefix → the options that set it (first match wins; longer prefixes first). */
+/** Scenario path prefix → the options that set it, or that make it fail (a material at a new wavelength), most direct first. */
 const OPTION_OF_PATH: [prefix: string, options: readonly string[]][] = [
   ['emission', ['wavelength']],
-  ['chip.medium', ['n-chip', 'chip-material']],
+  ['chip.medium', ['n-chip', 'chip-material', 'wavelength']],
   ['chip.widthMm', ['chip']],
   ['chip.lengthMm', ['chip']],
   ['chip.heightMm', ['chip']],
   ['chip.emitterZMm', ['emitter-z', 'chip']],
   ['chip.absorptionPerMm', ['chip-absorption']],
   ['chip.emission', ['emission']],
-  ['base', ['base-reflectance', 'base-material']],
-  ['encapsulant.medium', ['n-enc', 'enc-material']],
+  ['base', ['base-reflectance', 'base-material', 'wavelength']],
+  ['encapsulant.medium', ['n-enc', 'enc-material', 'wavelength', 'shape']],
   ['encapsulant.shape', ['shape']],
-  ['encapsulant.radiusMm', ['radius', 'chip', 'height']],
-  ['encapsulant.heightMm', ['height', 'chip']],
+  ['encapsulant.radiusMm', ['radius', 'chip', 'height', 'shape']],
+  ['encapsulant.heightMm', ['height', 'chip', 'shape']],
   ['encapsulant.absorptionPerMm', ['enc-absorption']],
-  ['outside', ['n-out', 'out-material']],
+  ['outside', ['n-out', 'out-material', 'wavelength']],
   ['trace.rays', ['rays']],
   ['trace.seed', ['seed']],
   ['trace.polarization', ['polarization']]
