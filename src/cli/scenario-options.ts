@@ -151,7 +151,11 @@ function applyOptions(base: Scenario, values: ParsedValues): Scenario {
   if (has('radius')) s.encapsulant.radiusMm = numberOf(text(values, 'radius'));
   if (has('height')) s.encapsulant.heightMm = numberOf(text(values, 'height'));
   const encMedium = either(values, 'n-enc', 'enc-material');
-  if (encMedium) s.encapsulant.medium = encMedium === 'n-enc' ? typedIndex(text(values, 'n-enc')) : libraryMedium(text(values, 'enc-material'));
+  if (encMedium === 'n-enc') {
+    const typed = typedIndex(text(values, 'n-enc'));
+    if (typed.kind === 'index' && typed.k !== 0) throw new CliError("--n-enc: give the encapsulant's index n alone; its loss is --enc-absorption (1/mm)");
+    s.encapsulant.medium = { kind: 'index', n: typed.kind === 'index' ? typed.n : Number.NaN };
+  } else if (encMedium) s.encapsulant.medium = libraryMedium(text(values, 'enc-material'));
   if (has('enc-absorption')) s.encapsulant.absorptionPerMm = numberOf(text(values, 'enc-absorption'));
 
   const baseOption = either(values, 'base-reflectance', 'base-material');

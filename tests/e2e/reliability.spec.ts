@@ -29,7 +29,7 @@ async function watchCsp(context: BrowserContext, page: Page): Promise<string[]> 
 /** Opens a page and waits until the app has started (it writes the scenario into the link). */
 async function open(page: Page, path: string): Promise<void> {
   await page.goto(path);
-  await expect(page).toHaveURL(/[?&]s=2\./);
+  await expect(page).toHaveURL(/[?&]s=3\./);
 }
 
 /** Pixels of a canvas that differ from its corner pixel (something was drawn). */
