@@ -1,6 +1,7 @@
 /**
- * The claim on a scale: one bar per physical bound of the package and one for the claim, sorted by
- * value, so the eye sees where the claim falls — below the single pass, between the ideal dome and the
+ * The claim on a scale: one bar per physical bound of the package (bare chip and ideal dome: single
+ * pass over the emitting faces; recycling limit: a planar chip with lossless recycling; best reported:
+ * the thin-film chip figure we cite) and one for the claim, sorted by value, so the eye sees where the claim falls — below the single pass, between the ideal dome and the
  * recycling limit, beyond the best reported figure. Pure: takes a checked claim, returns a ChartSpec.
  */
 import type { ClaimKind, ClaimResult } from '../decisions/index';
@@ -28,31 +29,31 @@ export function claimScaleBars(kind: ClaimKind, value: number, result: ClaimResu
   const bars: ClaimScaleBar[] = [];
   const bound = (label: string, v: number) => bars.push({ label, value: v, isClaim: false });
   if (kind === 'extraction') {
-    bound('Bare chip, single pass', pct(b.bareCuboid));
-    if (b.encapsulated) bound('Ideal dome, single pass', pct(b.idealDome));
-    bound('Planar chip, lossless recycling', pct(b.recyclingLimit));
-    bound('Best reported (thin-film chip)', pct(BEST_REPORTED_EXTRACTION.value));
+    bound('Bare chip', pct(b.bareCuboid));
+    if (b.encapsulated) bound('Ideal dome', pct(b.idealDome));
+    bound('Recycling limit', pct(b.recyclingLimit));
+    bound('Best reported', pct(BEST_REPORTED_EXTRACTION.value));
     const traced = result.numbers.find((n) => n.id === 'trace-extraction');
-    if (traced) bound('Traced package', pct(traced.value));
-    bars.push({ label: 'The claim', value: pct(value), isClaim: true });
+    if (traced) bound('Traced', pct(traced.value));
+    bars.push({ label: 'Claim', value: pct(value), isClaim: true });
   } else if (kind === 'gain') {
     bound('No encapsulant', 1);
-    bound('Ideal dome, single pass', b.closedFormGain);
-    bound('Planar chip, lossless recycling', b.gainLimit);
-    bars.push({ label: 'The claim', value, isClaim: true });
+    bound('Ideal dome', b.closedFormGain);
+    bound('Gain limit', b.gainLimit);
+    bars.push({ label: 'Claim', value, isClaim: true });
   } else {
     bound('No coating', 0);
-    bound('One ideal quarter-wave layer', pct(b.quarterWaveCoating));
-    bound('Any flat coating, no Fresnel loss', pct(b.coatingLimit));
-    bars.push({ label: 'The claim', value: pct(value), isClaim: true });
+    bound('Quarter-wave layer', pct(b.quarterWaveCoating));
+    bound('Flat-coating limit', pct(b.coatingLimit));
+    bars.push({ label: 'Claim', value: pct(value), isClaim: true });
   }
   return bars.sort((p, q) => p.value - q.value || Number(p.isClaim) - Number(q.isClaim));
 }
 
 const AXIS: Record<ClaimKind, { title: string; unit: string }> = {
-  extraction: { title: 'Extraction (% of the light made in the chip)', unit: '%' },
-  gain: { title: 'Gain over the bare chip (×)', unit: '×' },
-  coating: { title: 'Change of extraction from the coating (%)', unit: '%' }
+  extraction: { title: 'Extraction (%)', unit: '%' },
+  gain: { title: 'Gain over bare chip (×)', unit: '×' },
+  coating: { title: 'Change from coating (%)', unit: '%' }
 };
 
 function shown(v: number, unit: string): string {
@@ -77,10 +78,10 @@ export function claimScaleChart(kind: ClaimKind, value: number, result: ClaimRes
     ariaLabel: `Bar chart of the claim among the bounds of this package, in ascending order: ${words}. Verdict: ${result.verdict}.`,
     x: { title: 'Bound (ascending)' },
     y: kind === 'extraction' ? { title: axis.title, min: 0, max: 100 } : { title: axis.title, min: bottom, max: top > 0 ? undefined : 1 },
-    categories: bars.map((bar) => `${bar.label}: ${shown(bar.value, axis.unit)}`),
+    categories: bars.map((bar) => `${bar.label} ${shown(bar.value, axis.unit)}`),
     series: [
       {
-        label: 'Bounds of this package (the claim in the second colour)',
+        label: 'Bounds of this package; the claim in the second colour',
         color: BOUND_COLOR,
         points: bars.map((bar, i) => ({ x: i, y: bar.value })),
         pointColors: bars.map((bar) => (bar.isClaim ? CLAIM_COLOR : BOUND_COLOR))
