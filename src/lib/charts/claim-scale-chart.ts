@@ -1,8 +1,9 @@
 /**
  * The claim on a scale: one bar per physical bound of the package (bare chip and ideal dome: single
  * pass over the emitting faces; recycling limit: a planar chip with lossless recycling; best reported:
- * the thin-film chip figure we cite) and one for the claim, sorted by value, so the eye sees where the claim falls — below the single pass, between the ideal dome and the
- * recycling limit, beyond the best reported figure. Pure: takes a checked claim, returns a ChartSpec.
+ * the thin-film chip figure we cite) and one for the claim, sorted by value, so the eye sees where the
+ * claim falls — below the single pass, between the ideal dome and the recycling limit, beyond the best
+ * reported figure. Pure: takes a checked claim, returns a ChartSpec.
  */
 import type { ClaimKind, ClaimResult } from '../decisions/index';
 import { BEST_REPORTED_EXTRACTION } from '../decisions/index';
