@@ -4,10 +4,30 @@ import { CliError } from './cli-error';
 export type OptionSpec = NonNullable<ParseArgsConfig['options']>;
 export type ParsedValues = Record<string, string | boolean | string[] | undefined>;
 
+/** A negative number as an option's value ("-5", "-0.3", "-1e-3"), not an option name. */
+const NEGATIVE_NUMBER = /^-(\d|\.\d)/;
+
+/**
+ * "--value -5" as "--value=-5": Node's parser takes a value starting with "-" for an option name and
+ * stops with "argument is ambiguous"; a negative number after an option that takes a value is its value.
+ */
+export function joinNegativeValues(argv: string[], options: OptionSpec): string[] {
+  const out: string[] = [];
+  for (let i = 0; i < argv.length; i++) {
+    const name = argv[i].startsWith('--') ? argv[i].slice(2) : null;
+    const next = argv[i + 1];
+    if (name !== null && Object.hasOwn(options, name) && options[name].type === 'string' && next !== undefined && NEGATIVE_NUMBER.test(next)) {
+      out.push(`${argv[i]}=${next}`);
+      i++;
+    } else out.push(argv[i]);
+  }
+  return out;
+}
+
 /** Parses argv against a spec; unknown options and missing values become one-line CLI errors. */
 export function parseOptions(argv: string[], options: OptionSpec, command: string): { values: ParsedValues; positionals: string[] } {
   try {
-    const { values, positionals } = parseArgs({ args: argv, options, allowPositionals: true, strict: true });
+    const { values, positionals } = parseArgs({ args: joinNegativeValues(argv, options), options, allowPositionals: true, strict: true });
     return { values: values as ParsedValues, positionals };
   } catch (error) {
     const message = error instanceof Error ? error.message.split('\n')[0] : String(error);

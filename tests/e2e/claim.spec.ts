@@ -10,7 +10,7 @@ import { expect, test } from '@playwright/test';
 test.beforeEach(async ({ page }) => {
   await page.goto('/claim');
   await expect(page.getByRole('heading', { level: 1, name: 'Claim check' })).toBeVisible();
-  await expect(page).toHaveURL(/[?&]s=2\./);
+  await expect(page).toHaveURL(/[?&]s=3\./);
 });
 
 test('the default claim, 85 % extraction for the demo planar GaN chip in methyl silicone, is impossible', async ({ page }) => {
@@ -36,7 +36,7 @@ test('a 2.5× gain for planar GaN under a typed n = 1.5 encapsulant is consisten
 
 test('a flat coating said to add 40 % on the bare chip is impossible: it cannot widen the escape cone', async ({ page }) => {
   await page.getByRole('radio', { name: /flat coating/ }).check();
-  await page.getByLabel('Claimed increase').fill('40');
+  await page.getByLabel('Claimed change from the coating').fill('40');
   await page.getByLabel('Encapsulant', { exact: true }).selectOption('none');
   await expect(page.getByTestId('verdict')).toHaveText(/Impossible/);
   await expect(page.getByTestId('verdict-reason')).toContainText('cannot widen the escape cone');
@@ -52,14 +52,48 @@ test('a thin-film chip above the best reported extraction is optimistic and cite
   await expect(page.locator('main')).toContainText('from memory');
 });
 
-test('bad input names the field and its range, and the last verdict stays', async ({ page }) => {
+test('an invalid value clears the verdict and the chart, and says why', async ({ page }) => {
   const field = page.getByLabel('Claimed extraction');
   await field.fill('120');
-  await expect(page.getByRole('alert')).toContainText('Claimed extraction');
-  await expect(page.getByRole('alert')).toContainText('100');
-  await expect(page.getByTestId('verdict')).toHaveText(/Impossible/);
-  await field.fill('0');
-  await expect(page.getByRole('alert')).toContainText('(0, 1]');
+  await expect(page.getByRole('alert').first()).toContainText('Claimed extraction must be more than 0 and at most 100 %.');
+  await expect(page.getByTestId('verdict')).toHaveCount(0);
+  await expect(page.getByTestId('verdict-problem')).toHaveText('Claimed extraction must be more than 0 and at most 100 %.');
+  await expect(page.getByRole('heading', { name: 'Where the claim falls' })).toHaveCount(0);
+  await field.fill('abc');
+  await expect(page.getByTestId('verdict-problem')).toContainText('Claimed extraction');
+  await field.fill('30');
+  await expect(page.getByTestId('verdict')).toHaveText(/Consistent|Optimistic/);
+  await expect(page.getByRole('heading', { name: 'Where the claim falls' })).toBeVisible();
+});
+
+test('a negative coating "increase" is named a decrease and judged as one', async ({ page }) => {
+  await page.getByRole('radio', { name: /flat coating/ }).check();
+  await page.getByLabel('Claimed change from the coating').fill('-5');
+  await expect(page.getByTestId('verdict')).toHaveText(/Consistent/);
+  await expect(page.getByTestId('verdict-reason')).toContainText('This is a decrease of 5 %, not an increase');
+  await expect(page.getByTestId('verdict-numbers')).toContainText('Claimed decrease from a flat coating');
+});
+
+test('an outside index of 5, which the panel accepts, gives a verdict here and computes on every page', async ({ page }) => {
+  await page.getByLabel('Outside material').selectOption('typed');
+  await page.getByLabel('Outside index n').first().fill('5');
+  await expect(page.getByTestId('verdict')).toBeVisible();
+  await expect(page.getByLabel('Outside medium', { exact: true })).toContainText('n 5');
+  for (const name of ['Escape cone', 'Layer stack', 'Dome', 'Compare', 'Report']) {
+    await page.getByRole('navigation', { name: 'Pages' }).getByRole('link', { name, exact: true }).click();
+    await expect(page.getByRole('heading', { level: 1 })).toBeVisible();
+    await expect(page.getByTestId('page-failure')).toHaveCount(0);
+    await expect(page.locator('main')).not.toContainText('NaN');
+  }
+});
+
+test('the claim page at laptop and phone width', async ({ page }) => {
+  for (const [width, height] of [[1366, 900], [390, 844]]) {
+    await page.setViewportSize({ width, height });
+    await page.goto('/claim');
+    await expect(page.getByRole('heading', { name: 'Where the claim falls' })).toBeVisible();
+    await page.screenshot({ path: test.info().outputPath(`claim-${width}.png`), fullPage: true });
+  }
 });
 
 test('the link reopens the same claim', async ({ page }) => {

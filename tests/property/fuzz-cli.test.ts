@@ -307,8 +307,8 @@ describe('command line limits', () => {
     const layers = Array.from({ length: 201 }, () => ['--layer', '1.5:10']).flat();
     const tooMany = await runMain(['stack', '--n-in', '2.45', ...layers]);
     expect(tooMany).toEqual({ code: 2, stdout: '', stderr: 'outcouple stack: --layer: at most 200 layers (got 201)\n' });
-    const rays = await runMain(['trace', '--rays', '100000001', '--threads', '1']);
-    expect(rays.stderr).toBe("outcouple trace: --rays must be a number from 1000 to 100000000 (got '100000001')\n");
+    const rays = await runMain(['trace', '--rays', '20000001', '--threads', '1']);
+    expect(rays.stderr).toBe('outcouple trace: --rays: Rays must be a whole number between 1000 and 20000000 rays.\n');
     const long = await runMain(['trace', '--ies', 'f'.repeat(201), '--lumens', '1', '--threads', '1']);
     expect(long.stderr).toBe('outcouple trace: --ies is too long (at most 200 characters)\n');
   });

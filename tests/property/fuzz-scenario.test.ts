@@ -55,6 +55,8 @@ const medium = fc.oneof(
   fc.record({ kind: fc.constant('index' as const), n: num(LIMITS.indexN.min, LIMITS.indexN.max), k: num(0, LIMITS.indexK.max) }),
   userMaterial.map((material) => ({ kind: 'user' as const, material }))
 );
+/** The encapsulant's medium: a typed index there is n alone (its loss is the absorption per mm). */
+const encapsulantMedium = medium.map((m) => (m.kind === 'index' ? { kind: 'index' as const, n: m.n } : m));
 /** Names of any UTF-16 code units, lone surrogates included, already trimmed (the schema trims). */
 const name = fc
   .string({ unit: fc.integer({ min: 0, max: 0xffff }).map((c) => String.fromCharCode(c)), minLength: 1, maxLength: LIMITS.nameLength.max })
@@ -89,7 +91,7 @@ const wellFormedScenario: fc.Arbitrary<Scenario> = fc
       num(0, 1).map((reflectance) => ({ kind: 'reflectance' as const, reflectance })),
       fc.constantFrom(...metals).map((id) => ({ kind: 'metal' as const, id }))
     ),
-    encMedium: medium,
+    encMedium: encapsulantMedium,
     shape: fc.constantFrom('none', 'dome', 'cylinder') as fc.Arbitrary<'none' | 'dome' | 'cylinder'>,
     heightFactor: num(1.01, 3),
     radiusFactor: num(1.01, 3),
@@ -104,7 +106,7 @@ const wellFormedScenario: fc.Arbitrary<Scenario> = fc
     const h = g.H * g.heightFactor;
     const minR = g.shape === 'dome' ? rho / Math.sqrt(1 - (g.H * g.H) / (h * h)) : rho;
     return {
-      version: 2,
+      version: 3,
       name: g.name,
       emission: g.emission,
       chip: {
@@ -134,10 +136,12 @@ const wellFormedScenario: fc.Arbitrary<Scenario> = fc
     return radiusMm >= min && radiusMm <= max && heightMm >= min && heightMm <= max;
   });
 
+/** Every medium gives an index at the design wavelength, inside the package index range (LIMITS.indexN). */
 function resolves(s: Scenario): boolean {
   try {
-    resolveScenario(s);
-    return true;
+    const r = resolveScenario(s);
+    const inRange = (n: number) => n >= LIMITS.indexN.min && n <= LIMITS.indexN.max;
+    return inRange(r.chip.n) && inRange(r.outside.n) && (s.encapsulant.shape === 'none' || inRange(r.encapsulant.n));
   } catch {
     return false;
   }

@@ -39,7 +39,7 @@ describe('trace core', () => {
   it(`takes at most ${TRACE_LIMITS.rays.max} rays and ${TRACE_LIMITS.maxEvents.max} events per ray, and says so`, () => {
     expect(refusal(() => validateTraceOptions({ rays: TRACE_LIMITS.rays.max, seed: 0 }))).toBeNull();
     expect(refusal(() => validateTraceOptions({ rays: TRACE_LIMITS.rays.max + 1, seed: 0 }))).toBe(
-      'rays must be an integer in [1, 100000000] (got 100000001)'
+      'rays must be an integer in [1, 20000000] (got 20000001)'
     );
     expect(refusal(() => validateTraceOptions({ rays: 10, seed: 0, maxEvents: TRACE_LIMITS.maxEvents.max + 1 }))).toBe(
       'maxEvents must be an integer in [1, 1000000] (got 1000001)'
@@ -48,7 +48,7 @@ describe('trace core', () => {
 
   it('states the size limit of a package', () => {
     const big = { ...pkg, encapsulant: { ...pkg.encapsulant, radiusMm: TRACE_LIMITS.sizeMm.max * 2 } };
-    expect(refusal(() => validateTracePackage(big))).toBe('encapsulant.radiusMm must be a number in [0.000001, 10000] (got 20000)');
+    expect(refusal(() => validateTracePackage(big))).toBe('encapsulant.radiusMm must be a number in [0.001, 1000] (got 2000)');
   });
 });
 

@@ -1,35 +1,46 @@
-import { checkClaim, CHIP_STRUCTURES, CLAIM_KINDS, type ChipStructure, type ClaimKind } from '../../lib/decisions';
+import {
+  checkClaim,
+  CHIP_STRUCTURES,
+  CLAIM_DEFAULTS,
+  CLAIM_KINDS,
+  CLAIM_VALUE_LIMIT,
+  claimCoreValue,
+  claimValueProblem,
+  type ChipStructure,
+  type ClaimKind
+} from '../../lib/decisions';
+import { parseNumber } from '../../lib/components/parse-number';
 import { CliError } from '../cli-error';
-import { indexOption } from '../index-option';
-import { choiceOption, numberOption, parseOptions, stringOption, type OptionSpec } from '../options';
+import { choiceOption, parseOptions, type OptionSpec } from '../options';
 import { emit, formatNumber, percent, type Row } from '../output';
+import { SCENARIO_OPTION_HELP, SCENARIO_OPTIONS, scenarioFromOptions } from '../scenario-options';
+
+const L = CLAIM_VALUE_LIMIT;
 
 export const summary = 'is a stated extraction, gain or coating claim physically possible for the package?';
 export const help = `outcouple claim — check an extraction, gain or flat-coating claim against the physical bounds
 
-  --kind K                         extraction | gain | coating
-  --value V                        extraction: fraction 0 to 1 (0.85 = 85 %)
-                                   gain: factor 0 to 100 (3.5 = 3.5×)
-                                   coating: relative increase -1 to 100 (0.4 = +40 %)
-  --n-chip N | --chip-material M   chip index (1 to 6) or library material
-  --structure S                    planar | textured | thin-film | unknown (default unknown)
-  --n-enc N | --enc-material M     encapsulant index (1 to 6) or material; omit for a bare chip (needed for gain)
-  --n-out N                        outside index (1 to 3, default 1)
-  --faces F                        emitting faces of the chip: 1, 5 or 6 (default 6, the most generous)
-  --wavelength NM                  for library materials (200 to 2500, default 450)
-  --json                           print one JSON object
+The same check, defaults and units as the app's claim page; the package is the scenario (the demo
+unless --scenario or the package options below say otherwise: its chip, encapsulant and outside
+indices at its wavelength; --shape none for a bare chip).
+
+  --kind K                         extraction | gain | coating (default ${CLAIM_DEFAULTS.kind})
+  --value V                        in percent for extraction and coating, as on the page:
+                                     extraction: more than ${L.extraction.min} and at most ${L.extraction.max} (85 means 85 %)
+                                     coating: more than ${L.coating.min} and at most ${L.coating.max} (40 means +40 %, -5 a 5 % decrease)
+                                   gain: a factor, more than ${L.gain.min} and at most ${L.gain.max} (3.5 means 3.5×)
+  --structure S                    planar | textured | thin-film | unknown (default ${CLAIM_DEFAULTS.structure})
+  --faces F                        emitting faces of the chip: 1, 5 or 6 (default ${CLAIM_DEFAULTS.faces}: top and four sides)
+  --json                           print one JSON object (values as fractions and factors)
+
+${SCENARIO_OPTION_HELP}
 
 Verdicts: consistent, optimistic (possible only with what the claim does not state), impossible.
 
-Example: outcouple claim --kind extraction --value 0.85 --n-chip 2.45 --n-enc 1.41 --structure planar`;
+Example: outcouple claim --kind extraction --value 85 --n-chip 2.45 --n-enc 1.41 --structure planar`;
 
-const options: OptionSpec = {
-  kind: { type: 'string' }, value: { type: 'string' }, 'n-chip': { type: 'string' }, 'chip-material': { type: 'string' },
-  structure: { type: 'string' }, 'n-enc': { type: 'string' }, 'enc-material': { type: 'string' },
-  'n-out': { type: 'string' }, faces: { type: 'string' }, wavelength: { type: 'string' }, json: { type: 'boolean' }
-};
-
-const VALUE_RANGE: Record<ClaimKind, [number, number]> = { extraction: [0, 1], gain: [0, 100], coating: [-1, 100] };
+const options: OptionSpec = { ...SCENARIO_OPTIONS, kind: { type: 'string' }, value: { type: 'string' }, structure: { type: 'string' },
+  faces: { type: 'string' }, json: { type: 'boolean' } };
 
 function shown(value: number, unit: string): string {
   if (unit === 'fraction') return percent(value, 2);
@@ -42,29 +53,25 @@ function shown(value: number, unit: string): string {
 export function run(argv: string[]): void {
   const { values, positionals } = parseOptions(argv, options, 'claim');
   if (positionals.length) throw new CliError(`claim: unexpected argument '${positionals[0].slice(0, 40)}'`);
-  if (stringOption(values, 'kind') === undefined) throw new CliError(`--kind is required (one of ${CLAIM_KINDS.join(', ')})`);
-  const kind = choiceOption<ClaimKind>(values, 'kind', CLAIM_KINDS, 'extraction');
-  const [min, max] = VALUE_RANGE[kind];
-  const value = numberOption(values, 'value', min, max);
-  if (kind !== 'coating' && value === 0) throw new CliError(`--value must be above 0 and at most ${max} for a ${kind} claim (got 0)`);
-  const structure = choiceOption<ChipStructure>(values, 'structure', CHIP_STRUCTURES, 'unknown');
-  const wavelengthNm = numberOption(values, 'wavelength', 200, 2500, 450);
-  const facesText = choiceOption(values, 'faces', ['1', '5', '6'] as const, '6');
-  const faces = Number(facesText) as 1 | 5 | 6;
+  const kind = choiceOption<ClaimKind>(values, 'kind', CLAIM_KINDS, CLAIM_DEFAULTS.kind);
+  if (values.value === undefined) throw new CliError(`--value is required (${kind === 'gain' ? 'a factor, e.g. 3.5' : 'in percent, e.g. 85'})`);
+  const stated = parseNumber(String(values.value));
+  const problem = claimValueProblem(kind, stated);
+  if (problem !== null || stated === null) throw new CliError(`--value: ${problem}`);
+  const structure = choiceOption<ChipStructure>(values, 'structure', CHIP_STRUCTURES, CLAIM_DEFAULTS.structure);
+  const faces = Number(choiceOption(values, 'faces', ['1', '5', '6'] as const, String(CLAIM_DEFAULTS.faces) as '1' | '5' | '6')) as 1 | 5 | 6;
 
-  const chip = indexOption(values, 'n-chip', 'chip-material', wavelengthNm);
-  const encGiven = values['n-enc'] !== undefined || values['enc-material'] !== undefined;
-  const enc = encGiven ? indexOption(values, 'n-enc', 'enc-material', wavelengthNm) : null;
-  const outside = indexOption(values, 'n-out', null, wavelengthNm, '1');
-  if (chip.n < 1 || chip.n > 6) throw new CliError(`--n-chip must be from 1 to 6 (got ${chip.n})`);
-  if (enc && (enc.n < 1 || enc.n > 6)) throw new CliError(`--n-enc must be from 1 to 6 (got ${enc.n})`);
-  if (outside.n < 1 || outside.n > 3) throw new CliError(`--n-out must be from 1 to 3 (got ${outside.n})`);
-  if (kind === 'gain' && !enc) throw new CliError('--n-enc (or --enc-material) is required for a gain claim (an index from 1 to 6)');
-
-  const result = checkClaim({ kind, value, nChip: chip.n, structure, nEnc: enc ? enc.n : null, nOut: outside.n, faces });
-  const warnings = [chip.warning, enc?.warning, outside.warning].filter((w): w is string => Boolean(w));
+  const { scenario, resolved, warnings } = scenarioFromOptions(values);
+  const nChip = resolved.chip.n;
+  const nOut = resolved.outside.n;
+  const nEnc = scenario.encapsulant.shape === 'none' ? null : resolved.encapsulant.n;
+  if (kind === 'gain' && (nEnc === null || nEnc === nOut)) {
+    throw new CliError('--shape: a gain claim needs an encapsulant with an index other than the outside one (--n-enc or --enc-material)');
+  }
+  const value = claimCoreValue(kind, stated);
+  const result = checkClaim({ kind, value, nChip, structure, nEnc, nOut, faces });
   const data = {
-    kind, value, structure, nChip: chip.n, nEnc: enc ? enc.n : null, nOut: outside.n, faces,
+    kind, value, stated, structure, nChip, nEnc, nOut, faces, wavelengthNm: resolved.wavelengthNm,
     verdict: result.verdict,
     reason: result.reason,
     requires: result.requires,

@@ -3,13 +3,17 @@ import { CliError } from '../cli-error';
 import { indexOption } from '../index-option';
 import { integerOption, numberOption, parseOptions, type OptionSpec } from '../options';
 import { emit, percent, type Row } from '../output';
+import { LIMITS } from '../../lib/scenario/limits';
+
+const W = LIMITS.wavelengthNm;
+const N = LIMITS.indexN;
 
 export const summary = 'critical angle and escape fractions of an isotropic source through planar faces';
 export const help = `outcouple escape — escape cone of a chip face
 
-  --n-in N | --in MATERIAL     chip index (1 to 6, or n+ki) or library material
+  --n-in N | --in MATERIAL     chip index (${N.min} to ${N.max}, or n+ki) or library material
   --n-out N | --out MATERIAL   surrounding medium (default 1, air)
-  --wavelength NM              wavelength for library materials (200 to 2500 nm, default 450)
+  --wavelength NM              wavelength for library materials (${W.min} to ${W.max} nm, default 450)
   --faces 1|5|6                emitting faces of a cuboid chip: 1 top only; 5 top + 4 sides; 6 all (default 1)
   --json                       print one JSON object
 
@@ -23,13 +27,14 @@ const options: OptionSpec = {
 export function run(argv: string[]): void {
   const { values, positionals } = parseOptions(argv, options, 'escape');
   if (positionals.length) throw new CliError(`escape: unexpected argument '${positionals[0].slice(0, 40)}'`);
-  const wavelengthNm = numberOption(values, 'wavelength', 200, 2500, 450);
+  const wavelengthNm = numberOption(values, 'wavelength', W.min, W.max, 450);
   const chip = indexOption(values, 'n-in', 'in', wavelengthNm);
   const outside = indexOption(values, 'n-out', 'out', wavelengthNm, '1');
   const faces = integerOption(values, 'faces', 1, 6, 1);
   if (faces !== 1 && faces !== 5 && faces !== 6) throw new CliError(`--faces must be 1 (top only), 5 (top + 4 sides) or 6 (all faces) (got ${faces})`);
-  if (chip.n < 1 || chip.n > 6) throw new CliError(`--n-in must be from 1 to 6 (got ${chip.n})`);
-  if (outside.n < 1 || outside.n > 6) throw new CliError(`--n-out must be from 1 to 6 (got ${outside.n})`);
+  for (const [name, m] of [['n-in', chip], ['n-out', outside]] as const) {
+    if (m.n < N.min || m.n > N.max) throw new CliError(`--${name} must be from ${N.min} to ${N.max} (got ${m.n})`);
+  }
 
   const cone = escapeCone(chip.n, outside.n);
   const chipEscape = cuboidChipEscape(chip.n, outside.n, faces as 1 | 5 | 6);

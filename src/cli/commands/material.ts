@@ -2,11 +2,14 @@ import { findMaterial, indexAt, listMaterials } from '../../lib/materials';
 import { CliError } from '../cli-error';
 import { numberOption, parseOptions, type OptionSpec } from '../options';
 import { emit, type Row } from '../output';
+import { LIMITS } from '../../lib/scenario/limits';
+
+const W = LIMITS.wavelengthNm;
 
 export const summary = 'refractive index n and k of a library material at a wavelength; --list lists them';
 export const help = `outcouple material NAME — index of a library material
 
-  --wavelength NM   wavelength (200 to 2500 nm, default 450)
+  --wavelength NM   wavelength (${W.min} to ${W.max} nm, default 450)
   --list            list every material with its model, validity range and source
   --json            print one JSON object
 
@@ -32,7 +35,7 @@ export function run(argv: string[]): void {
   const name = positionals[0];
   const material = findMaterial(name);
   if (!material) throw new CliError(`material: unknown material '${name.slice(0, 40)}' ('outcouple material --list' lists them)`);
-  const wavelengthNm = numberOption(values, 'wavelength', 200, 2500, 450);
+  const wavelengthNm = numberOption(values, 'wavelength', W.min, W.max, 450);
   const value = indexAt(material, wavelengthNm);
   const result = {
     id: material.id, name: material.name, wavelengthNm, n: value.n, k: value.k, model: material.dispersion.model,

@@ -4,6 +4,9 @@ import { CliError } from '../cli-error';
 import { indexOption } from '../index-option';
 import { numberOption, parseOptions, truncate, type OptionSpec } from '../options';
 import { emit, percent, type Row } from '../output';
+import { LIMITS } from '../../lib/scenario/limits';
+
+const W = LIMITS.wavelengthNm;
 
 export const summary = 'R, T, A of a planar layer stack between the chip and the outside; --extraction for the escape fraction';
 export const help = `outcouple stack — planar layer stack from the chip outward
@@ -12,7 +15,7 @@ export const help = `outcouple stack — planar layer stack from the chip outwar
   --layer INDEX:THICKNESS      a layer, repeatable, from the chip outward; INDEX is a number, n+ki or a
                                material name; THICKNESS in nm (thin film) or µm with --incoherent
   --n-out N | --out MATERIAL   outside (exit) medium (default 1)
-  --wavelength NM              200 to 2500 nm (default 550)
+  --wavelength NM              ${W.min} to ${W.max} nm (default 550)
   --angle DEG                  angle of incidence in the chip, 0 to 90° (default 0)
   --incoherent                 thick layers: intensities add (thickness in µm)
   --extraction                 also the stack's escape fraction for an isotropic source in the chip
@@ -70,7 +73,7 @@ export function run(argv: string[]): void {
 function compute(argv: string[]): void {
   const { values, positionals } = parseOptions(argv, options, 'stack');
   if (positionals.length) throw new CliError(`stack: unexpected argument '${truncate(positionals[0])}'`);
-  const wavelengthNm = numberOption(values, 'wavelength', 200, 2500, 550);
+  const wavelengthNm = numberOption(values, 'wavelength', W.min, W.max, 550);
   const angleDeg = numberOption(values, 'angle', 0, 90, 0);
   const incoherent = values.incoherent === true;
   const chip = indexOption(values, 'n-in', 'in', wavelengthNm);

@@ -118,8 +118,8 @@ export function chartConfig(spec: ChartSpec, palette: ChartPalette): ChartConfig
         datasets: spec.series.map((s) => ({
           label: s.label,
           data: s.points.map((p) => p.y),
-          backgroundColor: seriesColor(palette, s),
-          borderColor: seriesColor(palette, s),
+          backgroundColor: s.pointColors ? s.pointColors.map((c) => seriesColor(palette, { ...s, color: c })) : seriesColor(palette, s),
+          borderColor: s.pointColors ? s.pointColors.map((c) => seriesColor(palette, { ...s, color: c })) : seriesColor(palette, s),
           borderWidth: 1
         }))
       },

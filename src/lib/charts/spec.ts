@@ -34,6 +34,8 @@ export interface SeriesSpec {
   marker?: MarkerShape;
   /** false keeps a 'data' series out of the legend (it stays in the CSV), e.g. a second point of a candidate already named. */
   inLegend?: boolean;
+  /** Bar charts: a palette slot per point (e.g. the claim among its bounds); default `color` for all. */
+  pointColors?: number[];
 }
 
 export type MarkerShape = 'circle' | 'triangle' | 'rect' | 'rectRot' | 'star' | 'crossRot' | 'rectRounded';

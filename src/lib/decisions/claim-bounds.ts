@@ -28,7 +28,7 @@ export interface PackageForClaim {
   nChip: number;
   /** Encapsulant index, [1, 6]; null for a bare chip. */
   nEnc: number | null;
-  /** Outside index, [1, 3]. */
+  /** Outside index, LIMITS.indexN. */
   nOut: number;
   /** Emitting faces of the cuboid chip. */
   faces: ChipFaces;

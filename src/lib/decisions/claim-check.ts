@@ -39,6 +39,8 @@
 import type { ChipFaces } from '../optics/index';
 import { BEST_REPORTED_EXTRACTION, REPORTED_FIGURES, type ReportedFigure } from './best-reported';
 import { claimBounds, type ClaimBoundSet } from './claim-bounds';
+import { CLAIM_DEFAULTS, claimCoreLimit } from './claim-input';
+import { LIMITS } from '../scenario/limits';
 
 export type ClaimKind = 'extraction' | 'gain' | 'coating';
 export type ChipStructure = 'planar' | 'textured' | 'thin-film' | 'unknown';
@@ -47,36 +49,24 @@ export type Verdict = 'consistent' | 'optimistic' | 'impossible';
 export const CLAIM_KINDS: readonly ClaimKind[] = ['extraction', 'gain', 'coating'];
 export const CHIP_STRUCTURES: readonly ChipStructure[] = ['planar', 'textured', 'thin-film', 'unknown'];
 
-/** Allowed ranges at the public edge. */
-export const CLAIM_LIMITS = {
-  extraction: { min: 0, max: 1 },
-  gain: { min: 0, max: 100 },
-  coating: { min: -1, max: 100 },
-  nChip: { min: 1, max: 6 },
-  nEnc: { min: 1, max: 6 },
-  nOut: { min: 1, max: 3 },
-  traceExtraction: { min: 0, max: 1 },
-  traceStderr: { min: 0, max: 1 }
-} as const;
-
 /** Standard errors a claim may sit above a traced extraction before it is called optimistic. */
 export const TRACE_K = 3;
 
 export interface Claim {
   kind: ClaimKind;
   /**
-   * extraction: fraction in (0, 1]; gain: factor in (0, 100]; coating: relative increase in (−1, 100]
-   * (0.4 means "+40 %").
+   * extraction: fraction in (0, 1]; gain: factor in (0, 100]; coating: relative change in (−1, 100]
+   * (0.4 means "+40 %", −0.05 a 5 % decrease). See claim-input.ts for the stated (percent) form.
    */
   value: number;
-  /** Chip index, [1, 6]. */
+  /** Chip index, LIMITS.indexN ([1, 6]). */
   nChip: number;
   structure: ChipStructure;
   /** Encapsulant index, [1, 6]; omit (or null) for a bare chip. Required for a gain claim. */
   nEnc?: number | null;
-  /** Outside index, [1, 3]; default 1 (air). */
+  /** Outside index, LIMITS.indexN; default 1 (air). */
   nOut?: number;
-  /** Emitting faces of the chip: 1, 5 or 6; default 6, the most generous. */
+  /** Emitting faces of the chip: 1, 5 or 6; default CLAIM_DEFAULTS.faces (5: top and sides, on a base). */
   faces?: ChipFaces;
   /** A trace of this package, if one was run: extraction and its standard error. */
   trace?: { extraction: number; stderr: number } | null;
@@ -138,7 +128,7 @@ const REQUIRES_EXTRACTION = [
 /**
  * Checks a claim against the physical bounds of the package it names.
  * @returns verdict, a one-sentence reason, what it would take, and the numbers behind it
- * @throws RangeError naming the field and its allowed range (see {@link CLAIM_LIMITS})
+ * @throws RangeError naming the field and its allowed range (LIMITS.indexN, claimCoreLimit)
  * @example checkClaim({ kind: 'gain', value: 2.5, nChip: 2.45, nEnc: 1.5, structure: 'planar' }).verdict // 'consistent'
  */
 export function checkClaim(claim: Claim): ClaimResult {
@@ -147,25 +137,26 @@ export function checkClaim(claim: Claim): ClaimResult {
   if (!CHIP_STRUCTURES.includes(claim.structure)) {
     throw new RangeError(`structure must be one of ${CHIP_STRUCTURES.join(', ')} (got ${String(claim.structure)})`);
   }
-  const L = CLAIM_LIMITS;
+  const lim = claimCoreLimit(claim.kind);
   const v =
     claim.kind === 'extraction'
-      ? requireIn('value (extraction fraction)', claim.value, L.extraction.min, L.extraction.max, true)
+      ? requireIn('value (extraction fraction)', claim.value, lim.min, lim.max, true)
       : claim.kind === 'gain'
-        ? requireIn('value (gain factor)', claim.value, L.gain.min, L.gain.max, true)
-        : requireIn('value (relative increase, 0.4 = +40 %)', claim.value, L.coating.min, L.coating.max, true);
-  const nChip = requireIn('nChip', claim.nChip, L.nChip.min, L.nChip.max);
-  const nOut = claim.nOut === undefined ? 1 : requireIn('nOut', claim.nOut, L.nOut.min, L.nOut.max);
-  const nEnc = claim.nEnc === undefined || claim.nEnc === null ? null : requireIn('nEnc', claim.nEnc, L.nEnc.min, L.nEnc.max);
-  const faces = claim.faces ?? 6;
+        ? requireIn('value (gain factor)', claim.value, lim.min, lim.max, true)
+        : requireIn('value (relative change, 0.4 = +40 %)', claim.value, lim.min, lim.max, true);
+  const N = LIMITS.indexN;
+  const nChip = requireIn('nChip', claim.nChip, N.min, N.max);
+  const nOut = claim.nOut === undefined ? 1 : requireIn('nOut', claim.nOut, N.min, N.max);
+  const nEnc = claim.nEnc === undefined || claim.nEnc === null ? null : requireIn('nEnc', claim.nEnc, N.min, N.max);
+  const faces = claim.faces ?? CLAIM_DEFAULTS.faces;
   if (faces !== 1 && faces !== 5 && faces !== 6) throw new RangeError(`faces must be 1, 5 or 6 (got ${String(faces)})`);
   if (claim.kind === 'gain' && (nEnc === null || nEnc === nOut)) {
-    throw new RangeError(`nEnc must be given for a gain claim: the encapsulant index in [${L.nEnc.min}, ${L.nEnc.max}], other than the outside index`);
+    throw new RangeError(`nEnc must be given for a gain claim: the encapsulant index in [${N.min}, ${N.max}], other than the outside index`);
   }
   const trace = claim.trace ?? null;
   if (trace) {
-    requireIn('trace.extraction', trace.extraction, L.traceExtraction.min, L.traceExtraction.max);
-    requireIn('trace.stderr', trace.stderr, L.traceStderr.min, L.traceStderr.max);
+    requireIn('trace.extraction', trace.extraction, 0, 1);
+    requireIn('trace.stderr', trace.stderr, 0, 1);
   }
 
   const b = claimBounds({ nChip, nEnc, nOut, faces });
@@ -252,7 +243,10 @@ export function checkClaim(claim: Claim): ClaimResult {
     add('closed-form-gain', 'Closed-form dome gain (ideal large dome, single pass)', b.closedFormGain, 'factor');
     add('gain-limit', 'Gain limit for a planar chip (lossless recycling in the dome only)', b.gainLimit, 'factor');
     const enc = `an encapsulant of index ${idx(b.nExit)}`;
-    if (claim.structure === 'planar') {
+    if (v < 1) {
+      // Below 1 the "gain" is a loss: an absorbing or badly matched encapsulant can always do that.
+      reason = `A ${times(v)} "gain" is a loss of ${pct(1 - v)}: an encapsulant that absorbs, or a package that traps more light, can lower the output, so the claim is possible; an ideal dome of ${enc} would give ${times(b.closedFormGain)}.`;
+    } else if (claim.structure === 'planar') {
       if (v > b.gainLimit + SLACK && !b.bareConesOverlap) {
         verdict = 'impossible';
         reason = `A ${times(v)} gain is more than ${enc} can give ${chip}: even if every ray inside the encapsulated escape cones left and the bare chip lost all its Fresnel reflections, the gain would be ${times(b.gainLimit)} (closed form ${times(b.closedFormGain)}).`;
@@ -280,7 +274,11 @@ export function checkClaim(claim: Claim): ClaimResult {
     add('quarter-wave', 'Increase from one ideal quarter-wave layer, over the cone', b.quarterWaveCoating, 'relative increase');
     add('coating-limit', 'Largest increase any flat coating can give (all Fresnel loss removed)', b.coatingLimit, 'relative increase');
     const into = b.encapsulated ? `the encapsulant (index ${idx(b.nExit)})` : `the outside medium (index ${idx(b.nExit)})`;
-    if (v > b.coatingLimit + SLACK) {
+    if (v < 0) {
+      // A decrease, whatever it is called: judged as a loss, which any layer that reflects or absorbs more can cause.
+      numbers[0] = { id: 'claim', label: 'Claimed decrease from a flat coating', value: v, unit: 'relative increase' };
+      reason = `This is a decrease of ${pct(-v)}, not an increase: a flat layer that reflects or absorbs more light than it saves can lower extraction by any amount, so the claim is possible — and it is a loss (an ideal quarter-wave layer would give +${pct(b.quarterWaveCoating)}).`;
+    } else if (v > b.coatingLimit + SLACK) {
       verdict = 'impossible';
       reason = `A flat coating cannot widen the escape cone into ${into}, since n·sin θ is conserved through parallel layers; at best it removes the Fresnel loss inside the cone, +${pct(b.coatingLimit)}, not ${signed(v)}.`;
       requires = ['a non-planar surface (texture, micro-lenses or a shaped chip) — which is no longer a flat coating'];

@@ -4,6 +4,7 @@
  * Schubert, Light-Emitting Diodes, 2nd ed., ch. 5).
  */
 import { escapeCone, normalReflectance } from '../optics/index';
+import { LIMITS } from '../scenario/limits';
 
 export interface ExtractionCurve {
   /** Encapsulant indices, ascending from 1 to nChip. */
@@ -14,14 +15,15 @@ export interface ExtractionCurve {
 
 /**
  * η_dome on `points` evenly spaced indices in [1, nChip].
- * @param nChip chip index, (1, 6]
- * @param nOut outside index, [1, 3]
+ * @param nChip chip index, (1, 6] (LIMITS.indexN, above 1 so the range is not empty)
+ * @param nOut outside index, LIMITS.indexN
  * @param points samples, integer in [2, 1000] (default 61)
  * @example extractionCurve(2.45, 1, 2).etaDome[0] // η_F(2.45 → 1) ≈ 0.03408 (at n = 1 there is no dome surface)
  */
 export function extractionCurve(nChip: number, nOut: number, points = 61): ExtractionCurve {
-  if (typeof nChip !== 'number' || !(nChip > 1 && nChip <= 6)) throw new RangeError(`nChip must be a number in (1, 6] (got ${String(nChip)})`);
-  if (typeof nOut !== 'number' || !(nOut >= 1 && nOut <= 3)) throw new RangeError(`nOut must be a number in [1, 3] (got ${String(nOut)})`);
+  const N = LIMITS.indexN;
+  if (typeof nChip !== 'number' || !(nChip > N.min && nChip <= N.max)) throw new RangeError(`nChip must be a number in (${N.min}, ${N.max}] (got ${String(nChip)})`);
+  if (typeof nOut !== 'number' || !(nOut >= N.min && nOut <= N.max)) throw new RangeError(`nOut must be a number in [${N.min}, ${N.max}] (got ${String(nOut)})`);
   if (!Number.isInteger(points) || points < 2 || points > 1000) throw new RangeError(`points must be an integer in [2, 1000] (got ${String(points)})`);
   const n: number[] = [];
   const etaDome: number[] = [];

@@ -6,7 +6,6 @@ export {
   checkClaim,
   CLAIM_KINDS,
   CHIP_STRUCTURES,
-  CLAIM_LIMITS,
   TRACE_K,
   type Claim,
   type ClaimKind,
@@ -15,6 +14,15 @@ export {
   type ClaimNumber,
   type ClaimResult
 } from './claim-check';
+export {
+  CLAIM_DEFAULTS,
+  CLAIM_EXAMPLE,
+  CLAIM_VALUE_LIMIT,
+  CLAIM_VALUE_FIELD,
+  claimValueProblem,
+  claimCoreValue,
+  claimCoreLimit
+} from './claim-input';
 export { encapsulantNotes } from './encapsulant-notes';
 export {
   rankEncapsulants,

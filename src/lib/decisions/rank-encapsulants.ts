@@ -12,6 +12,7 @@ import type { Material, MaterialCategory, MaterialNote, Provenance } from '../ma
 import { weightedAverage, type Spectrum } from '../photometry/index';
 import { bandInterpolant } from '../photometry/band-interpolant';
 import { encapsulantNotes } from './encapsulant-notes';
+import { LIMITS } from '../scenario/limits';
 
 /** Where an index comes from: a fixed number (typed) or a material's dispersion. */
 export type IndexSource = { n: number } | { material: Material };
@@ -88,7 +89,9 @@ export interface EncapsulantRanking {
   warnings: string[];
 }
 
-const SIZE_MAX_MM = 1000;
+const SIZE_MAX_MM = LIMITS.sizeMm.max;
+const N = LIMITS.indexN;
+const W = LIMITS.wavelengthNm;
 
 function positive(field: string, value: unknown, max: number): number {
   if (typeof value !== 'number' || !(value > 0 && value <= max)) {
@@ -103,8 +106,8 @@ function indexOf(source: IndexSource, wavelengthNm: number, warnings: string[] |
     if (v.warning && warnings && !warnings.includes(v.warning)) warnings.push(v.warning);
     return v.n;
   }
-  if (typeof source.n !== 'number' || !(source.n >= 1 && source.n <= 6)) {
-    throw new RangeError(`${field} index must be a number in [1, 6] (got ${String(source.n)})`);
+  if (typeof source.n !== 'number' || !(source.n >= N.min && source.n <= N.max)) {
+    throw new RangeError(`${field} index must be a number in [${N.min}, ${N.max}] (got ${String(source.n)})`);
   }
   return source.n;
 }
@@ -121,8 +124,8 @@ export function rankEncapsulants(input: RankInput): EncapsulantRanking {
   const l = positive('chipLengthMm', input.chipLengthMm, SIZE_MAX_MM);
   const radiusMm = positive('radiusMm', input.radiusMm, SIZE_MAX_MM);
   const lambda = input.wavelengthNm;
-  if (typeof lambda !== 'number' || !(lambda >= 200 && lambda <= 2500)) {
-    throw new RangeError(`wavelengthNm must be a number in [200, 2500] nm (got ${String(lambda)})`);
+  if (typeof lambda !== 'number' || !(lambda >= W.min && lambda <= W.max)) {
+    throw new RangeError(`wavelengthNm must be a number in [${W.min}, ${W.max}] nm (got ${String(lambda)})`);
   }
   const order = input.order ?? 'design';
   if (order !== 'design' && order !== 'radiometric' && order !== 'luminous') {
@@ -130,8 +133,8 @@ export function rankEncapsulants(input: RankInput): EncapsulantRanking {
   }
   if (!Array.isArray(input.candidates)) throw new RangeError('candidates must be a list of materials');
   const cur = input.current;
-  if (!cur || typeof cur.n !== 'number' || !(cur.n >= 1 && cur.n <= 6)) {
-    throw new RangeError(`current encapsulant index must be a number in [1, 6] (got ${String(cur?.n)})`);
+  if (!cur || typeof cur.n !== 'number' || !(cur.n >= N.min && cur.n <= N.max)) {
+    throw new RangeError(`current encapsulant index must be a number in [${N.min}, ${N.max}] (got ${String(cur?.n)})`);
   }
 
   const warnings: string[] = [];

@@ -14,7 +14,7 @@ import { bandInterpolant } from '../photometry/band-interpolant';
 import { weightedAverage, type Spectrum } from '../photometry/index';
 import { scenarioSpectrum } from '../photometry/scenario-spectrum';
 import { designWavelengthNm, mediumMaterial } from '../scenario/resolve';
-import type { MediumSpec, Scenario } from '../scenario/schema';
+import type { AnyMediumSpec, Scenario } from '../scenario/schema';
 
 /** One figure at the design wavelength and weighted over the spectrum (fractions of emitted light, [0, 1]). */
 export interface SpectralFigure {
@@ -64,7 +64,7 @@ interface Figures {
   dome: number;
 }
 
-function part(spec: MediumSpec, field: string): Part {
+function part(spec: AnyMediumSpec, field: string): Part {
   if (spec.kind === 'index') return { field, material: null, n: spec.n };
   return { field, material: mediumMaterial(spec, field), n: NaN };
 }

@@ -6,6 +6,8 @@ export {
   assertScenario,
   type Scenario,
   type MediumSpec,
+  type EncapsulantMediumSpec,
+  type AnyMediumSpec,
   type EmissionSpec,
   type BaseSpec,
   type EncapsulantShape,
@@ -26,6 +28,7 @@ export {
 export {
   designWavelengthNm,
   resolveMedium,
+  encapsulantK,
   resolveScenario,
   toTracePackage,
   type ResolvedMedium,

@@ -25,22 +25,49 @@ export const LIMITS = {
   spectrumRows: { min: 2, max: 2000, unit: 'rows', integer: true },
   /** Any length of the package: chip sides, chip height, dome radius, encapsulant height. */
   sizeMm: { min: 0.001, max: 1000, unit: 'mm' },
-  /** Height of the emitting plane above the chip's bottom face (upper bound is the chip height). */
+  /** Height of the emitting plane above the chip's bottom face (upper bound is the chip height, a fit rule). */
   emitterZMm: { min: 0, max: 1000, unit: 'mm' },
-  /** Bulk absorption coefficient (Beer–Lambert, I = I0·exp(−α·d)). */
+  /** Bulk absorption coefficient (Beer–Lambert, I = I0·exp(−α·d)); 1000/mm loses 1/e in 1 µm. */
   absorptionPerMm: { min: 0, max: 1000, unit: '1/mm' },
   /** Power reflectance of the base under the chip. */
   reflectance: { min: 0, max: 1, unit: '' },
-  /** Real part of a typed refractive index (dielectric media: air up to the densest semiconductors). */
+  /**
+   * Real index of a package medium (chip, encapsulant, outside) — typed or taken from a material at the
+   * design wavelength: air up to the densest semiconductors. Every computation of a package takes this range.
+   */
   indexN: { min: 1, max: 6, unit: '' },
-  /** Extinction coefficient of a typed refractive index. */
+  /** Extinction coefficient of a typed refractive index of a package medium. */
   indexK: { min: 0, max: 10, unit: '' },
-  /** Rays launched by the Monte Carlo trace. */
+  /** Rays launched by a package trace (fewer than 1000 gives a standard error above 1.5 %, too coarse to show). */
   rays: { min: 1_000, max: 20_000_000, unit: 'rays', integer: true },
   /** Seed of the trace's random number generator (unsigned 32-bit). */
   seed: { min: 0, max: 4_294_967_295, unit: '', integer: true },
+  /** Surface events after which a traced ray is counted lost. */
+  maxEvents: { min: 1, max: 1_000_000, unit: 'events', integer: true },
   /** Length of the scenario's name, in characters. */
-  nameLength: { min: 1, max: 120, unit: 'characters', integer: true }
+  nameLength: { min: 1, max: 120, unit: 'characters', integer: true },
+
+  /** Wavelength at which a material of the library (or the user's) may be evaluated: vacuum UV to mid infrared. */
+  materialWavelengthNm: { min: 100, max: 20000, unit: 'nm' },
+  /** Real part of any material's or layer's index; metals go below 1, so only > 0 is required (min is exclusive). */
+  materialN: { min: 0, max: 10, unit: '' },
+  /** Extinction coefficient of any material or layer (metals reach about 15 in the infrared). */
+  materialK: { min: 0, max: 50, unit: '' },
+  /** Fraction of the light leaving a textured chip face in a Lambertian direction instead of the specular one. */
+  scatteredFraction: { min: 0, max: 1, unit: '' },
+  /** Layers of a layered chip, bottom to top. */
+  chipLayers: { min: 1, max: 16, unit: 'layers', integer: true },
+  /** Rows of a pasted or stored n,k table. */
+  nkTableRows: { min: 2, max: 5000, unit: 'rows', integer: true },
+  /** Terms of a Sellmeier or pole-sum formula. */
+  formulaTerms: { min: 1, max: 8, unit: 'terms', integer: true },
+
+  /** A claimed extraction, percent of the light generated in the chip (0 is no claim: the minimum is exclusive). */
+  claimExtractionPercent: { min: 0, max: 100, unit: '%' },
+  /** A claimed gain of an encapsulant over the bare chip, a factor (minimum exclusive). */
+  claimGain: { min: 0, max: 100, unit: '×' },
+  /** A claimed change of extraction from a flat coating, percent (−100 % is all light lost: minimum exclusive). */
+  claimCoatingPercent: { min: -100, max: 10000, unit: '%' }
 } as const satisfies Record<string, NumberLimit>;
 
 export type LimitName = keyof typeof LIMITS;

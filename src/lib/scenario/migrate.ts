@@ -1,6 +1,10 @@
 /**
  * Lifts older scenario layouts to the current version before validation.
  *
+ * Version 2 → 3: a typed encapsulant index loses its k. Every computation already took the
+ * encapsulant's loss from its absorption per mm and ignored that k (the tracer and the closed form use
+ * the real index only), so the migrated scenario computes exactly the same numbers.
+ *
  * Version 1 differs from version 2 only in what a medium can be (no user materials), so it is read
  * as version 2 unchanged.
  *
@@ -90,8 +94,16 @@ export function migrateScenario(raw: unknown): MigrateResult {
   }
   if (version === SCENARIO_VERSION) return { ok: true, value: renameRetired(raw), from: version };
   // Version 2 only added user-material media: a version-1 scenario is a version-2 one with its number raised.
-  const v1 = version === 0 ? fromV0(raw) : raw;
-  return { ok: true, value: renameRetired({ ...v1, version: SCENARIO_VERSION }), from: version };
+  const v2 = version <= 1 ? { ...(version === 0 ? fromV0(raw) : raw), version: 2 } : raw;
+  return { ok: true, value: renameRetired(fromV2(v2)), from: version };
+}
+
+/** v2 → v3: the typed encapsulant index drops its k (never used: the absorption per mm is the encapsulant's loss). */
+function fromV2(v2: Record<string, unknown>): Record<string, unknown> {
+  const enc = v2.encapsulant;
+  if (!isRecord(enc) || !isRecord(enc.medium) || enc.medium.kind !== 'index') return { ...v2, version: 3 };
+  const { k: _unused, ...medium } = enc.medium;
+  return { ...v2, version: 3, encapsulant: { ...enc, medium } };
 }
 
 /** A library medium `{ kind: 'material', id }` with a retired id gets the id of its replacement. */

@@ -5,7 +5,7 @@
 import { findMaterial, indexAt } from '../materials/index';
 import type { Material } from '../materials/types';
 import type { TracePackage } from '../trace/package-spec';
-import type { BaseSpec, EmissionSpec, MediumSpec, Scenario } from './schema';
+import type { AnyMediumSpec, BaseSpec, EmissionSpec, Scenario } from './schema';
 
 /** A medium's complex index n + ik at one wavelength, and where it came from. */
 export interface ResolvedMedium {
@@ -57,7 +57,7 @@ export function designWavelengthNm(emission: EmissionSpec): number {
  * for a typed index. A library id that is not in the library throws a RangeError naming the field (a
  * validated scenario never has one).
  */
-export function mediumMaterial(spec: MediumSpec, field = 'Medium'): Material | null {
+export function mediumMaterial(spec: AnyMediumSpec, field = 'Medium'): Material | null {
   if (spec.kind === 'index') return null;
   if (spec.kind === 'user') return spec.material;
   const material = findMaterial(spec.id);
@@ -65,10 +65,21 @@ export function mediumMaterial(spec: MediumSpec, field = 'Medium'): Material | n
   return material;
 }
 
-/** Index of a medium at a wavelength. A typed index is returned as typed. */
-export function resolveMedium(spec: MediumSpec, wavelengthNm: number, field = 'Medium'): ResolvedMedium {
+/**
+ * Extinction coefficient equivalent to a bulk absorption coefficient: k = α·λ / (4π), from
+ * α = 4πk/λ (Beer–Lambert intensity decay of a wave n + ik; Born & Wolf, Principles of Optics, §14.1).
+ * @param absorptionPerMm α, 1/mm, ≥ 0; @param wavelengthNm vacuum wavelength λ, nm, > 0
+ * @example encapsulantK(0.001, 450) // 3.58e-8
+ */
+export function encapsulantK(absorptionPerMm: number, wavelengthNm: number): number {
+  return (absorptionPerMm * wavelengthNm * 1e-6) / (4 * Math.PI);
+}
+
+/** Index of a medium at a wavelength. A typed index is returned as typed (k = 0 when it has none). */
+export function resolveMedium(spec: AnyMediumSpec, wavelengthNm: number, field = 'Medium'): ResolvedMedium {
   if (spec.kind === 'index') {
-    return { n: spec.n, k: spec.k, label: 'typed index', materialId: null, material: null, user: false, inRange: true, warning: null };
+    const k = 'k' in spec ? spec.k : 0;
+    return { n: spec.n, k, label: 'typed index', materialId: null, material: null, user: false, inRange: true, warning: null };
   }
   const material = mediumMaterial(spec, field) as Material;
   const v = indexAt(material, wavelengthNm);
@@ -95,7 +106,12 @@ function resolveBase(base: BaseSpec, wavelengthNm: number): ResolvedBase {
 export function resolveScenario(scenario: Scenario): ResolvedScenario {
   const wavelengthNm = designWavelengthNm(scenario.emission);
   const chip = resolveMedium(scenario.chip.medium, wavelengthNm, 'Chip');
-  const encapsulant = resolveMedium(scenario.encapsulant.medium, wavelengthNm, 'Encapsulant');
+  const typedEncapsulant = resolveMedium(scenario.encapsulant.medium, wavelengthNm, 'Encapsulant');
+  // A typed encapsulant index carries its loss as the absorption per mm: its k is that, converted.
+  const encapsulant =
+    scenario.encapsulant.medium.kind === 'index'
+      ? { ...typedEncapsulant, k: encapsulantK(scenario.encapsulant.absorptionPerMm, wavelengthNm) }
+      : typedEncapsulant;
   const outside = resolveMedium(scenario.outside, wavelengthNm, 'Outside medium');
   const base = resolveBase(scenario.base, wavelengthNm);
   const warnings: string[] = [];

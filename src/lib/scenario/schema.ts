@@ -1,6 +1,8 @@
 /**
  * The scenario: one LED package description shared by every page, the URL and the command line.
- * Version 2 (adds media that carry a user's own material in full, so a link is self-contained).
+ * Version 3: the encapsulant's absorption is one input, `absorptionPerMm`; its typed index is n only (k is
+ * derived from the absorption, see `encapsulantK`). Version 2 added media that carry a user's own
+ * material in full, so a link is self-contained.
  * Older versions are lifted by `migrateScenario` before they reach this schema.
  */
 import { z } from 'zod';
@@ -8,8 +10,9 @@ import { findMaterial, indexAt, userMaterialField } from '../materials/index';
 import type { Material } from '../materials/types';
 import { designWavelengthNm } from './resolve';
 import { LIMITS, MATERIAL_ID_PATTERN, type NumberLimit, rangeMessage } from './limits';
+import { packageFitProblems } from './package-fit';
 
-export const SCENARIO_VERSION = 2;
+export const SCENARIO_VERSION = 3;
 
 /** A number field with a range message that names the field (zod rejects NaN and ±Infinity). */
 function num(field: string, limit: NumberLimit) {
@@ -39,30 +42,32 @@ function objectMessages(field: string) {
   };
 }
 
+function libraryOrUser(field: string) {
+  const own = objectMessages(field.endsWith('medium') ? field : `${field} medium`);
+  return [
+    z.object({ kind: z.literal('material'), id: materialId(`${field} material`) }, own).strict(),
+    z.object({ kind: z.literal('user'), material: userMaterialField(`${field} user material`) }, own).strict()
+  ] as const;
+}
+
+const mediumError = (field: string) => ({ error: `${field} must be a library material, a typed index or a user material.` });
+
 /**
  * A medium: a library material (indices taken at the scenario wavelength), a typed index n + ik, or
  * one of the user's own materials, carried in full.
  */
 function medium(field: string) {
   const own = objectMessages(field.endsWith('medium') ? field : `${field} medium`);
-  return z.discriminatedUnion(
-    'kind',
-    [
-      z.object({ kind: z.literal('material'), id: materialId(`${field} material`) }, own).strict(),
-      z.object({ kind: z.literal('user'), material: userMaterialField(`${field} user material`) }, own).strict(),
-      z
-        .object(
-          {
-            kind: z.literal('index'),
-            n: num(`${field} index n`, LIMITS.indexN),
-            k: num(`${field} extinction k`, LIMITS.indexK)
-          },
-          own
-        )
-        .strict()
-    ],
-    { error: `${field} must be a library material, a typed index or a user material.` }
-  );
+  const typed = z
+    .object({ kind: z.literal('index'), n: num(`${field} index n`, LIMITS.indexN), k: num(`${field} extinction k`, LIMITS.indexK) }, own)
+    .strict();
+  return z.discriminatedUnion('kind', [...libraryOrUser(field), typed], mediumError(field));
+}
+
+/** The encapsulant's medium: as any medium, but a typed index is n alone — its loss is the encapsulant's absorption per mm. */
+function encapsulantMedium(field: string) {
+  const typed = z.object({ kind: z.literal('index'), n: num(`${field} index n`, LIMITS.indexN) }, objectMessages(`${field} medium`)).strict();
+  return z.discriminatedUnion('kind', [...libraryOrUser(field), typed], mediumError(field));
 }
 
 const emissionSchema = z.discriminatedUnion(
@@ -117,7 +122,7 @@ const baseSchema = z.discriminatedUnion(
 
 const encapsulantSchema = z
   .object({
-    medium: medium('Encapsulant'),
+    medium: encapsulantMedium('Encapsulant'),
     shape: z.enum(['none', 'dome', 'cylinder'], { error: "Encapsulant shape must be 'none', 'dome' or 'cylinder'." }),
     radiusMm: num('Encapsulant radius', LIMITS.sizeMm),
     heightMm: num('Encapsulant height', LIMITS.sizeMm),
@@ -154,7 +159,7 @@ const objectSchema = z
 
 type ObjectScenario = z.infer<typeof objectSchema>;
 type Ctx = z.RefinementCtx<ObjectScenario>;
-type MediumSpecIn = ObjectScenario['outside'];
+type MediumSpecIn = ObjectScenario['outside'] | ObjectScenario['encapsulant']['medium'];
 
 function checkMaterial(ctx: Ctx, path: (string | number)[], field: string, id: string, wantMetal: boolean): void {
   if (!MATERIAL_ID_PATTERN.test(id)) return; // already reported by the field's own check
@@ -188,8 +193,37 @@ function checkIndexExists(ctx: Ctx, path: (string | number)[], field: string, m:
   }
 }
 
-function fmtMm(x: number): string {
-  return `${Number(x.toPrecision(3))} mm`;
+/** The fewest significant digits (from 4) at which x still shows outside [min, max]. */
+function outsideDigits(x: number, min: number, max: number): string {
+  for (let digits = 4; digits < 17; digits++) {
+    const shown = Number(x.toPrecision(digits));
+    if (shown < min || shown > max) return String(shown);
+  }
+  return String(x);
+}
+
+/**
+ * A material's real index at the design wavelength must lie in the range every package computation
+ * takes (a typed index is held there by its own field check); a formula far outside its data range can
+ * leave it (a Sellmeier fit near its pole).
+ */
+function checkIndexInRange(ctx: Ctx, path: (string | number)[], field: string, m: Material | undefined, wavelengthNm: number): void {
+  if (!m) return;
+  let n: number;
+  try {
+    n = indexAt(m, wavelengthNm).n;
+  } catch {
+    return; // reported by checkIndexExists
+  }
+  const L = LIMITS.indexN;
+  if (!(n >= L.min && n <= L.max)) {
+    ctx.addIssue({
+      code: 'custom',
+      path,
+      // enough digits that the value shown is itself out of range (0.99999 must not print as 1)
+      message: `${field} index n must be between ${L.min} and ${L.max}; ${m.name} gives ${outsideDigits(n, L.min, L.max)} at ${wavelengthNm} nm.`
+    });
+  }
 }
 
 /** Checks that span more than one field: materials exist, the emitter is inside the chip, the chip fits. */
@@ -209,43 +243,14 @@ function crossChecks(s: ObjectScenario, ctx: Ctx): void {
   checkIndexExists(ctx, ['chip', 'medium'], 'Chip material', materialOf(s.chip.medium), wl);
   checkIndexExists(ctx, ['encapsulant', 'medium'], 'Encapsulant material', materialOf(s.encapsulant.medium), wl);
   checkIndexExists(ctx, ['outside'], 'Outside medium material', materialOf(s.outside), wl);
+  checkIndexInRange(ctx, ['chip', 'medium'], 'Chip', materialOf(s.chip.medium), wl);
+  if (s.encapsulant.shape !== 'none') checkIndexInRange(ctx, ['encapsulant', 'medium'], 'Encapsulant', materialOf(s.encapsulant.medium), wl);
+  checkIndexInRange(ctx, ['outside'], 'Outside medium', materialOf(s.outside), wl);
   if (s.base.kind === 'metal') checkIndexExists(ctx, ['base', 'id'], 'Base metal', findMaterial(s.base.id), wl);
   if (s.base.kind === 'metal') checkMaterial(ctx, ['base', 'id'], 'Base metal', s.base.id, true);
 
-  if (s.chip.emitterZMm > s.chip.heightMm) {
-    ctx.addIssue({
-      code: 'custom',
-      path: ['chip', 'emitterZMm'],
-      message: `Emitter height must be between 0 and the chip height (${fmtMm(s.chip.heightMm)}).`
-    });
-  }
-
-  // The chip's top corners decide whether it fits: both shapes keep or lose width going up.
-  const rho = Math.hypot(s.chip.widthMm / 2, s.chip.lengthMm / 2);
-  const H = s.chip.heightMm;
-  const e = s.encapsulant;
-  if (e.shape !== 'none' && e.heightMm <= H) {
-    ctx.addIssue({
-      code: 'custom',
-      path: ['encapsulant', 'heightMm'],
-      message: `Encapsulant height must be more than the chip height (${fmtMm(H)}) and at most ${LIMITS.sizeMm.max} mm.`
-    });
-  } else if (e.shape === 'dome') {
-    // Dome = upper half of the spheroid x²/R² + y²/R² + z²/h² = 1: corner inside ⇔ R > ρ / √(1 − H²/h²).
-    const minR = rho / Math.sqrt(1 - (H * H) / (e.heightMm * e.heightMm));
-    if (e.radiusMm <= minR) {
-      ctx.addIssue({
-        code: 'custom',
-        path: ['encapsulant', 'radiusMm'],
-        message: `Encapsulant radius must be more than ${fmtMm(minR)} (so the chip's corners are inside the dome) and at most ${LIMITS.sizeMm.max} mm.`
-      });
-    }
-  } else if (e.shape === 'cylinder' && e.radiusMm <= rho) {
-    ctx.addIssue({
-      code: 'custom',
-      path: ['encapsulant', 'radiusMm'],
-      message: `Encapsulant radius must be more than the chip's half-diagonal (${fmtMm(rho)}) and at most ${LIMITS.sizeMm.max} mm.`
-    });
+  for (const problem of packageFitProblems(s.chip, s.encapsulant)) {
+    ctx.addIssue({ code: 'custom', path: problem.path.split('.'), message: problem.message });
   }
 
   if (s.emission.kind === 'table') {
@@ -273,6 +278,10 @@ export const scenarioSchema = objectSchema.superRefine(crossChecks);
 
 export type Scenario = z.infer<typeof scenarioSchema>;
 export type MediumSpec = Scenario['outside'];
+/** The encapsulant's medium: a typed index there is n alone. */
+export type EncapsulantMediumSpec = Scenario['encapsulant']['medium'];
+/** Any medium of a scenario. */
+export type AnyMediumSpec = MediumSpec | EncapsulantMediumSpec;
 export type EmissionSpec = Scenario['emission'];
 export type BaseSpec = Scenario['base'];
 export type EncapsulantShape = Scenario['encapsulant']['shape'];

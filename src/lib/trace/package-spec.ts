@@ -5,6 +5,8 @@
  * Units: lengths in mm, absorption coefficients in 1/mm (Beer–Lambert, I = I0·exp(−α·d)), indices
  * dimensionless. Frame: z up, base plane z = 0, chip centred on the z axis, width along x, length along y.
  */
+import { LIMITS } from '../scenario/limits';
+import { packageFitProblems } from '../scenario/package-fit';
 
 /** Where rays start inside the chip. */
 export type EmissionMode = 'plane' | 'volume';
@@ -106,7 +108,7 @@ export interface TracePackage {
 }
 
 export interface TraceOptions {
-  /** Rays to launch, integer [1, 1e8]. */
+  /** Rays to launch, integer [1, 2e7]. */
   rays: number;
   /** Seed, unsigned 32-bit integer. */
   seed: number;
@@ -117,19 +119,23 @@ export interface TraceOptions {
 /** Default event cap per ray. */
 export const DEFAULT_MAX_EVENTS = 1000;
 
-/** Allowed ranges of every number the tracer accepts (closed intervals unless noted). */
+/**
+ * The tracer's names for its allowed ranges; the numbers live in the one limits table, so the tracer takes
+ * every package the scenario schema accepts. Rays go down to 1 here (tests and single chunks); the
+ * table's minimum is what a user may ask for.
+ */
 export const TRACE_LIMITS = {
-  sizeMm: { min: 1e-6, max: 1e4 },
-  index: { min: 1, max: 10 },
-  absorptionPerMm: { min: 0, max: 1e6 },
-  reflectance: { min: 0, max: 1 },
-  metalN: { min: 1e-4, max: 20 },
-  metalK: { min: 0, max: 50 },
-  rays: { min: 1, max: 1e8 },
-  seed: { min: 0, max: 4294967295 },
-  maxEvents: { min: 1, max: 1e6 },
-  scatteredFraction: { min: 0, max: 1 },
-  layers: { min: 1, max: 16 }
+  sizeMm: LIMITS.sizeMm,
+  index: LIMITS.indexN,
+  absorptionPerMm: LIMITS.absorptionPerMm,
+  reflectance: LIMITS.reflectance,
+  metalN: LIMITS.materialN,
+  metalK: LIMITS.materialK,
+  rays: { min: 1, max: LIMITS.rays.max },
+  seed: LIMITS.seed,
+  maxEvents: LIMITS.maxEvents,
+  scatteredFraction: LIMITS.scatteredFraction,
+  layers: LIMITS.chipLayers
 } as const;
 
 function show(value: unknown): string {
@@ -156,6 +162,11 @@ function requireChoice(field: string, value: unknown, choices: readonly string[]
   }
 }
 
+/** A limit for a message, to six significant digits. */
+function limitText(value: number): string {
+  return String(Number(value.toPrecision(6)));
+}
+
 function requireObject(field: string, value: unknown): void {
   if (typeof value !== 'object' || value === null) throw new RangeError(`${field} must be an object (got ${show(value)})`);
 }
@@ -179,11 +190,6 @@ export function emitterHeightMm(chip: TraceChip): number {
   if (chip.layers === undefined) return chip.heightMm / 2;
   const [z0, z1] = layerSpanMm(chip, chip.emitLayer ?? 0);
   return (z0 + z1) / 2;
-}
-
-/** A limit for a message, to six significant digits. */
-function limitText(value: number): string {
-  return String(Number(value.toPrecision(6)));
 }
 
 /**
@@ -235,30 +241,9 @@ export function validateTracePackage(p: TracePackage): void {
   requireRange('encapsulant.n', enc.n, L.index.min, L.index.max);
   requireRange('encapsulant.absorptionPerMm', enc.absorptionPerMm, L.absorptionPerMm.min, L.absorptionPerMm.max);
 
-  // Chip fit: the top corners decide, since both shapes narrow (or keep their width) going up.
-  const rho2 = (chip.widthMm / 2) ** 2 + (chip.lengthMm / 2) ** 2; // squared half-diagonal, mm²
-  const H = chip.heightMm;
-  if (!(enc.heightMm > H)) {
-    throw new RangeError(
-      `encapsulant.heightMm must be greater than chip.heightMm = ${limitText(H)} mm for the chip to fit (got ${show(enc.heightMm)})`
-    );
-  }
-  if (enc.shape === 'dome') {
-    // x²/R² + y²/R² + H²/h² < 1  ⇔  R > ρ / √(1 − H²/h²)
-    const minR = Math.sqrt(rho2 / (1 - (H * H) / (enc.heightMm * enc.heightMm)));
-    if (!(enc.radiusMm > minR)) {
-      throw new RangeError(
-        `encapsulant.radiusMm must be greater than ${limitText(minR)} mm so the chip's top corners lie inside the dome (got ${show(enc.radiusMm)})`
-      );
-    }
-  } else {
-    const minR = Math.sqrt(rho2);
-    if (!(enc.radiusMm > minR)) {
-      throw new RangeError(
-        `encapsulant.radiusMm must be greater than the chip's half-diagonal ${limitText(minR)} mm so the chip fits in the cylinder (got ${show(enc.radiusMm)})`
-      );
-    }
-  }
+  // Chip fit: the same rules as the scenario schema
+  const problem = packageFitProblems(chip, enc)[0];
+  if (problem) throw new RangeError(`${problem.path}: ${problem.message}`);
 }
 
 function validateMirror(field: string, m: TraceBase): void {
@@ -268,7 +253,9 @@ function validateMirror(field: string, m: TraceBase): void {
   if (m.kind === 'reflectance') {
     requireRange(`${field}.reflectance`, m.reflectance, L.reflectance.min, L.reflectance.max);
   } else {
-    requireRange(`${field}.n`, m.n, L.metalN.min, L.metalN.max);
+    if (!(typeof m.n === 'number' && m.n > L.metalN.min && m.n <= L.metalN.max)) {
+      throw new RangeError(`${field}.n must be a number in (${L.metalN.min}, ${L.metalN.max}] (got ${show(m.n)})`);
+    }
     requireRange(`${field}.k`, m.k, L.metalK.min, L.metalK.max);
   }
 }

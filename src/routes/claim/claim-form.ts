@@ -3,7 +3,18 @@
  * a factor for gain), where each index comes from (the scenario or typed), and their link parameters, so
  * a copied link reopens the same claim. Pure.
  */
-import { CHIP_STRUCTURES, CLAIM_KINDS, type ChipStructure, type Claim, type ClaimKind } from '$lib/decisions';
+import {
+  CHIP_STRUCTURES,
+  CLAIM_DEFAULTS,
+  CLAIM_EXAMPLE,
+  CLAIM_KINDS,
+  CLAIM_VALUE_LIMIT,
+  claimCoreValue,
+  type ChipStructure,
+  type Claim,
+  type ClaimKind
+} from '$lib/decisions';
+import { LIMITS } from '$lib/scenario/limits';
 
 export type IndexChoice = 'scenario' | 'typed';
 export type EncChoice = 'scenario' | 'none' | 'typed';
@@ -30,25 +41,21 @@ export interface ScenarioIndices {
   nOut: number;
 }
 
-/** Limits of the shown value per kind, with its unit (the core checks the converted value again). */
-export const SHOWN_LIMITS = {
-  extraction: { min: 0, max: 100, unit: '%' },
-  gain: { min: 0, max: 100, unit: '×' },
-  coating: { min: -100, max: 10000, unit: '%' }
-} as const;
+/** Limits of the stated value per kind, with its unit (the one limits table's). */
+export const SHOWN_LIMITS = CLAIM_VALUE_LIMIT;
 
-export const INDEX_LIMIT = { min: 1, max: 6, unit: '' } as const;
-export const OUT_LIMIT = { min: 1, max: 3, unit: '' } as const;
+/** Every typed index (chip, encapsulant, outside) takes the package index range. */
+export const INDEX_LIMIT = LIMITS.indexN;
 
 /** A typical claim of each kind, used when the kind changes. */
-export const EXAMPLE_VALUE: Record<ClaimKind, number> = { extraction: 85, gain: 3.5, coating: 40 };
+export const EXAMPLE_VALUE = CLAIM_EXAMPLE;
 
 export function defaultForm(s: ScenarioIndices): ClaimForm {
   return {
-    kind: 'extraction',
-    shown: EXAMPLE_VALUE.extraction,
-    structure: 'planar',
-    faces: 5,
+    kind: CLAIM_DEFAULTS.kind,
+    shown: EXAMPLE_VALUE[CLAIM_DEFAULTS.kind],
+    structure: CLAIM_DEFAULTS.structure,
+    faces: CLAIM_DEFAULTS.faces,
     chip: 'scenario',
     chipN: round(s.nChip),
     enc: s.nEnc === null ? 'none' : 'scenario',
@@ -62,17 +69,12 @@ function round(x: number): number {
   return Number(x.toPrecision(4));
 }
 
-/** The value the core takes: a fraction for extraction, a factor for gain, a relative increase for coating. */
-export function claimValue(kind: ClaimKind, shown: number): number {
-  return kind === 'gain' ? shown : shown / 100;
-}
-
 /** The claim the form describes, with the scenario's indices where the form says "scenario". */
 export function formToClaim(form: ClaimForm, s: ScenarioIndices): Claim {
   const nEnc = form.enc === 'none' ? null : form.enc === 'typed' ? form.encN : s.nEnc;
   return {
     kind: form.kind,
-    value: claimValue(form.kind, form.shown),
+    value: claimCoreValue(form.kind, form.shown),
     structure: form.structure,
     faces: form.faces,
     nChip: form.chip === 'typed' ? form.chipN : s.nChip,
@@ -122,7 +124,7 @@ export function formFromParams(get: (name: string) => string | null, s: Scenario
     const n = num(enc, INDEX_LIMIT.min, INDEX_LIMIT.max);
     if (n !== null) Object.assign(form, { enc: 'typed', encN: n });
   }
-  const out = num(get('out'), OUT_LIMIT.min, OUT_LIMIT.max);
+  const out = num(get('out'), INDEX_LIMIT.min, INDEX_LIMIT.max);
   if (out !== null) Object.assign(form, { out: 'typed', outN: out });
   return form;
 }

@@ -4,6 +4,9 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { demoScenario as cliDemoScenario } from '../../../src/lib/scenario/defaults';
 import { runCli, runJson } from './run-cli';
+import { toTracePackage } from '../../../src/lib/scenario/resolve';
+import { traceSync } from '../../../src/lib/trace/trace';
+import { summarize } from '../../../src/lib/trace/summary';
 
 const demo = ['trace', '--n-chip', '2.45', '--chip', '1x1x0.15', '--emitter-z', '0.1', '--chip-absorption', '0.5', '--n-enc', '1.41',
   '--enc-absorption', '0.001', '--shape', 'dome', '--radius', '2.5', '--height', '2.5', '--base-reflectance', '0.92', '--seed', '1'];
@@ -30,14 +33,40 @@ describe('outcouple trace', () => {
     expect(two.counts).toEqual(one.counts);
   });
 
-  it('--scenario reads a flat object of option names, and options on the line win', () => {
+  it('--scenario reads the JSON the page exports (the scenario itself, or an export holding it), and options on the line win', () => {
     const dir = mkdtempSync(join(tmpdir(), 'outcouple-'));
-    const file = join(dir, 'package.json');
-    writeFileSync(file, JSON.stringify({ 'n-chip': 2.45, chip: '1x1x0.15', shape: 'cylinder', radius: 2.5, height: 1, rays: 5000 }));
+    const file = join(dir, 'scenario.json');
+    const scenario = { ...cliDemoScenario(), encapsulant: { ...cliDemoScenario().encapsulant, shape: 'cylinder', heightMm: 1 }, trace: { rays: 5000, seed: 1, polarization: 'average' } };
+    writeFileSync(file, JSON.stringify(scenario));
     const out = runJson(['trace', '--scenario', file, '--threads', '1', '--seed', '3']);
     expect(out.package.encapsulant.shape).toBe('cylinder');
     expect(out.rays).toBe(5000);
     expect(out.seed).toBe(3);
+    const wrapped = join(dir, 'export.json');
+    writeFileSync(wrapped, JSON.stringify({ page: 'dome', scenario }));
+    expect(runJson(['trace', '--scenario', wrapped, '--threads', '1']).package.encapsulant.shape).toBe('cylinder');
+  });
+
+  it('with no options traces the demo scenario: the same ledger as the page gets from the same scenario, seed and rays', () => {
+    // The page traces toTracePackage(DEMO_SCENARIO) with the scenario's rays and seed (src/routes/dome).
+    const rays = 20_000;
+    const cli = runJson(['trace', '--rays', String(rays), '--threads', '1']);
+    const demoPkg = toTracePackage(cliDemoScenario());
+    const page = traceSync(demoPkg, { rays, seed: cliDemoScenario().trace.seed, maxEvents: 1000 });
+    expect(cli.package).toEqual(demoPkg);
+    expect(cli.counts).toEqual({ ...summarize(page).counts });
+  });
+
+  it('--chip WxL keeps the height; WxLxH sets it and moves the emitter with it; a negative number is read as a number', () => {
+    const d = cliDemoScenario().chip;
+    const wl = runJson(['trace', '--chip', '0.5x0.8', '--rays', '1000', '--threads', '1']).package.chip;
+    expect([wl.widthMm, wl.lengthMm, wl.heightMm, wl.emitterZMm]).toEqual([0.5, 0.8, d.heightMm, d.emitterZMm]);
+    const wlh = runJson(['trace', '--chip', '1x1x0.3', '--rays', '1000', '--threads', '1']).package.chip;
+    expect(wlh.heightMm).toBe(0.3);
+    expect(wlh.emitterZMm).toBeCloseTo((d.emitterZMm / d.heightMm) * 0.3, 12);
+    const negative = runCli(['trace', '--radius', '-3']);
+    expect(negative.code).toBe(2);
+    expect(negative.stderr).toBe('outcouple trace: --radius: Encapsulant radius must be between 0.001 and 1000 mm.\n');
   });
 
   it('--scenario reads an app scenario whose encapsulant is a user material carried in the file', () => {
@@ -66,8 +95,10 @@ describe('outcouple trace', () => {
   });
 
   it.each([
-    [['trace', '--rays', '10'], /--rays must be a number from 1000 to 100000000/],
-    [['trace', '--shape', 'cone'], /--shape must be one of none, dome, cylinder/],
+    [['trace', '--rays', '10'], /^outcouple trace: --rays: Rays must be a whole number between 1000 and 20000000 rays\.$/m],
+    [['trace', '--shape', 'cone'], /^outcouple trace: --shape: Encapsulant shape must be 'none', 'dome' or 'cylinder'\.$/m],
+    [['trace', '--n-out', '7'], /^outcouple trace: --n-out: Outside medium index n must be between 1 and 6\.$/m],
+    [['trace', '--chip', '5x1'], /^outcouple trace: --chip: Encapsulant radius must be more than 2\.56 mm/m],
     [['trace', '--radius', '0.4', '--height', '0.4', '--rays', '1000'], /fit|radius/i],
     [['trace', '--ies', 'x.ies'], /--ies needs --lumens/],
     [['trace', '--scenario', 'does-not-exist.json'], /--scenario: cannot read/]

@@ -106,10 +106,25 @@ describe('checkClaim(claim) — flat coating', () => {
     expect(dome).toBeLessThan(bare);
   });
 
-  it('a coating that lowers extraction is consistent and printed with a minus sign', () => {
-    const r = checkClaim(gan({ kind: 'coating', value: -0.2 }));
+  it('a negative "increase" from a coating is named a decrease and judged as a loss (possible)', () => {
+    const r = checkClaim(gan({ kind: 'coating', value: -0.05 }));
     expect(r.verdict).toBe('consistent');
-    expect(r.reason).toMatch(/^−20 %/);
+    expect(r.reason).toMatch(/^This is a decrease of 5 %, not an increase/);
+    expect(r.numbers[0]).toMatchObject({ id: 'claim', label: 'Claimed decrease from a flat coating', value: -0.05 });
+    expect(r.requires).toEqual([]);
+  });
+
+  it('a gain below 1 is named a loss and judged possible', () => {
+    const r = checkClaim(gan({ kind: 'gain', value: 0.8, nEnc: 1.41 }));
+    expect(r.verdict).toBe('consistent');
+    expect(r.reason).toMatch(/is a loss of 20 %/);
+  });
+
+  it('takes an outside index anywhere in the package index range, like the scenario (up to 6)', () => {
+    for (const nOut of [1, 3.5, 5, 6]) {
+      const r = checkClaim(gan({ kind: 'extraction', value: 0.5, nOut, nEnc: null }));
+      for (const n of r.numbers) expect(Number.isFinite(n.value), `${n.id} at nOut ${nOut}`).toBe(true);
+    }
   });
 });
 
@@ -136,9 +151,9 @@ describe('checkClaim(claim) — bad input', () => {
     expect(() => checkClaim(gan({ value: 1.2 }))).toThrow(/value \(extraction fraction\) must be a number in \(0, 1\]/);
     expect(() => checkClaim(gan({ value: 0 }))).toThrow(/\(0, 1\]/);
     expect(() => checkClaim(gan({ kind: 'gain', value: -1 }))).toThrow(/value \(gain factor\) must be a number in \(0, 100\]/);
-    expect(() => checkClaim(gan({ kind: 'coating', value: -1 }))).toThrow(/relative increase.*\(-1, 100\]/);
+    expect(() => checkClaim(gan({ kind: 'coating', value: -1 }))).toThrow(/relative change.*\(-1, 100\]/);
     expect(() => checkClaim(gan({ nChip: 0.5 }))).toThrow(/nChip must be a number in \[1, 6\]/);
-    expect(() => checkClaim(gan({ nOut: 4 }))).toThrow(/nOut must be a number in \[1, 3\]/);
+    expect(() => checkClaim(gan({ nOut: 6.5 }))).toThrow(/nOut must be a number in \[1, 6\]/); // the package index range, as in the scenario
     expect(() => checkClaim(gan({ nEnc: NaN }))).toThrow(/nEnc must be a number in \[1, 6\]/);
     // @ts-expect-error — not a chip structure
     expect(() => checkClaim(gan({ structure: 'bumpy' }))).toThrow(/structure must be one of planar, textured, thin-film, unknown/);

@@ -1,5 +1,6 @@
 import { describe, it, expect } from 'vitest';
-import { claimValue, defaultForm, formFromParams, formToClaim, formToParams } from '../../../src/routes/claim/claim-form';
+import { claimCoreValue as claimValue } from '../../../src/lib/decisions';
+import { defaultForm, formFromParams, formToClaim, formToParams } from '../../../src/routes/claim/claim-form';
 
 const scenario = { nChip: 2.4869, nEnc: 1.4134, nOut: 1 };
 

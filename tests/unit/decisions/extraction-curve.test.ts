@@ -23,7 +23,7 @@ describe('extractionCurve(nChip, nOut, points)', () => {
 
   it('rejects bad indices and point counts', () => {
     expect(() => extractionCurve(1, 1)).toThrow(/nChip must be a number in \(1, 6\]/);
-    expect(() => extractionCurve(2.45, 0.5)).toThrow(/nOut must be a number in \[1, 3\]/);
+    expect(() => extractionCurve(2.45, 0.5)).toThrow(/nOut must be a number in \[1, 6\]/);
     expect(() => extractionCurve(2.45, 1, 1)).toThrow(/points must be an integer in \[2, 1000\]/);
   });
 });

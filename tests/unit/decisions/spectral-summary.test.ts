@@ -143,7 +143,7 @@ describe('spectralSummary(scenario)', () => {
     const s = demoScenario();
     s.emission = { kind: 'gaussian', peakNm: 450, fwhmNm: 30 };
     s.chip.medium = { kind: 'index', n: 2.5, k: 0 };
-    s.encapsulant.medium = { kind: 'index', n: 1.5, k: 0 };
+    s.encapsulant.medium = { kind: 'index', n: 1.5 };
     const r = spectralSummary(s);
     // escape cone ½∫T sin θ dθ: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5: η_F(2.5 → 1) = 0.03243 (computed); constant indices give the same value in every mode
     assertInDelta(r.bare.atPeak, 0.03243, 5e-6);

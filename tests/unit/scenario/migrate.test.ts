@@ -1,3 +1,4 @@
+import { resolveScenario, toTracePackage } from '../../../src/lib/scenario/resolve';
 import { describe, expect, it } from 'vitest';
 import { DEMO_SCENARIO, demoScenario } from '../../../src/lib/scenario/defaults';
 import { migrateScenario } from '../../../src/lib/scenario/migrate';
@@ -22,7 +23,7 @@ describe('migrateScenario', () => {
     if (!r.ok) return;
     expect(r.migratedFrom).toBe(0);
     const s = r.scenario;
-    expect(s.version).toBe(2);
+    expect(s.version).toBe(3);
     expect(s.emission).toEqual({ kind: 'single', wavelengthNm: 530 });
     expect(s.chip.medium).toEqual({ kind: 'index', n: 2.45, k: 0 });
     expect(s.chip.emitterZMm).toBe(0.1); // defaults to the top of the chip
@@ -44,15 +45,15 @@ describe('migrateScenario', () => {
     if (!r.ok) expect(r.message).toBe('Wavelength must be between 200 and 2500 nm.');
   });
 
-  it('passes the current version (2) through unchanged', () => {
+  it('passes the current version (3) through unchanged', () => {
     const s = demoScenario();
     const m = migrateScenario(s);
-    expect(m).toEqual({ ok: true, value: s, from: 2 });
+    expect(m).toEqual({ ok: true, value: s, from: 3 });
     const r = readScenario(s);
     expect(r.ok && r.migratedFrom).toBeNull();
   });
 
-  it('reads a version-1 scenario as version 2 with nothing else changed', () => {
+  it('reads a version-1 scenario as the current version with nothing else changed', () => {
     const v1 = { ...demoScenario(), version: 1 };
     const r = readScenario(v1);
     expect(r.ok).toBe(true);
@@ -62,9 +63,39 @@ describe('migrateScenario', () => {
   });
 
   it('refuses a newer version with a message that names both versions', () => {
-    const m = migrateScenario({ ...demoScenario(), version: 3 });
+    const m = migrateScenario({ ...demoScenario(), version: 4 });
     expect(m.ok).toBe(false);
-    if (!m.ok) expect(m.message).toMatch(/newer version of Outcouple \(scenario version 3\); this one reads versions up to 2/);
+    if (!m.ok) expect(m.message).toMatch(/newer version of Outcouple \(scenario version 4\); this one reads versions up to 3/);
+  });
+
+  it('reads a version-2 scenario with a typed encapsulant index n + ik as n alone: every number it computes is unchanged', () => {
+    // Version 2 carried k beside the absorption per mm; the tracer and the closed form used n and the
+    // absorption only, so the package the tracer gets is the same before and after.
+    const v2 = { ...demoScenario(), version: 2, encapsulant: { ...demoScenario().encapsulant, medium: { kind: 'index', n: 1.53, k: 0.002 } } };
+    const r = readScenario(v2);
+    expect(r.ok).toBe(true);
+    if (!r.ok) return;
+    expect(r.migratedFrom).toBe(2);
+    expect(r.scenario.encapsulant.medium).toEqual({ kind: 'index', n: 1.53 });
+    expect(r.scenario.encapsulant.absorptionPerMm).toBe(demoScenario().encapsulant.absorptionPerMm);
+    const before = { ...v2.encapsulant, n: 1.53 };
+    expect(toTracePackage(r.scenario).encapsulant).toEqual({ shape: before.shape, radiusMm: before.radiusMm, heightMm: before.heightMm, n: 1.53, absorptionPerMm: before.absorptionPerMm });
+    expect(toTracePackage(r.scenario).chip).toEqual(toTracePackage(demoScenario()).chip);
+  });
+
+  it('reads a version-2 scenario with a library encapsulant unchanged apart from its version', () => {
+    const r = readScenario({ ...demoScenario(), version: 2 });
+    expect(r.ok && r.scenario).toEqual(demoScenario());
+  });
+
+  it("the encapsulant's typed index takes n alone now; its k is derived from the absorption, k = αλ/4π (Born & Wolf §14.1)", () => {
+    const s = { ...demoScenario(), encapsulant: { ...demoScenario().encapsulant, medium: { kind: 'index', n: 1.5, k: 0 } } };
+    expect(readScenario(s).ok).toBe(false);
+    const typed = { ...demoScenario(), encapsulant: { ...demoScenario().encapsulant, medium: { kind: 'index' as const, n: 1.5 }, absorptionPerMm: 0.5 } };
+    const r = readScenario(typed);
+    expect(r.ok).toBe(true);
+    // α = 0.5 /mm at 450 nm: k = 0.5 · 450e-6 / 4π = 1.7905e-5 (computed)
+    if (r.ok) expect(resolveScenario(r.scenario).encapsulant.k).toBeCloseTo(1.7905e-5, 9);
   });
 
   it('refuses non-objects and odd versions', () => {

@@ -60,14 +60,15 @@ describe('parseScenario', () => {
   // (ρ, H) is inside when ρ²/R² + H²/h² < 1 (exact identity; the tracer's own check uses the same rule).
   it('rejects a chip whose top corners stick out of the dome, and accepts one just inside', () => {
     // 5 × 1 chip: ρ = hypot(2.5, 0.5) = 2.5495 mm > R = 2.5 mm.
-    expect(messages(withEdit((s) => (s.chip.widthMm = 5)))[0]).toMatch(/^Encapsulant radius must be more than 2\.55 mm/);
+    // ρ/√(1 − H²/h²) = 2.554 mm, shown rounded up so a radius at the shown bound fits
+    expect(messages(withEdit((s) => (s.chip.widthMm = 5)))[0]).toMatch(/^Encapsulant radius must be more than 2\.56 mm/);
     // 4 × 1 chip: ρ = 2.0616, H = 0.15, R = h = 2.5 → ρ²/R² + H²/h² = 0.6836 < 1: fits.
     expect(parseScenario(withEdit((s) => (s.chip.widthMm = 4))).ok).toBe(true);
   });
 
   it('a cylinder must be wider than the chip half-diagonal and taller than the chip', () => {
     const narrow = withEdit((s) => Object.assign(s.encapsulant, { shape: 'cylinder', radiusMm: 0.7, heightMm: 1 }));
-    expect(messages(narrow)[0]).toMatch(/half-diagonal \(0\.707 mm\)/); // √2/2 mm for a 1 × 1 mm chip
+    expect(messages(narrow)[0]).toMatch(/half-diagonal \(0\.708 mm\)/); // √2/2 = 0.7071 mm for a 1 × 1 mm chip, shown rounded up
     const low = withEdit((s) => Object.assign(s.encapsulant, { shape: 'cylinder', radiusMm: 2, heightMm: 0.1 }));
     expect(messages(low)[0]).toMatch(/^Encapsulant height must be more than the chip height \(0\.15 mm\)/);
   });
@@ -105,7 +106,7 @@ describe('parseScenario', () => {
     expect(parseScenario({ ...demoScenario(), colour: 'blue' }).ok).toBe(false);
     const noVersion: Record<string, unknown> = demoScenario();
     delete noVersion.version;
-    expect(messages(noVersion)).toContain('Scenario version must be 2.');
+    expect(messages(noVersion)).toContain('Scenario version must be 3.');
   });
 
   it('reports issue paths as dotted strings', () => {
