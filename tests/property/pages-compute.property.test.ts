@@ -19,7 +19,7 @@ import { domeClosedForm } from '../../src/lib/sweeps/dome-closed-form';
 import { traceSync } from '../../src/lib/trace/trace';
 import { summarize } from '../../src/lib/trace/summary';
 import { checkClaim, CLAIM_KINDS, rankingChart } from '../../src/lib/decisions';
-import { compareRanking } from '../../src/routes/compare/compare-ranking';
+import { scenarioRanking } from '../../src/lib/decisions/scenario-ranking';
 import { defaultForm, formToClaim } from '../../src/routes/claim/claim-form';
 import { assumptions, cautions, closedFormRows, scenarioRows } from '../../src/routes/report/report-facts';
 import { check } from './support';
@@ -109,7 +109,7 @@ function computeEveryPage(s: Scenario): Record<string, unknown> {
   if (s.encapsulant.shape !== 'none') out.dome = domeClosedForm(pkg);
   out.trace = summarize(traceSync(pkg, { rays: 300, seed: s.trace.seed, maxEvents: 200 }));
   // /compare and /report: the ranking and its chart, the report's facts
-  const ranking = compareRanking(s, r, [], 'design');
+  const ranking = scenarioRanking(s, r, [], 'design', true);
   out.ranking = ranking;
   out.rankingChart = rankingChart(ranking);
   out.report = [scenarioRows(s, r), closedFormRows(s, r), assumptions(s, r), cautions(s, r)];
