@@ -2,8 +2,9 @@
  * The tracer as the browser runs it: bundles the tracer with esbuild (one file, imports resolved to
  * plain bindings, as Vite does for the page's worker) and times it on one thread and on all cores,
  * side by side with the same bundle of an older commit's tracer, in one process, rounds alternating,
- * so the machine's load falls on both alike. Prints rays/s, events/s and young-generation garbage
- * collections per million rays (zero allocation in the loop gives none).
+ * so the machine's load falls on both alike. Prints rays/s, events/s, rays per CPU second (one thread:
+ * steadier than the wall clock on a shared machine) and young-generation garbage collections per
+ * million rays (nothing allocated per ray gives about one: the per-chunk scene compile).
  *
  *   node scripts/bench-bundled.mjs                          # 1,000,000 rays per run, 3 rounds, vs 39aaaae
  *   node scripts/bench-bundled.mjs --rays 500000 --rounds 5 --old <commit>|none
@@ -116,13 +117,15 @@ function startPool(bundleUrl, threads) {
 
 async function timeOne(run, rays) {
   const gc0 = scavenges;
+  const cpu0 = process.cpuUsage();
   const t0 = performance.now();
   const [launched, escaped, events] = await run();
   const seconds = (performance.now() - t0) / 1000;
+  const cpu = process.cpuUsage(cpu0);
   // let the observer see the collections of this run
   await new Promise((r) => setTimeout(r, 0));
   if (launched !== rays) throw new Error(`launched ${launched} of ${rays} rays`);
-  return { raysPerS: rays / seconds, eventsPerS: events / seconds, extraction: escaped / rays, gcPerMrays: ((scavenges - gc0) * 1e6) / rays };
+  return { raysPerS: rays / seconds, raysPerCpuS: (rays * 1e6) / (cpu.user + cpu.system), eventsPerS: events / seconds, extraction: escaped / rays, gcPerMrays: ((scavenges - gc0) * 1e6) / rays };
 }
 
 const median = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
@@ -145,7 +148,7 @@ async function main() {
     const threads = availableParallelism();
     console.log(`Bundled tracer (esbuild ${esbuild.version}): ${rays.toLocaleString('en')} rays per run, ${rounds} rounds, ${threads} threads`);
     console.log(`CPU: ${cpus()[0]?.model ?? 'unknown'}; Node ${process.version}; medians over rounds\n`);
-    console.log('package              tracer   threads  Mrays/s  Mevents/s  scavenges/Mray  extraction');
+    console.log('package              tracer   threads  Mrays/s  Mevents/s  Mrays/CPU-s  scavenges/Mray  extraction');
     const pools = builds.map((b) => startPool(b.url, threads));
     for (const { name, old: oldKnows, pkg } of packages(current.flipChipOnSapphire())) {
       const which = builds.map((b, i) => i).filter((i) => i === 0 || oldKnows);
@@ -166,14 +169,16 @@ async function main() {
         for (const [k, i] of which.entries()) {
           const rs = results[k];
           const gc = t === 1 ? median(rs.map((x) => x.gcPerMrays)).toFixed(1).padStart(14) : '             -';
+          const perCpu = t === 1 ? m(median(rs.map((x) => x.raysPerCpuS))).padStart(11) : '          -';
           console.log(
             `${name.padEnd(20)} ${builds[i].label.padEnd(8)} ${String(t).padStart(7)}  ${m(median(rs.map((x) => x.raysPerS)))}  ` +
-              `${m(median(rs.map((x) => x.eventsPerS))).padStart(9)}  ${gc}  ${rs[0].extraction.toFixed(4)}`
+              `${m(median(rs.map((x) => x.eventsPerS))).padStart(9)}  ${perCpu}  ${gc}  ${rs[0].extraction.toFixed(4)}`
           );
         }
         if (which.length > 1) {
-          const ratio = median(results[0].map((x) => x.raysPerS)) / median(results[1].map((x) => x.raysPerS));
-          console.log(`${''.padEnd(20)} current/${builds[1].label}: ${ratio.toFixed(2)}×`);
+          const ratio = (key) => (median(results[0].map((x) => x[key])) / median(results[1].map((x) => x[key]))).toFixed(2);
+          const cpuRatio = t === 1 ? `, per CPU second ${ratio('raysPerCpuS')}×` : '';
+          console.log(`${''.padEnd(20)} current/${builds[1].label}: wall clock ${ratio('raysPerS')}×${cpuRatio}`);
         }
         if (t === threads) break;
       }

@@ -472,6 +472,68 @@ function runRays(rays: number, maxEvents: number, histogram: Float64Array, onPro
   }
 }
 
+/** Receives a recorded ray's path (recordSceneRays); numbers in mm, a unit direction for escapes. */
+export interface PathSink {
+  /** A point of the path: the launch point (surface NONE) or a surface event's point on surface `surface`. */
+  point(x: number, y: number, z: number, surface: number): void;
+  /** The ray was absorbed in the current medium, at (x, y, z). */
+  absorbed(x: number, y: number, z: number): void;
+  /** The ray reached the bounding sphere going along (dx, dy, dz). */
+  escaped(dx: number, dy: number, dz: number): void;
+  /** The ray ended in ledger bin `bin` (an index into the scene's binNames). */
+  end(bin: number): void;
+}
+
+/**
+ * The ray loop of runRays with every step reported to `sink`, for drawing a few rays: the same steps
+ * in the same order, so chunk `chunkIndex` of (scene, seed) gives the same rays and fates as the
+ * tally of that chunk. A separate loop, so the traced run pays nothing for it: keep it in step with
+ * runRays.
+ */
+export function recordSceneRays(scene: CompiledScene, chunkIndex: number, rays: number, seed: number, maxEvents: number, sink: PathSink): void {
+  configure(scene);
+  seedChunk(seed, chunkIndex);
+  const histogram = new Float64Array(POLAR_BINS);
+  const before = new Float64Array(bins.length);
+  for (let i = 0; i < rays; i++) {
+    before.set(bins);
+    launch();
+    sink.point(ray[0], ray[1], ray[2], NONE);
+    let rayEvents = 0;
+    for (;;) {
+      const entry = nearestBoundary();
+      if (entry === NONE && medium === outside) {
+        escape(histogram);
+        sink.escaped(ray[3], ray[4], ray[5]);
+        break;
+      }
+      if (rayEvents === maxEvents) {
+        bins[BIN_EVENT_CAP]++;
+        break;
+      }
+      rayEvents++;
+      if (entry === NONE) {
+        bins[BIN_GEOMETRY_ERROR]++;
+        break;
+      }
+      // Where the optical depth left would run out, should this flight absorb the ray
+      const alpha = media[medium * MEDIUM_STRIDE + M_ABSORPTION];
+      const tAbsorbed = alpha > 0 ? ray[6] / alpha : Infinity;
+      if (!flight()) {
+        sink.absorbed(ray[0] + tAbsorbed * ray[3], ray[1] + tAbsorbed * ray[4], ray[2] + tAbsorbed * ray[5]);
+        break;
+      }
+      const ended = !surfaceEvent(entry);
+      // after the event: the position is snapped onto the surface
+      sink.point(ray[0], ray[1], ray[2], entry >> 1);
+      if (ended) break;
+    }
+    let bin = 0;
+    while (bin < bins.length && bins[bin] === before[bin]) bin++;
+    sink.end(bin);
+  }
+}
+
 /**
  * Traces `rays` rays of chunk `chunkIndex` through a compiled scene and adds their fates to `tally`
  * (the named bins to tally.parts, and each to its older fixed count). The generator is seeded from
