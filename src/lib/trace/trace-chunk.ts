@@ -28,11 +28,16 @@
  *   segment ending on a surface (or in absorption); the flight to the bounding sphere is not one.
  * - Dispatch is by `switch` on small integer kinds read from the packed records; no closures.
  *
- * Speed: nothing is allocated per ray or event, in both polarisation modes. The ray lives in the
+ * Speed: nothing is allocated per ray or event, in both polarisation modes, under tsx and in the
+ * esbuild bundle the page runs (node scripts/bench-bundled.mjs counts scavenges). The ray lives in the
  * module-scope Float64Array `ray`; the loop's functions pass only small integers (media, surfaces,
  * outcomes), never floating-point numbers, which the engine would box into heap objects whenever it
- * declines to inline a call. The flight and the surface event are separate functions so each is
- * optimised with its own inlining budget.
+ * declines to inline a call — and the bundle's loop runs out of inlining budget, so the core helpers
+ * it calls with arrays (fresnelRealAt, refractDirectionAt) hold their formulas themselves rather than
+ * forward numbers. The flight and the surface event are separate functions so each is optimised with
+ * its own inlining budget.
+ * Drawing: recordSceneRays runs the same steps in a loop of its own and reports each ray's path, so
+ * the traced run pays nothing for it (ray-paths.ts).
  * Sources: M. Pharr, W. Jakob, G. Humphreys, Physically Based Rendering, 3rd ed. (choosing
  * reflection with probability R, §14.1; exponential free paths, §15.2; media on both sides of a
  * surface, §11.3); G. Marsaglia, "Choosing a point from the surface of a sphere", Ann. Math. Stat. 43,
