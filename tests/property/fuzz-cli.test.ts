@@ -49,8 +49,8 @@ async function runMain(argv: string[]): Promise<Run> {
   }
 }
 
-/** JSON fields a command documents as nullable (null means "not applicable", not a failed number). */
-const NULLABLE = new Set(['criticalAngleDeg', 'radiusMm', 'noTir', 'warning', 'beamAngleDeg', 'onAxisVsLambertian', 'trappedIn', 'nEnc']);
+/** JSON fields a command documents as nullable (null means "not applicable", not a failed number; beamAngleNote is the reason text, null when the beam angle is defined). */
+const NULLABLE = new Set(['criticalAngleDeg', 'radiusMm', 'noTir', 'warning', 'beamAngleDeg', 'beamAngleNote', 'onAxisVsLambertian', 'trappedIn', 'nEnc']);
 
 function nullsOutsideAllowList(value: unknown, key = '', out: string[] = []): string[] {
   if (value === null && !NULLABLE.has(key)) out.push(key);
