@@ -28,7 +28,7 @@ export const DEMO_SCENARIO: Scenario = deepFreeze({
     absorptionPerMm: 0.001
   },
   outside: { kind: 'material', id: 'air' },
-  trace: { rays: 200_000, seed: 1, polarization: 'average' }
+  trace: { rays: 250_000, seed: 1, polarization: 'average' }
 });
 
 /** The second silicone of the demo's decision (n ≈ 1.53). */
