@@ -106,7 +106,7 @@ const wellFormedScenario: fc.Arbitrary<Scenario> = fc
     const h = g.H * g.heightFactor;
     const minR = g.shape === 'dome' ? rho / Math.sqrt(1 - (g.H * g.H) / (h * h)) : rho;
     return {
-      version: 3,
+      version: 4,
       name: g.name,
       emission: g.emission,
       chip: {
@@ -116,9 +116,12 @@ const wellFormedScenario: fc.Arbitrary<Scenario> = fc
         heightMm: g.H,
         emitterZMm: g.H * g.zFraction,
         absorptionPerMm: g.chipAbs,
-        emission: g.chipEmission
+        emission: g.chipEmission,
+        topTexture: 0
       },
       base: g.base,
+      baseFinish: 'specular',
+      body: { kind: 'flat' },
       encapsulant: {
         medium: g.encMedium,
         shape: g.shape,

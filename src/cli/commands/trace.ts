@@ -67,7 +67,7 @@ export async function run(argv: string[]): Promise<void> {
     if (s.counts.escaped === 0) throw new CliError('no ray escaped, so there is no far field to write');
     // The same file the dome page writes: zone-averaged near the poles, the smoothing stated in it
     const ies = traceIes({ binIntensities: s.farField.bins.map((b) => b.relativeIntensity), lumens, rays, seed,
-      issueDate: new Date().toISOString().slice(0, 10), name, opening: packageOpening(pkg.encapsulant, pkg.chip) });
+      issueDate: new Date().toISOString().slice(0, 10), name, opening: packageOpening(pkg.encapsulant, pkg.chip, pkg.body) });
     if (iesPath) {
       writeOutput(iesPath, ies.text, 'ies');
       notes.push(`IES LM-63 file written to ${iesPath} (${lumens} lm)`);
