@@ -56,6 +56,11 @@ function fmt(x: number): string {
   return String(Number(x.toPrecision(6)));
 }
 
+/** An index to four significant digits, as the panel shows it. */
+function index(n: number): string {
+  return String(Number(n.toPrecision(4)));
+}
+
 function mm(x: number): string {
   return `${fmt(x)} mm`;
 }
@@ -198,7 +203,7 @@ export function packageSection(scene: SceneDescription): PackageSection {
     colourOf.set(m.name, media.length);
     const thick = m.box ? `, ${mm(m.box.z1 - m.box.z0)} thick, ${mm(2 * m.box.a)} × ${mm(2 * m.box.b)}` : '';
     const loss = m.absorptionPerMm > 0 ? `, α = ${fmt(m.absorptionPerMm)} /mm` : '';
-    media.push({ name: m.name, colour: media.length, text: `${m.name}: n = ${fmt(m.n)}${loss}${thick}` });
+    media.push({ name: m.name, colour: media.length, text: `${m.name}: n = ${index(m.n)}${loss}${thick}` });
   }
   const regions: SectionRegion[] = [];
   // enclosing solids first (the encapsulant), then the chip's boxes on top
@@ -206,7 +211,7 @@ export function packageSection(scene: SceneDescription): PackageSection {
     const medium = scene.media.find((m) => m.name === s.behind);
     const d = enclosedRegion(s.shape);
     if (!medium || medium.role === 'outside' || d === null || medium.box) continue;
-    regions.push({ medium: medium.name, role: medium.role === 'chip' ? 'chip' : 'encapsulant', colour: colourOf.get(medium.name) ?? 0, d, title: `${medium.name}: n = ${fmt(medium.n)}` });
+    regions.push({ medium: medium.name, role: medium.role === 'chip' ? 'chip' : 'encapsulant', colour: colourOf.get(medium.name) ?? 0, d, title: `${medium.name}: n = ${index(medium.n)}` });
   }
   for (const m of scene.media) {
     if (!m.box) continue;
