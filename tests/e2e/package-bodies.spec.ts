@@ -48,7 +48,7 @@ test('a cup floor narrower than the chip is refused beside the field; the last g
 
 test('a textured top fraction outside 0–1 is refused with its range', async ({ page }) => {
   await page.goto('/dome');
-  await panel(page).locator('summary', { hasText: 'Structure, mirror and texture' }).click();
+  await panel(page).locator('summary', { hasText: 'Structure, emitter and surfaces' }).click();
   await panel(page).getByLabel('Textured top fraction').fill('1.5');
   await expect(panel(page).getByRole('alert')).toHaveText('Textured top fraction must be between 0 and 1.');
 });
