@@ -332,6 +332,9 @@ function crossChecks(s: ObjectScenario, ctx: Ctx): void {
   (s.chip.layers ?? []).forEach((layer, i) => {
     const path = ['chip', 'layers', i, 'medium'];
     const field = `Chip layer ${i + 1}`;
+    // a layer's name is its ledger bin: unique, and not a medium the package already names
+    const taken = ['outside', 'encapsulant'].includes(layer.name) || s.chip.layers!.findIndex((l) => l.name === layer.name) !== i;
+    if (taken) ctx.addIssue({ code: 'custom', path: ['chip', 'layers', i, 'name'], message: `${field} name must differ from the other layers' and from 'outside' and 'encapsulant'.` });
     if (layer.medium.kind === 'material') checkMaterial(ctx, [...path, 'id'], `${field} material`, layer.medium.id, false);
     if (layer.medium.kind === 'user') checkUserMaterial(ctx, [...path, 'material'], `${field} material`, layer.medium.material);
     checkIndexExists(ctx, path, `${field} material`, materialOf(layer.medium), wl);
