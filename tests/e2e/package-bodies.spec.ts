@@ -35,7 +35,7 @@ test('a cup floor narrower than the chip is refused beside the field; the last g
   await page.setViewportSize({ width: 1366, height: 900 });
   await page.goto('/dome');
   await choosePreset(page, /Mid-power cup/);
-  await panel(page).locator('summary', { hasText: /^Body/ }).click();
+  await panel(page).locator('summary', { hasText: /^Base and outside/ }).click();
   const floor = panel(page).getByLabel('Cup floor radius');
   await floor.fill('0.5');
   await expect(panel(page).getByRole('alert')).toHaveText(
