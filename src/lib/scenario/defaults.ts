@@ -17,9 +17,12 @@ export const DEMO_SCENARIO: Scenario = deepFreeze({
     heightMm: 0.15,
     emitterZMm: 0.14,
     absorptionPerMm: 0.5,
-    emission: 'plane'
+    emission: 'plane',
+    topTexture: 0
   },
   base: { kind: 'reflectance', reflectance: 0.92 },
+  baseFinish: 'specular',
+  body: { kind: 'flat' },
   encapsulant: {
     medium: { kind: 'material', id: 'silicone-methyl' },
     shape: 'dome',
