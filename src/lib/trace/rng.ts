@@ -67,14 +67,6 @@ export function nextFloat(): number {
 }
 
 /**
- * One uniform number in [0, 1) into out[0]: uniformsInto(out, 1) without the loop, small enough for
- * the engine to inline whole into the tracer's events (the same number, the same stream).
- */
-export function uniformInto(out: Float64Array): void {
-  out[0] = nextFloat();
-}
-
-/**
  * Draws `count` uniform numbers in [0, 1) into out[0..count−1], in sequence (the same numbers as
  * `count` calls of nextFloat). The ray loop draws this way: a number returned from a call the engine
  * does not inline is a heap object, a number written into an array is not.

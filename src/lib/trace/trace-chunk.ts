@@ -51,7 +51,7 @@ import { lambertianDirection } from './lambertian';
 import { DEFAULT_MAX_EVENTS, type TracePackage } from './package-spec';
 import { packageScene } from './package-scene';
 import { TRACK_TIR, TRACK_TRANSMITTED, launchPolarization, trackedInterface, trackedMirror } from './polarization';
-import { seedChunk, uniformInto, uniformsInto } from './rng';
+import { seedChunk, uniformsInto } from './rng';
 import * as layout from './scene-layout';
 import { intersectSurface, surfaceNormal } from './shape-intersect';
 import { POLAR_BINS, type Tally } from './tally';
@@ -168,7 +168,7 @@ function launch(): void {
   ray[1] = (u[1] - 0.5) * 2 * media[o + M_BOX_B];
   if (volumeEmission) {
     const z0 = media[o + M_BOX_Z0];
-    uniformInto(u);
+    uniformsInto(u, 1);
     ray[2] = z0 + u[0] * (media[o + M_BOX_Z1] - z0);
   } else {
     ray[2] = emitterZ[0];
@@ -189,12 +189,12 @@ function launch(): void {
   ray[4] = k * b;
   ray[5] = 1 - 2 * s;
   if (track) {
-    uniformInto(trackArgs);
+    uniformsInto(trackArgs, 1);
     launchPolarization(direction, trackArgs);
   }
   // Optical depth to absorption, τ ~ Exp(1) by inverse transform (1 − u ∈ (0, 1]); none if nothing absorbs
   if (absorbing) {
-    uniformInto(u);
+    uniformsInto(u, 1);
     ray[6] = -Math.log(1 - u[0]);
   } else ray[6] = Infinity;
   medium = emitterMedium;
@@ -260,7 +260,7 @@ function interfaceEvent(from: number, to: number): number {
     trackArgs[0] = cosI;
     trackArgs[1] = etaI;
     trackArgs[2] = etaT;
-    uniformInto(u);
+    uniformsInto(u, 1);
     trackArgs[3] = u[0];
     const code = trackedInterface(direction, normal, trackArgs);
     return code === TRACK_TRANSMITTED ? TRANSMITTED : code === TRACK_TIR ? TIR : REFLECTED;
@@ -274,7 +274,7 @@ function interfaceEvent(from: number, to: number): number {
     return TIR;
   }
   // Reflect with probability R = (Rs + Rp)/2, else refract
-  uniformInto(u);
+  uniformsInto(u, 1);
   if (u[0] < 0.5 * (fr[0] + fr[1])) {
     reflectDirection(direction, direction, normal);
     return REFLECTED;
@@ -303,7 +303,7 @@ function axisFaceEvent(k: number, from: number, to: number): number {
     return TIR;
   }
   // Reflect with probability R = (Rs + Rp)/2, else refract
-  uniformInto(u);
+  uniformsInto(u, 1);
   if (u[0] < 0.5 * (fr[0] + fr[1])) {
     ray[j] = -ray[j];
     return REFLECTED;
@@ -318,7 +318,7 @@ function axisFaceEvent(k: number, from: number, to: number): number {
 
 /** A new random linear polarisation for a ray whose direction was redrawn (a diffuse event depolarises). */
 function redrawPolarization(): void {
-  uniformInto(trackArgs);
+  uniformsInto(trackArgs, 1);
   launchPolarization(direction, trackArgs);
 }
 
@@ -348,7 +348,7 @@ function dielectricEvent(entry: number, axis: number): void {
 function textureEvent(o: number, into: number): void {
   const s = surfaces[o + S_B];
   if (!(s > 0)) return;
-  uniformInto(u);
+  uniformsInto(u, 1);
   if (!(u[0] < s)) return;
   scatterAxis[0] = into * normal[0];
   scatterAxis[1] = into * normal[1];
@@ -376,12 +376,12 @@ function mirrorEvent(o: number, axis: number): boolean {
     trackArgs[1] = metal ? mirror[1] : 0;
     trackArgs[2] = metal ? mirror[2] : amplitude;
     trackArgs[3] = metal ? mirror[3] : 0;
-    uniformInto(u);
+    uniformsInto(u, 1);
     trackArgs[4] = u[0];
     return trackedMirror(direction, normal, trackArgs);
   }
   const R = metal ? 0.5 * (mirror[4] + mirror[5]) : reflectance;
-  uniformInto(u);
+  uniformsInto(u, 1);
   if (!(u[0] < R)) return false;
   if (axis >= 0) ray[3 + axis] = -ray[3 + axis];
   else reflectDirection(direction, direction, normal);
@@ -390,7 +390,7 @@ function mirrorEvent(o: number, axis: number): boolean {
 
 /** Lambertian reflector at offset o: true if reflected into a cosine-weighted direction. */
 function diffuseEvent(o: number): boolean {
-  uniformInto(u);
+  uniformsInto(u, 1);
   if (!(u[0] < surfaces[o + S_B])) return false;
   uniformsInto(u, 2);
   lambertianDirection(direction, normal, u);
