@@ -49,8 +49,8 @@ async function runMain(argv: string[]): Promise<Run> {
   }
 }
 
-/** JSON fields a command documents as nullable (null means "not applicable", not a failed number; beamAngleNote is the reason text, null when the beam angle is defined). */
-const NULLABLE = new Set(['criticalAngleDeg', 'radiusMm', 'noTir', 'warning', 'beamAngleDeg', 'beamAngleNote', 'onAxisVsLambertian', 'trappedIn', 'nEnc']);
+// beamAngleNote: a sentence when the beam angle is not defined, else null; front/behind: a scene surface's media, null on the open side of a mirror or absorber; rOuter: null for the endless base plane (Infinity in JSON)
+const NULLABLE = new Set(['criticalAngleDeg', 'radiusMm', 'noTir', 'warning', 'beamAngleDeg', 'beamAngleNote', 'onAxisVsLambertian', 'trappedIn', 'nEnc', 'front', 'behind', 'rOuter']);
 
 function nullsOutsideAllowList(value: unknown, key = '', out: string[] = []): string[] {
   if (value === null && !NULLABLE.has(key)) out.push(key);
