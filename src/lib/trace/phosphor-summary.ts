@@ -55,6 +55,8 @@ export interface AngleColor {
 }
 
 export interface PhosphorSummary {
+  /** Fraction of launched photons absorbed by the phosphor and not re-emitted (the ledger's 'phosphor:' bins). */
+  phosphorHeat: number;
   escapedBlue: number;
   escapedConverted: number;
   photonEfficiency: number;
@@ -150,7 +152,10 @@ export function phosphorSummary(tally: Tally): PhosphorSummary | null {
       ? Math.max(...colorOverAngle.map((b) => Math.hypot(b.uPrime - whole.uPrime, b.vPrime - whole.vPrime)))
       : null;
   const escaped = s.escapedBlue + s.escapedConverted;
+  let heat = 0;
+  for (const bin in tally.parts) if (bin.startsWith('phosphor:')) heat += tally.parts[bin];
   return {
+    phosphorHeat: n ? heat / n : 0,
     escapedBlue: n ? s.escapedBlue / n : 0,
     escapedConverted: n ? s.escapedConverted / n : 0,
     photonEfficiency: n ? escaped / n : 0,

@@ -32,8 +32,8 @@ export interface FarFieldBin {
 export interface LedgerPart {
   /** The bin's full name, e.g. 'escaped:dome', 'medium:chip', 'surface:base', 'lost:event cap'. */
   bin: string;
-  /** What happened there: escaped through a surface, absorbed in a medium or at a surface, or lost. */
-  kind: 'escaped' | 'medium' | 'surface' | 'lost';
+  /** What happened there: escaped through a surface, absorbed in a medium or at a surface, turned to heat by a phosphor in a medium, or lost. */
+  kind: 'escaped' | 'medium' | 'surface' | 'lost' | 'phosphor';
   /** The surface, medium or reason named by the bin. */
   part: string;
   count: number;
@@ -158,7 +158,7 @@ function farField(histogram: Float64Array, escaped: number): TraceSummary['farFi
   return { beamAngleDeg: Math.min(180, 2 * halfMaxDeg), beamAngleNote: null, onAxisVsLambertian, bins };
 }
 
-const PART_KINDS: readonly LedgerPart['kind'][] = ['escaped', 'medium', 'surface', 'lost'];
+const PART_KINDS: readonly LedgerPart['kind'][] = ['escaped', 'medium', 'surface', 'lost', 'phosphor'];
 
 /** The named ledger of a tally, with fractions of `launched`. */
 function ledgerParts(parts: Record<string, number>, inv: number): LedgerPart[] {
