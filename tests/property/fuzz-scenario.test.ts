@@ -106,7 +106,7 @@ const wellFormedScenario: fc.Arbitrary<Scenario> = fc
     const h = g.H * g.heightFactor;
     const minR = g.shape === 'dome' ? rho / Math.sqrt(1 - (g.H * g.H) / (h * h)) : rho;
     return {
-      version: 3,
+      version: 4,
       name: g.name,
       emission: g.emission,
       chip: {

@@ -2,14 +2,13 @@ import { writeFileSync } from 'node:fs';
 import { summarize } from '../../lib/trace/summary';
 import { traceSync } from '../../lib/trace/trace';
 import { defaultThreads, traceParallel, MAX_THREADS } from '../../lib/trace/node/node-pool';
-import { LIMITS, toTracePackage } from '../../lib/scenario';
+import { LIMITS, phosphorSettingOf, toWhitePackage } from '../../lib/scenario';
 import { farFieldCsv, packageOpening, traceIes } from '../../lib/export';
 import { CliError } from '../cli-error';
 import { integerOption, numberOption, parseOptions, stringOption, truncate, type OptionSpec } from '../options';
 import { emit, percent, type Row } from '../output';
 import { SCENARIO_OPTION_HELP, SCENARIO_OPTIONS, scenarioFromOptions } from '../scenario-options';
 import { PHOSPHOR_OPTION_HELP, PHOSPHOR_OPTIONS, phosphorFromOptions } from '../phosphor-options';
-import { chipSpectrumRows, withPhosphor } from '../../lib/trace/white-light';
 import { phosphorSummary, type PhosphorSummary } from '../../lib/trace/phosphor-summary';
 
 export const summary = 'Monte Carlo ray trace of an LED package: extraction, loss ledger, far field; IES LM-63 export';
@@ -48,9 +47,9 @@ export async function run(argv: string[]): Promise<void> {
   const { values, positionals } = parseOptions(argv, options, 'trace');
   if (positionals.length) throw new CliError(`trace: unexpected argument '${truncate(positionals[0])}'`);
   const { scenario, resolved } = scenarioFromOptions(values);
-  const setting = phosphorFromOptions(values);
-  const clearPkg = toTracePackage(scenario, resolved);
-  const pkg = setting ? withPhosphor(clearPkg, setting, chipSpectrumRows(scenario.emission)) : clearPkg;
+  // Phosphor options win over the scenario's phosphor block
+  const setting = phosphorFromOptions(values) ?? phosphorSettingOf(scenario);
+  const pkg = toWhitePackage(scenario, resolved, setting);
   const { rays, seed } = scenario.trace;
   const name = scenario.name;
   const threads = integerOption(values, 'threads', 1, MAX_THREADS, defaultThreads());

@@ -1,6 +1,9 @@
 /**
  * Lifts older scenario layouts to the current version before validation.
  *
+ * Version 3 → 4: an optional `phosphor` block was added; a version-3 scenario has none (a clear
+ * encapsulant), so it is read as version 4 with its number raised.
+ *
  * Version 2 → 3: a typed encapsulant index loses its k. Every computation already took the
  * encapsulant's loss from its absorption per mm and ignored that k (the tracer and the closed form use
  * the real index only), so the migrated scenario computes exactly the same numbers.
@@ -95,7 +98,8 @@ export function migrateScenario(raw: unknown): MigrateResult {
   if (version === SCENARIO_VERSION) return { ok: true, value: renameRetired(raw), from: version };
   // Version 2 only added user-material media: a version-1 scenario is a version-2 one with its number raised.
   const v2 = version <= 1 ? { ...(version === 0 ? fromV0(raw) : raw), version: 2 } : raw;
-  return { ok: true, value: renameRetired(fromV2(v2)), from: version };
+  const v3 = version <= 2 ? fromV2(v2) : raw;
+  return { ok: true, value: renameRetired({ ...v3, version: 4 }), from: version };
 }
 
 /** v2 → v3: the typed encapsulant index drops its k (never used: the absorption per mm is the encapsulant's loss). */

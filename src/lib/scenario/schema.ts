@@ -12,7 +12,7 @@ import { designWavelengthNm } from './resolve';
 import { LIMITS, MATERIAL_ID_PATTERN, type NumberLimit, rangeMessage } from './limits';
 import { packageFitProblems } from './package-fit';
 
-export const SCENARIO_VERSION = 3;
+export const SCENARIO_VERSION = 4;
 
 /** A number field with a range message that names the field (zod rejects NaN and ±Infinity). */
 function num(field: string, limit: NumberLimit) {
@@ -130,6 +130,20 @@ const encapsulantSchema = z
   }, objectMessages('Encapsulant'))
   .strict();
 
+/** Traced phosphor regions (the scenario keeps only what the tracer can trace). */
+export const SCENARIO_PHOSPHOR_REGIONS = ['encapsulant'] as const;
+
+/** An optional phosphor (version 4): a library phosphor dispersed in a region at a load. */
+const phosphorSchema = z
+  .object({
+    id: z.string({ error: 'Phosphor must be a library phosphor id.' }).regex(MATERIAL_ID_PATTERN, { error: 'Phosphor must be a library phosphor id (lower-case letters, digits, dashes).' }),
+    region: z.enum(SCENARIO_PHOSPHOR_REGIONS, { error: `Phosphor region must be one of: ${SCENARIO_PHOSPHOR_REGIONS.join(', ')}.` }),
+    weightPercent: num('Phosphor load', LIMITS.phosphorWeightPercent),
+    diameterUm: num('Phosphor particle diameter', LIMITS.phosphorDiameterUm),
+    quantumYield: num('Quantum yield', LIMITS.quantumYield)
+  }, objectMessages('Phosphor'))
+  .strict();
+
 const traceSchema = z
   .object({
     rays: num('Rays', LIMITS.rays),
@@ -153,7 +167,8 @@ const objectSchema = z
     base: baseSchema,
     encapsulant: encapsulantSchema,
     outside: medium('Outside medium'),
-    trace: traceSchema
+    trace: traceSchema,
+    phosphor: phosphorSchema.optional()
   }, objectMessages('Scenario'))
   .strict();
 

@@ -23,7 +23,7 @@ describe('migrateScenario', () => {
     if (!r.ok) return;
     expect(r.migratedFrom).toBe(0);
     const s = r.scenario;
-    expect(s.version).toBe(3);
+    expect(s.version).toBe(4);
     expect(s.emission).toEqual({ kind: 'single', wavelengthNm: 530 });
     expect(s.chip.medium).toEqual({ kind: 'index', n: 2.45, k: 0 });
     expect(s.chip.emitterZMm).toBe(0.1); // defaults to the top of the chip
@@ -45,10 +45,10 @@ describe('migrateScenario', () => {
     if (!r.ok) expect(r.message).toBe('Wavelength must be between 200 and 2500 nm.');
   });
 
-  it('passes the current version (3) through unchanged', () => {
+  it('passes the current version (4) through unchanged', () => {
     const s = demoScenario();
     const m = migrateScenario(s);
-    expect(m).toEqual({ ok: true, value: s, from: 3 });
+    expect(m).toEqual({ ok: true, value: s, from: 4 });
     const r = readScenario(s);
     expect(r.ok && r.migratedFrom).toBeNull();
   });
@@ -63,9 +63,9 @@ describe('migrateScenario', () => {
   });
 
   it('refuses a newer version with a message that names both versions', () => {
-    const m = migrateScenario({ ...demoScenario(), version: 4 });
+    const m = migrateScenario({ ...demoScenario(), version: 5 });
     expect(m.ok).toBe(false);
-    if (!m.ok) expect(m.message).toMatch(/newer version of Outcouple \(scenario version 4\); this one reads versions up to 3/);
+    if (!m.ok) expect(m.message).toMatch(/newer version of Outcouple \(scenario version 5\); this one reads versions up to 4/);
   });
 
   it('reads a version-2 scenario with a typed encapsulant index n + ik as n alone: every number it computes is unchanged', () => {

@@ -106,7 +106,7 @@ describe('parseScenario', () => {
     expect(parseScenario({ ...demoScenario(), colour: 'blue' }).ok).toBe(false);
     const noVersion: Record<string, unknown> = demoScenario();
     delete noVersion.version;
-    expect(messages(noVersion)).toContain('Scenario version must be 3.');
+    expect(messages(noVersion)).toContain('Scenario version must be 4.');
   });
 
   it('reports issue paths as dotted strings', () => {

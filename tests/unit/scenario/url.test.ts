@@ -69,7 +69,7 @@ describe('scenario in the URL', () => {
 
   it('the parameter is versioned and URL-safe (no characters that need escaping)', () => {
     const p = encodeScenarioParam(DEMO_SCENARIO);
-    expect(p.startsWith('3.')).toBe(true);
+    expect(p.startsWith('4.')).toBe(true);
     expect(p).toMatch(/^[0-9]+\.[A-Za-z0-9_-]+$/);
     expect(encodeURIComponent(p)).toBe(p);
     expect(scenarioQuery(DEMO_SCENARIO)).toBe(`${SCENARIO_PARAM}=${p}`);
@@ -96,10 +96,10 @@ describe('scenario in the URL', () => {
   });
 
   it('a newer version gives the demo scenario and says so, whether the prefix or the body is newer', () => {
-    for (const param of ['4.eyJ9', `3.${b64url(JSON.stringify({ ...demoScenario(), version: 5 }))}`]) {
+    for (const param of ['5.eyJ9', `4.${b64url(JSON.stringify({ ...demoScenario(), version: 6 }))}`]) {
       const d = decodeScenarioParam(param);
       expect(d.scenario).toEqual(DEMO_SCENARIO);
-      expect(d.message).toMatch(/newer version of Outcouple \(scenario version [45]\)/);
+      expect(d.message).toMatch(/newer version of Outcouple \(scenario version [56]\)/);
       expect(d.message).toMatch(/Showing the demo scenario instead\.$/);
     }
   });
