@@ -50,7 +50,8 @@ async function runMain(argv: string[]): Promise<Run> {
 }
 
 /** JSON fields a command documents as nullable (null means "not applicable", not a failed number). */
-const NULLABLE = new Set(['criticalAngleDeg', 'radiusMm', 'noTir', 'warning', 'beamAngleDeg', 'onAxisVsLambertian', 'trappedIn', 'nEnc']);
+// beamAngleNote: a sentence when the beam angle is not defined, else null (a text, not a number)
+const NULLABLE = new Set(['criticalAngleDeg', 'radiusMm', 'noTir', 'warning', 'beamAngleDeg', 'beamAngleNote', 'onAxisVsLambertian', 'trappedIn', 'nEnc']);
 
 function nullsOutsideAllowList(value: unknown, key = '', out: string[] = []): string[] {
   if (value === null && !NULLABLE.has(key)) out.push(key);

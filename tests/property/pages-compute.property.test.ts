@@ -151,10 +151,9 @@ describe('every page computes every scenario the schema accepts', () => {
 
   it('regression: a library chip whose formula leaves the index range at the wavelength is refused by the schema, with the range named', () => {
     const s = demoScenario();
-    s.chip.medium = { kind: 'material', id: 'gap' };
-    s.emission = { kind: 'single', wavelengthNm: 355 }; // GaP's dispersion formula, below its data range, gives n ≈ 7.5 here
+    s.chip.medium = { kind: 'material', id: 'ag' }; // silver's tabulated n at 450 nm is about 0.04, below the dielectric range
     const parsed = parseScenario(s);
     expect(parsed.ok).toBe(false);
-    if (!parsed.ok) expect(parsed.issues.map((i) => i.message)).toContainEqual(expect.stringMatching(/^Chip index n must be between 1 and 6; .* gives 7\.\d+ at 355 nm\.$/));
+    if (!parsed.ok) expect(parsed.issues.map((i) => i.message)).toContainEqual(expect.stringMatching(/^Chip index n must be between 1 and 6; .* gives 0\.\d+ at 450 nm\.$/));
   });
 });

@@ -21,9 +21,9 @@ export interface EmissionRange {
 /** By library material id. Substrates, encapsulants and user materials have none. */
 export const CHIP_EMISSION: Readonly<Record<string, EmissionRange>> = {
   gan: { minNm: 365, maxNm: 530, typicalNm: 450 },
-  ingan: { minNm: 400, maxNm: 530, typicalNm: 450 },
-  algainp: { minNm: 560, maxNm: 650, typicalNm: 620 },
-  gap: { minNm: 555, maxNm: 700, typicalNm: 565 },
+  // The library's GaP also stands for red AlGaInP chips (their thick GaP window carries most of the light),
+  // so its range is the AlGaInP one: yellow-green to red.
+  gap: { minNm: 560, maxNm: 650, typicalNm: 620 },
   gaas: { minNm: 850, maxNm: 980, typicalNm: 940 }
 };
 

@@ -38,7 +38,7 @@ describe('readVariants', () => {
     const r = readVariants({ version: 1, variants: [{ name: 'A', scenario: v0 }] });
     expect(r.ok).toBe(true);
     if (r.ok) {
-      expect(r.value.variants[0].scenario.version).toBe(2);
+      expect(r.value.variants[0].scenario.version).toBe(3);
       expect(r.value.variants[0].scenario.encapsulant.medium).toEqual({ kind: 'material', id: 'silicone-phenyl' });
     }
   });
