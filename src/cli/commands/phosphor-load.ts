@@ -1,5 +1,6 @@
 import { LIMITS, toTracePackage } from '../../lib/scenario';
-import { chipSpectrumRows, loadForCct, LOAD_SEARCH } from '../../lib/trace/white-light';
+import { chipSpectrumRows, loadForCct, LOAD_SEARCH, traceWhite, withPhosphor } from '../../lib/trace/white-light';
+import { traceSync } from '../../lib/trace/trace';
 import { CliError } from '../cli-error';
 import { numberOption, parseOptions, truncate, type OptionSpec } from '../options';
 import { emit, percent, type Row } from '../output';
@@ -34,17 +35,22 @@ export async function run(argv: string[]): Promise<void> {
   if (!setting || setting.kind !== 'particles') throw new CliError('--phosphor ID is needed');
   const { rays, seed } = scenario.trace;
   const started = performance.now();
+  const clearPkg = toTracePackage(scenario, resolved);
+  const chip = chipSpectrumRows(scenario.emission);
+  const evaluate = async (weightPercent: number) => traceWhite(withPhosphor(clearPkg, { ...setting, weightPercent }, chip), rays, seed).summary;
+  const clear = traceSync(clearPkg, { rays, seed });
+  const clearEfficiency = clear.escaped / clear.launched;
   let search;
   try {
-    search = loadForCct(toTracePackage(scenario, resolved), setting, chipSpectrumRows(scenario.emission), target, rays, seed);
+    search = await loadForCct(evaluate, target);
   } catch (error) {
     if (error instanceof RangeError) throw new CliError(`--target-cct: ${error.message}`);
     throw error;
   }
   const seconds = (performance.now() - started) / 1000;
-  const w = search.result.summary;
+  const w = search.summary;
   const c = w.color!;
-  const photonCost = 1 - w.photonEfficiency / search.clearEfficiency;
+  const photonCost = 1 - w.photonEfficiency / clearEfficiency;
   const notes = [
     `${search.trials.length} trials of ${rays} rays each, seed ${seed} (common random numbers)`,
     ...(search.converged ? [] : [`not converged to ±${LOAD_SEARCH.toleranceK} K within ${LOAD_SEARCH.maxTrials} trials: the best trial is shown`]),
@@ -54,8 +60,8 @@ export async function run(argv: string[]): Promise<void> {
   const result = {
     targetCctK: target, phosphor: setting.phosphor.id, diameterUm: setting.diameterUm, weightPercent: search.weightPercent,
     color: { x: c.x, y: c.y, cctK: c.cctK, duv: c.duv, ra: c.ra, r9: c.r9, lerLmPerW: c.lerLmPerW, sigma: c.sigma },
-    photonEfficiency: w.photonEfficiency, energyEfficiency: w.energyEfficiency, clearEfficiency: search.clearEfficiency,
-    photonCost, energyCost: 1 - w.energyEfficiency / search.clearEfficiency, phosphorHeat: w.phosphorHeat,
+    photonEfficiency: w.photonEfficiency, energyEfficiency: w.energyEfficiency, clearEfficiency,
+    photonCost, energyCost: 1 - w.energyEfficiency / clearEfficiency, phosphorHeat: w.phosphorHeat,
     lumensPerWattOfChipLight: c.lerLmPerW * w.energyEfficiency, deltaUvPrime: w.deltaUvPrime,
     trials: search.trials, converged: search.converged, rays, seed, seconds, notes
   };
@@ -65,7 +71,7 @@ export async function run(argv: string[]): Promise<void> {
     ['CCT', `${c.cctK?.toFixed(0) ?? '—'} ± ${c.sigma.cctK?.toFixed(0) ?? '—'}`, 'K'], ['Duv', c.duv?.toFixed(4) ?? '—'],
     ['Ra, R9', `${c.ra?.toFixed(1) ?? '—'}, ${c.r9?.toFixed(1) ?? '—'}`],
     ['photons out / chip photons', percent(w.photonEfficiency, 2)], ['watts out / watts of chip light', percent(w.energyEfficiency, 2)],
-    ['the same package without phosphor', percent(search.clearEfficiency, 2)],
+    ['the same package without phosphor', percent(clearEfficiency, 2)],
     ['cost of the phosphor (photons)', percent(photonCost, 2)], ['cost of the phosphor (watts)', percent(result.energyCost, 2)],
     ['lumens per watt of chip light', result.lumensPerWattOfChipLight.toFixed(0), 'lm/W'],
     ['time', seconds.toFixed(1), 's']

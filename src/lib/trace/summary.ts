@@ -19,6 +19,7 @@
  * Sources: Lambertian I(θ) = I0 cos θ with Φ = π I0 and FWHM 120° (common practice); solid angle of a
  * polar zone 2π (cos θ1 − cos θ2) (common practice).
  */
+import { phosphorSummary, type PhosphorSummary } from './phosphor-summary';
 import { POLAR_BINS, type Tally } from './tally';
 
 export interface FarFieldBin {
@@ -43,6 +44,8 @@ export interface LedgerPart {
 
 export interface TraceSummary {
   rays: number;
+  /** White-light figures (phosphor-summary.ts); present only when the package holds a phosphor. */
+  white?: PhosphorSummary;
   /** Escaped / launched. */
   extraction: number;
   /** Binomial standard error of the extraction, √(p(1 − p)/N). */
@@ -176,7 +179,9 @@ export function summarize(tally: Tally): TraceSummary {
   const inv = N > 0 ? 1 / N : 0;
   const p = tally.escaped * inv;
   const trapped = tally.lost - tally.geometryErrors;
+  const white = phosphorSummary(tally);
   return {
+    ...(white ? { white } : {}),
     rays: N,
     extraction: p,
     // binomial standard error √(p(1 − p)/N)

@@ -102,11 +102,9 @@ export function traceWhite(pkg: TracePackage, rays: number, seed: number, maxEve
 }
 
 export interface LoadSearch {
-  /** The load found (weight percent) and its trace. */
+  /** The load found (weight percent) and the summary of its trace. */
   weightPercent: number;
-  result: WhiteTrace;
-  /** The package without phosphor at the same rays and seed: the cost is measured against it. */
-  clearEfficiency: number;
+  summary: PhosphorSummary;
   /** Every trial: load and CCT (null beyond the locus' range). */
   trials: { weightPercent: number; cctK: number | null }[];
   converged: boolean;
@@ -116,58 +114,48 @@ export interface LoadSearch {
 export const LOAD_SEARCH = { minPercent: 0.05, maxPercent: 60, toleranceK: 15, maxTrials: 14 } as const;
 
 /**
- * The weight percent of a particle phosphor that gives `targetK`, and what it costs.
+ * The weight percent of a particle phosphor that gives `targetK`.
+ * @param evaluate traces the package at a load (always with the same rays and seed: common random numbers)
  * @throws RangeError when the target is not reached inside LOAD_SEARCH's load range
  */
-export function loadForCct(
-  pkg: TracePackage,
-  setting: Extract<PhosphorSetting, { kind: 'particles' }>,
-  chipSpectrum: [number, number][],
-  targetK: number,
-  rays: number,
-  seed: number,
-  onTrial?: (weightPercent: number, cctK: number | null) => void
-): LoadSearch {
+export async function loadForCct(evaluate: (weightPercent: number) => Promise<PhosphorSummary>, targetK: number): Promise<LoadSearch> {
   const trials: LoadSearch['trials'] = [];
-  const results = new Map<number, WhiteTrace>();
-  // f(load) = CCT − target; a load whose light is still beyond the locus (too blue) counts as far above the target
-  const f = (w: number): number => {
-    const r = traceWhite(withPhosphor(pkg, { ...setting, weightPercent: w }, chipSpectrum), rays, seed);
+  const results = new Map<number, PhosphorSummary>();
+  // f(load) = CCT − target; a load whose light has no CCT counts as far above (too blue) or below (too yellow)
+  const f = async (w: number): Promise<number> => {
+    const r = await evaluate(w);
     results.set(w, r);
-    const cct = r.summary.color?.cctK ?? null;
+    const cct = r.color?.cctK ?? null;
     trials.push({ weightPercent: w, cctK: cct });
-    onTrial?.(w, cct);
     if (cct !== null) return cct - targetK;
-    const c = r.summary.color;
-    // No CCT: too blue (x small) counts as above the target, too yellow as below
-    return c && c.x < 0.3 ? 1e5 : -1e5;
+    return r.color && r.color.x < 0.3 ? 1e5 : -1e5;
   };
   const L = LOAD_SEARCH;
   let lo = 0.5;
-  let flo = f(lo);
+  let flo = await f(lo);
   while (flo < 0 && lo > L.minPercent) {
     lo = Math.max(L.minPercent, lo / 3);
-    flo = f(lo);
+    flo = await f(lo);
   }
   if (flo < 0) throw new RangeError(`target CCT ${targetK} K: even ${L.minPercent} wt% gives a lower CCT`);
   let hi = lo * 3;
-  let fhi = f(hi);
+  let fhi = await f(hi);
   while (fhi > 0 && hi < L.maxPercent) {
     lo = hi;
     flo = fhi;
     hi = Math.min(L.maxPercent, hi * 2);
-    fhi = f(hi);
+    fhi = await f(hi);
   }
   if (fhi > 0) throw new RangeError(`target CCT ${targetK} K: not reached by ${L.maxPercent} wt% (the CCT stays above it)`);
   let best = Math.abs(flo) < Math.abs(fhi) ? lo : hi;
   let fbest = Math.min(Math.abs(flo), Math.abs(fhi));
   let converged = fbest <= L.toleranceK;
   for (let i = 0; !converged && trials.length < L.maxTrials; i++) {
-    // Secant inside the bracket when both ends have a CCT; bisection otherwise or every third step
+    // Secant inside the bracket when both ends have a CCT; bisection otherwise and every third step
     const secant = Math.abs(flo) < 1e4 && Math.abs(fhi) < 1e4 && i % 3 !== 2;
     let w = secant ? lo + ((hi - lo) * flo) / (flo - fhi) : 0.5 * (lo + hi);
     if (!(w > lo && w < hi)) w = 0.5 * (lo + hi);
-    const fw = f(w);
+    const fw = await f(w);
     if (Math.abs(fw) < fbest) {
       best = w;
       fbest = Math.abs(fw);
@@ -181,6 +169,5 @@ export function loadForCct(
     }
     converged = fbest <= L.toleranceK || hi - lo < 1e-3;
   }
-  const clear = traceSync(pkg, { rays, seed });
-  return { weightPercent: best, result: results.get(best)!, clearEfficiency: clear.escaped / clear.launched, trials, converged };
+  return { weightPercent: best, summary: results.get(best)!, trials, converged };
 }
