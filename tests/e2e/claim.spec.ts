@@ -10,7 +10,7 @@ import { expect, test } from '@playwright/test';
 test.beforeEach(async ({ page }) => {
   await page.goto('/claim');
   await expect(page.getByRole('heading', { level: 1, name: 'Claim check' })).toBeVisible();
-  await expect(page).toHaveURL(/[?&]s=3\./);
+  await expect(page).toHaveURL(/[?&]s=4\./);
 });
 
 test('the default claim, 85 % extraction for the demo planar GaN chip in methyl silicone, is impossible', async ({ page }) => {

@@ -17,7 +17,7 @@ const rowOf = (page: Page, name: RegExp) => ranking(page).getByRole('row').filte
 test.beforeEach(async ({ page }) => {
   await page.goto('/compare');
   await expect(page.getByRole('heading', { level: 1, name: 'Compare encapsulants' })).toBeVisible();
-  await expect(page).toHaveURL(/[?&]s=3\./);
+  await expect(page).toHaveURL(/[?&]s=4\./);
 });
 
 const traced = (page: Page) => ranking(page).getByTestId('traced-extraction');

@@ -18,7 +18,7 @@ test.beforeEach(async ({ page }) => {
   await page.goto('/escape');
   await expect(page.getByRole('heading', { level: 1, name: 'Escape cone' })).toBeVisible();
   // The app has started once the scenario is in the link.
-  await expect(page).toHaveURL(/[?&]s=3\./);
+  await expect(page).toHaveURL(/[?&]s=4\./);
 });
 
 test('typed indices 2.5 → 1 give θc 23.58°, geometric 4.174 %, Fresnel-weighted 3.243 %', async ({ page }) => {

@@ -9,7 +9,7 @@ const panel = (page: import('@playwright/test').Page) => page.getByRole('complem
 
 test.beforeEach(async ({ page }) => {
   await page.goto('/');
-  await expect(page).toHaveURL(/[?&]s=3\./);
+  await expect(page).toHaveURL(/[?&]s=4\./);
 });
 
 test('home introduces the tool and the demo scenario, with the cautions in the footer', async ({ page }) => {
@@ -59,7 +59,7 @@ test('panel errors name the field and range, and keep the last valid value', asy
 test('the scenario is remembered across a reload and reaches a second tab', async ({ page, context }) => {
   const second = await context.newPage();
   await second.goto('/');
-  await expect(second).toHaveURL(/[?&]s=3\./);
+  await expect(second).toHaveURL(/[?&]s=4\./);
 
   await panel(page).getByLabel('Wavelength').fill('505');
   await expect(panel(page)).toContainText('505 nm');
@@ -86,7 +86,7 @@ test('without storage the app keeps working and says it cannot save', async ({ b
   await expect(page.getByText('Cannot save in this browser')).toBeVisible();
   await panel(page).getByLabel('Wavelength').fill('600');
   await expect(panel(page)).toContainText('600 nm');
-  await expect(page).toHaveURL(/[?&]s=3\./);
+  await expect(page).toHaveURL(/[?&]s=4\./);
   await context.close();
 });
 
@@ -118,7 +118,7 @@ test('no horizontal overflow at 1280×800 and 800×1000', async ({ page }) => {
     await page.setViewportSize(size);
     for (const path of ['/', '/escape']) {
       await page.goto(path);
-      await expect(page).toHaveURL(/[?&]s=3\./);
+      await expect(page).toHaveURL(/[?&]s=4\./);
       const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
       expect(overflow, `${path} at ${size.width}×${size.height}`).toBeLessThanOrEqual(0);
     }

@@ -39,7 +39,7 @@ async function addSilica(page: Page, name: string) {
 test.beforeEach(async ({ page }) => {
   await page.goto('/materials');
   await expect(page.getByRole('heading', { level: 1, name: 'Materials' })).toBeVisible();
-  await expect(page).toHaveURL(/[?&]s=3\./);
+  await expect(page).toHaveURL(/[?&]s=4\./);
 });
 
 test('the table lists the library with n and k at the scenario wavelength, model, range and source', async ({ page }) => {

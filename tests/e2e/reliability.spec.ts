@@ -30,7 +30,7 @@ async function watchCsp(context: BrowserContext, page: Page): Promise<string[]> 
 /** Opens a page and waits until the app has started (it writes the scenario into the link). */
 async function open(page: Page, path: string): Promise<void> {
   await page.goto(path);
-  await expect(page).toHaveURL(/[?&]s=3\./);
+  await expect(page).toHaveURL(/[?&]s=4\./);
 }
 
 function b64url(text: string): string {

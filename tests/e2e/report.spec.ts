@@ -11,7 +11,7 @@ import { parseIes } from '../../src/lib/export/ies';
 test.beforeEach(async ({ page }) => {
   await page.goto('/report');
   await expect(page.getByRole('heading', { level: 1, name: /^Report: / })).toBeVisible();
-  await expect(page).toHaveURL(/[?&]s=3\./);
+  await expect(page).toHaveURL(/[?&]s=4\./);
 });
 
 test('lists the scenario, closed-form results, assumptions and cautions', async ({ page }) => {

@@ -79,7 +79,7 @@ async function demoFromLink(browser: Browser): Promise<Record<string, unknown>> 
   const context = await browser.newContext();
   const page = await context.newPage();
   await page.goto('/');
-  await expect(page).toHaveURL(/[?&]s=3\./);
+  await expect(page).toHaveURL(/[?&]s=4\./);
   const param = new URL(page.url()).searchParams.get('s')!;
   await context.close();
   return JSON.parse(Buffer.from(param.slice(2), 'base64url').toString('utf8'));

@@ -28,7 +28,7 @@ export function whiteSpectrumChart(bins: SpectrumBin[], chipPeakNm: number): Cha
     title: 'Escaped spectrum',
     ariaLabel: `Escaped spectral power from 380 to 780 nm; chip light below ${split} nm, converted light above`,
     x: { title: 'Wavelength λ (nm)', min: 380, max: 780 },
-    y: { title: 'Power per nm (10⁻³ chip photon energies at 1 nm, per chip photon)', min: 0 },
+    y: { title: 'Power per nm (relative, per chip photon)', min: 0 },
     series: [
       { label: 'Chip light that escaped (blue leak)', points: pts(380, split), color: 0 },
       { label: 'Converted light', points: pts(split, 780), color: 3 }
