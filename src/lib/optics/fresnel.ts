@@ -15,18 +15,18 @@ import { requireInRange, requirePositive, requireNonNegative } from './guard';
 // Roundoff allowance on a cosine passed in by a ray tracer (a normalised dot product can reach 1 + 2ε).
 const COS_SLACK = 1e-9;
 
-function checkCos(cosThetaI: number): number {
-  if (!(cosThetaI >= -COS_SLACK && cosThetaI <= 1 + COS_SLACK)) {
-    throw new RangeError(`cosThetaI must be a number in [0, 1] (got ${cosThetaI})`);
-  }
-  return cosThetaI > 1 ? 1 : cosThetaI < 0 ? 0 : cosThetaI;
+// The hot functions test their inputs inline and call these only to throw: a call the engine does not
+// inline boxes every floating-point argument and result, and the ray tracer calls them per event.
+function throwCos(cosThetaI: number): never {
+  throw new RangeError(`cosThetaI must be a number in [0, 1] (got ${cosThetaI})`);
 }
 
-function checkEta(field: string, eta: number): void {
-  if (!(eta > 0 && eta < Infinity)) {
-    throw new RangeError(`${field} must be a finite number > 0 (got ${eta})`);
-  }
+function throwEta(field: string, eta: number): never {
+  throw new RangeError(`${field} must be a finite number > 0 (got ${eta})`);
 }
+
+/** fresnelReal's inputs, for its array form. */
+const realIn = new Float64Array(3);
 
 /**
  * Power reflectances of a lossless dielectric interface, s and p, plus the cosine of the refraction angle.
@@ -47,9 +47,25 @@ function checkEta(field: string, eta: number): void {
  * @see M. Born, E. Wolf, Principles of Optics, §1.5.2
  */
 export function fresnelReal(cosThetaI: number, etaI: number, etaT: number, out: Float64Array): boolean {
-  const cosI = checkCos(cosThetaI);
-  checkEta('etaI', etaI);
-  checkEta('etaT', etaT);
+  realIn[0] = cosThetaI;
+  realIn[1] = etaI;
+  realIn[2] = etaT;
+  return fresnelRealAt(realIn, out);
+}
+
+/**
+ * {@link fresnelReal} with its numbers in an array, inp = [cos θi, etaI, etaT], so that a call the
+ * engine does not inline boxes nothing (the tracer's bounce loop). Same outputs and result; the
+ * formulas live here, fresnelReal hands its arguments over.
+ */
+export function fresnelRealAt(inp: Float64Array, out: Float64Array): boolean {
+  let cosI = inp[0];
+  const etaI = inp[1];
+  const etaT = inp[2];
+  if (!(cosI >= -COS_SLACK && cosI <= 1 + COS_SLACK)) throwCos(cosI);
+  cosI = cosI > 1 ? 1 : cosI < 0 ? 0 : cosI;
+  if (!(etaI > 0 && etaI < Infinity)) throwEta('etaI', etaI);
+  if (!(etaT > 0 && etaT < Infinity)) throwEta('etaT', etaT);
 
   // Index matched: no interface
   if (etaI === etaT) {
@@ -81,14 +97,6 @@ export function fresnelReal(cosThetaI: number, etaI: number, etaT: number, out: 
   return true;
 }
 
-/**
- * {@link fresnelReal} with its numbers in an array, inp = [cos θi, etaI, etaT], so that a call the
- * engine does not inline boxes nothing (the tracer's bounce loop). Same outputs and result.
- */
-export function fresnelRealAt(inp: Float64Array, out: Float64Array): boolean {
-  return fresnelReal(inp[0], inp[1], inp[2], out);
-}
-
 /** Length of the buffer {@link fresnelAmplitudesAt} fills. */
 export const FRESNEL_AMPLITUDES_LENGTH = 8;
 
@@ -110,11 +118,13 @@ export const FRESNEL_AMPLITUDES_LENGTH = 8;
  * @see M. Born, E. Wolf, Principles of Optics, §1.5.2 (coefficients) and §1.5.4 (total reflection)
  */
 export function fresnelAmplitudesAt(inp: Float64Array, out: Float64Array): boolean {
-  const cosI = checkCos(inp[0]);
+  const cos0 = inp[0];
   const etaI = inp[1];
   const etaT = inp[2];
-  checkEta('etaI', etaI);
-  checkEta('etaT', etaT);
+  if (!(cos0 >= -COS_SLACK && cos0 <= 1 + COS_SLACK)) throwCos(cos0);
+  const cosI = cos0 > 1 ? 1 : cos0 < 0 ? 0 : cos0;
+  if (!(etaI > 0 && etaI < Infinity)) throwEta('etaI', etaI);
+  if (!(etaT > 0 && etaT < Infinity)) throwEta('etaT', etaT);
   out[1] = out[3] = out[5] = out[7] = 0;
   // Index matched: no interface (also the 0/0 limit at grazing incidence)
   if (etaI === etaT) {
@@ -330,12 +340,14 @@ export const MIRROR_AMPLITUDES_LENGTH = 6;
  * @see M. Born, E. Wolf, Principles of Optics, §1.5.2 and §14.2
  */
 export function mirrorAmplitudesAt(inp: Float64Array, out: Float64Array): Float64Array {
-  const cosI = checkCos(inp[0]);
+  const cos0 = inp[0];
   const etaI = inp[1];
   const nT = inp[2];
   const kT = inp[3];
-  checkEta('etaI', etaI);
-  checkEta('nT', nT);
+  if (!(cos0 >= -COS_SLACK && cos0 <= 1 + COS_SLACK)) throwCos(cos0);
+  const cosI = cos0 > 1 ? 1 : cos0 < 0 ? 0 : cos0;
+  if (!(etaI > 0 && etaI < Infinity)) throwEta('etaI', etaI);
+  if (!(nT > 0 && nT < Infinity)) throwEta('nT', nT);
   if (!(kT >= 0 && kT < Infinity)) {
     throw new RangeError(`kT must be a finite number ≥ 0 (got ${kT})`);
   }

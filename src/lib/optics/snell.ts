@@ -54,6 +54,20 @@ export function refractDirection(
   etaI: number,
   etaT: number
 ): boolean {
+  etasIn[1] = etaI;
+  etasIn[2] = etaT;
+  return refractDirectionAt(out, d, n, etasIn);
+}
+
+/** refractDirection's indices, for its array form. */
+const etasIn = new Float64Array(3);
+
+/**
+ * {@link refractDirection} with the two indices in an array, etas = [·, etaI, etaT] (the layout of
+ * fresnelRealAt's input), so that a call the engine does not inline boxes nothing (a call that is not
+ * inlined boxes every floating-point argument). Same result; the formula lives here.
+ */
+export function refractDirectionAt(out: Vec3, d: ReadonlyVec3, n: ReadonlyVec3, etas: Float64Array): boolean {
   const dx = d[0];
   const dy = d[1];
   const dz = d[2];
@@ -61,7 +75,7 @@ export function refractDirection(
   const ny = n[1];
   const nz = n[2];
   const cosI = -(dx * nx + dy * ny + dz * nz);
-  const eta = etaI / etaT;
+  const eta = etas[1] / etas[2];
   const k = 1 - eta * eta * (1 - cosI * cosI);
 
   // Handle total internal reflection
@@ -72,14 +86,6 @@ export function refractDirection(
   out[1] = eta * dy + c * ny;
   out[2] = eta * dz + c * nz;
   return true;
-}
-
-/**
- * {@link refractDirection} with the two indices in an array, etas = [·, etaI, etaT] (the layout of
- * fresnelRealAt's input), so that a call the engine does not inline boxes nothing. Same result.
- */
-export function refractDirectionAt(out: Vec3, d: ReadonlyVec3, n: ReadonlyVec3, etas: Float64Array): boolean {
-  return refractDirection(out, d, n, etas[1], etas[2]);
 }
 
 /**

@@ -14,3 +14,4 @@ export type * from './scene';
 export { packageScene } from './package-scene';
 export { compileScene, type CompiledScene, type LedgerGroup } from './compile-scene';
 export { traceSceneChunk } from './trace-chunk';
+export { samplePaths, sceneRadius, type RayPath, type SamplePathOptions } from './ray-paths';

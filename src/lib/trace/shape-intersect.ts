@@ -164,32 +164,40 @@ export function intersectSurface(s: Float64Array, o: number, side: number, ray: 
 /**
  * Puts the ray exactly on a planar surface it has reached (roundoff of the step), and writes the unit
  * normal facing the incident side (the side the ray comes from: cos θi = −d·n ≥ 0) into `normal`.
- * Returns the axis (0, 1, 2) of an axis-aligned plane, −1 for a curved surface.
+ * Returns the axis (0, 1, 2) of an axis-aligned plane, −1 for a curved surface. Kept small (the
+ * curved shapes apart) so the engine inlines it into the tracer's surface event.
  */
 export function surfaceNormal(s: Float64Array, o: number, side: number, ray: Float64Array, normal: Float64Array): number {
   const p = o + S_P;
+  const shape = s[o + S_SHAPE] | 0;
+  if (shape === SHAPE_RECT || shape === SHAPE_DISC) {
+    const k = shape === SHAPE_RECT ? s[p] | 0 : 2;
+    const at = shape === SHAPE_RECT ? p + 1 : p;
+    ray[k] = s[at];
+    normal[0] = 0;
+    normal[1] = 0;
+    normal[2] = 0;
+    // the shape's own normal σ·ê_k, turned to the incident side
+    normal[k] = side === SIDE_FRONT ? s[at + 1] : -s[at + 1];
+    return k;
+  }
+  curvedNormal(s, o, side, ray, normal);
+  return -1;
+}
+
+/** surfaceNormal of a curved shape (cylinder, frustum, spheroid cap). */
+function curvedNormal(s: Float64Array, o: number, side: number, ray: Float64Array, normal: Float64Array): void {
+  const p = o + S_P;
   // +1 when the normal on the incident side is the shape's own normal
   const toward = side === SIDE_FRONT ? 1 : -1;
-  normal[0] = 0;
-  normal[1] = 0;
-  normal[2] = 0;
   switch (s[o + S_SHAPE] | 0) {
-    case SHAPE_RECT: {
-      const k = s[p] | 0;
-      ray[k] = s[p + 1];
-      normal[k] = toward * s[p + 2];
-      return k;
-    }
-    case SHAPE_DISC:
-      ray[2] = s[p];
-      normal[2] = toward * s[p + 1];
-      return 2;
     case SHAPE_CYLINDER: {
       // outward (x, y, 0)/r
       const inv = toward / Math.sqrt(ray[0] * ray[0] + ray[1] * ray[1]);
       normal[0] = ray[0] * inv;
       normal[1] = ray[1] * inv;
-      return -1;
+      normal[2] = 0;
+      return;
     }
     case SHAPE_FRUSTUM: {
       // outward ∇f ∝ (x, y, −k ρ(z))
@@ -199,7 +207,7 @@ export function surfaceNormal(s: Float64Array, o: number, side: number, ray: Flo
       normal[0] = ray[0] * inv;
       normal[1] = ray[1] * inv;
       normal[2] = gz * inv;
-      return -1;
+      return;
     }
     default: {
       // Spheroid: outward ∇(x²/R² + y²/R² + (z − zc)²/h²) ∝ (x/R², y/R², (z − zc)/h²)
@@ -210,7 +218,6 @@ export function surfaceNormal(s: Float64Array, o: number, side: number, ray: Flo
       normal[0] = gx * inv;
       normal[1] = gy * inv;
       normal[2] = gz * inv;
-      return -1;
     }
   }
 }

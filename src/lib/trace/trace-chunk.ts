@@ -28,11 +28,16 @@
  *   segment ending on a surface (or in absorption); the flight to the bounding sphere is not one.
  * - Dispatch is by `switch` on small integer kinds read from the packed records; no closures.
  *
- * Speed: nothing is allocated per ray or event, in both polarisation modes. The ray lives in the
+ * Speed: nothing is allocated per ray or event, in both polarisation modes, under tsx and in the
+ * esbuild bundle the page runs (node scripts/bench-bundled.mjs counts scavenges). The ray lives in the
  * module-scope Float64Array `ray`; the loop's functions pass only small integers (media, surfaces,
  * outcomes), never floating-point numbers, which the engine would box into heap objects whenever it
- * declines to inline a call. The flight and the surface event are separate functions so each is
- * optimised with its own inlining budget.
+ * declines to inline a call — and the bundle's loop runs out of inlining budget, so the core helpers
+ * it calls with arrays (fresnelRealAt, refractDirectionAt) hold their formulas themselves rather than
+ * forward numbers. The flight and the surface event are separate functions so each is optimised with
+ * its own inlining budget.
+ * Drawing: recordSceneRays runs the same steps in a loop of its own and reports each ray's path, so
+ * the traced run pays nothing for it (ray-paths.ts).
  * Sources: M. Pharr, W. Jakob, G. Humphreys, Physically Based Rendering, 3rd ed. (choosing
  * reflection with probability R, §14.1; exponential free paths, §15.2; media on both sides of a
  * surface, §11.3); G. Marsaglia, "Choosing a point from the surface of a sphere", Ann. Math. Stat. 43,
@@ -144,7 +149,7 @@ const emitterZ = new Float64Array(1);
 let medium = 0;
 let lastSurface = NONE;
 
-function configure(scene: CompiledScene, tally: Tally): void {
+function configure(scene: CompiledScene, tally?: Tally): void {
   media = scene.media;
   surfaces = scene.surfaces;
   bounds = scene.bounds;
@@ -159,7 +164,7 @@ function configure(scene: CompiledScene, tally: Tally): void {
   absorbing = scene.absorbing;
   track = scene.track;
   emitterDirection = scene.emitterDirection;
-  spectral = scene.spectral !== null && configureSpectral(scene, (tally.spectral ??= createSpectralTally()));
+  spectral = scene.spectral !== null && configureSpectral(scene, tally ? (tally.spectral ??= createSpectralTally()) : createSpectralTally());
 }
 
 /** Starts a ray in the emitting medium: position, isotropic direction, polarisation, optical depth. */
@@ -496,6 +501,86 @@ function runRays(rays: number, maxEvents: number, histogram: Float64Array, onPro
       if (!surfaceEvent(entry)) break;
     }
     counters[COUNTER_EVENTS] += rayEvents;
+  }
+}
+
+/** Receives a recorded ray's path (recordSceneRays); numbers in mm, a unit direction for escapes. */
+export interface PathSink {
+  /** A point of the path: the launch point (surface NONE) or a surface event's point on surface `surface`. */
+  point(x: number, y: number, z: number, surface: number): void;
+  /** The ray was absorbed in the current medium, at (x, y, z). */
+  absorbed(x: number, y: number, z: number): void;
+  /** The ray reached the bounding sphere going along (dx, dy, dz). */
+  escaped(dx: number, dy: number, dz: number): void;
+  /** The ray ended in ledger bin `bin` (an index into the scene's binNames). */
+  end(bin: number): void;
+}
+
+/**
+ * The ray loop of runRays with every step reported to `sink`, for drawing a few rays: the same steps
+ * in the same order, so chunk `chunkIndex` of (scene, seed) gives the same rays and fates as the
+ * tally of that chunk. A separate loop, so the traced run pays nothing for it: keep it in step with
+ * runRays.
+ */
+export function recordSceneRays(scene: CompiledScene, chunkIndex: number, rays: number, seed: number, maxEvents: number, sink: PathSink): void {
+  configure(scene);
+  seedChunk(seed, chunkIndex);
+  const histogram = new Float64Array(POLAR_BINS);
+  const before = new Float64Array(bins.length);
+  for (let i = 0; i < rays; i++) {
+    before.set(bins);
+    launch();
+    if (spectral) launchWavelength(i);
+    sink.point(ray[0], ray[1], ray[2], NONE);
+    let rayEvents = 0;
+    for (;;) {
+      const entry = nearestBoundary();
+      if (entry === NONE && medium === outside) {
+        escape(histogram);
+        sink.escaped(ray[3], ray[4], ray[5]);
+        break;
+      }
+      if (rayEvents === maxEvents) {
+        bins[BIN_EVENT_CAP]++;
+        break;
+      }
+      rayEvents++;
+      if (entry === NONE) {
+        bins[BIN_GEOMETRY_ERROR]++;
+        break;
+      }
+      // A phosphor medium: a particle event is a point on no surface; an absorption ends the path there
+      if (spectral && isPhosphorMedium(media, medium * MEDIUM_STRIDE)) {
+        const outcome = phosphorFlight(ray, hit, media, medium * MEDIUM_STRIDE, bins);
+        if (outcome === ENDED) {
+          sink.absorbed(ray[0], ray[1], ray[2]);
+          break;
+        }
+        if (outcome === REDIRECTED) {
+          if (track) redrawPolarization();
+          sink.point(ray[0], ray[1], ray[2], NONE);
+          continue;
+        }
+        const endedHere = !surfaceEvent(entry);
+        sink.point(ray[0], ray[1], ray[2], entry >> 1);
+        if (endedHere) break;
+        continue;
+      }
+      // Where the optical depth left would run out, should this flight absorb the ray
+      const alpha = media[medium * MEDIUM_STRIDE + M_ABSORPTION];
+      const tAbsorbed = alpha > 0 ? ray[6] / alpha : Infinity;
+      if (!flight()) {
+        sink.absorbed(ray[0] + tAbsorbed * ray[3], ray[1] + tAbsorbed * ray[4], ray[2] + tAbsorbed * ray[5]);
+        break;
+      }
+      const ended = !surfaceEvent(entry);
+      // after the event: the position is snapped onto the surface
+      sink.point(ray[0], ray[1], ray[2], entry >> 1);
+      if (ended) break;
+    }
+    let bin = 0;
+    while (bin < bins.length && bins[bin] === before[bin]) bin++;
+    sink.end(bin);
   }
 }
 
