@@ -6,7 +6,7 @@ import { samplePaths, sceneRadius } from '../../../src/lib/trace/ray-paths';
 import type { Shape } from '../../../src/lib/trace/scene';
 import { createTally } from '../../../src/lib/trace/tally';
 import { traceChunk } from '../../../src/lib/trace/trace-chunk';
-import { cupPackage, domePackage } from './fixtures';
+import { cupPackage, domePackage } from '../../support/fixtures';
 
 const cup = cupPackage(flipChipOnSapphire());
 const packages: [string, TracePackage][] = [
