@@ -8,6 +8,7 @@ import { readFileSync, statSync } from 'node:fs';
 import { findMaterial } from '../lib/materials';
 import { demoScenario, readScenario, resolveScenario, type ResolvedScenario, type Scenario } from '../lib/scenario';
 import type { MediumSpec } from '../lib/scenario/schema';
+import { layerSpan } from '../lib/scenario/package-fit';
 import { parseNumber } from '../lib/components/parse-number';
 import { CliError } from './cli-error';
 import { truncate, type OptionSpec, type ParsedValues } from './options';
@@ -22,11 +23,22 @@ export const SCENARIO_OPTION_HELP = `Package (defaults: the app's demo scenario,
                                       (default: the scenario's, scaled with the chip height)
   --emission plane|volume             emitting plane, or the whole chip volume
   --chip-absorption A                 chip bulk absorption, 1/mm
-  --shape none|dome|cylinder          encapsulant shape
+  --chip-layers "T:N:A,T:N:A"         layered chip, bottom to top: thickness mm : index or material id :
+                                      absorption 1/mm (the chip height becomes their total)
+  --emit-layer L                      emitting layer, counted from 1 at the bottom (the emitter moves to
+                                      its middle unless --emitter-z is given)
+  --chip-mirror R|METAL|none          the chip's own bottom mirror: reflectance 0 to 1, or a metal
+  --top-texture S                     textured chip top: fraction 0 to 1 leaving in a Lambertian direction
+  --body flat|cup                     flat base, or a reflector cup (the chip stands on its floor)
+  --cup-floor-radius R --cup-top-radius R --cup-depth D   cup size, mm (defaults 1.3, 1.5, 0.8)
+  --wall specular|diffuse --wall-reflectance R            cup wall finish and reflectance (diffuse, 0.93)
+  --shape flat|dome|none|cylinder     encapsulant shape; in a cup: flat fills it to the rim, dome adds a
+                                      dome on the rim plane, none leaves it empty (--body cup alone: flat)
   --radius R --height H               encapsulant radius and height, mm (a dome with H = R is a hemisphere)
   --n-enc N | --enc-material M        encapsulant: typed index or library material
   --enc-absorption A                  encapsulant bulk absorption, 1/mm
-  --base-reflectance R | --base-material METAL   base: reflectance 0 to 1, or a metal from the library
+  --base-reflectance R | --base-material METAL   base (the cup floor): reflectance 0 to 1, or a metal
+  --base specular|diffuse             base finish (diffuse needs --base-reflectance)
   --n-out N | --out-material M        outside medium (the demo: air)
   --rays N --seed S                   trace settings
   --polarization average|track        Fresnel choice from (Rs+Rp)/2, or a tracked field
@@ -34,7 +46,12 @@ Ranges are the app's; a value out of range is refused with the range named.`;
 
 const NAMES = ['scenario', 'wavelength', 'n-chip', 'chip-material', 'chip', 'emitter-z', 'emission', 'chip-absorption', 'shape',
   'radius', 'height', 'n-enc', 'enc-material', 'enc-absorption', 'base-reflectance', 'base-material', 'n-out', 'out-material',
-  'rays', 'seed', 'polarization'] as const;
+  'rays', 'seed', 'polarization', 'body', 'cup-floor-radius', 'cup-top-radius', 'cup-depth', 'wall-reflectance', 'wall', 'base',
+  'top-texture', 'chip-layers', 'emit-layer', 'chip-mirror'] as const;
+
+/** The cup --body cup starts from when the scenario has none (the mid-power preset's). */
+const DEFAULT_CUP = { kind: 'cup', floorRadiusMm: 1.3, topRadiusMm: 1.5, depthMm: 0.8, wallFinish: 'diffuse', wallReflectance: 0.93 } as const;
+const CUP_OPTIONS = ['cup-floor-radius', 'cup-top-radius', 'cup-depth', 'wall-reflectance', 'wall'] as const;
 
 export const SCENARIO_OPTIONS: OptionSpec = Object.fromEntries(NAMES.map((name) => [name, { type: 'string' as const }]));
 
@@ -44,14 +61,25 @@ const OPTION_OF_PATH: [prefix: string, options: readonly string[]][] = [
   ['chip.medium', ['n-chip', 'chip-material', 'wavelength']],
   ['chip.widthMm', ['chip']],
   ['chip.lengthMm', ['chip']],
-  ['chip.heightMm', ['chip']],
-  ['chip.emitterZMm', ['emitter-z', 'chip']],
+  ['chip.heightMm', ['chip', 'chip-layers']],
+  ['chip.emitterZMm', ['emitter-z', 'emit-layer', 'chip-layers', 'chip']],
   ['chip.absorptionPerMm', ['chip-absorption']],
   ['chip.emission', ['emission']],
+  ['chip.topTexture', ['top-texture']],
+  ['chip.layers', ['chip-layers', 'wavelength']],
+  ['chip.emitLayer', ['emit-layer', 'chip-layers']],
+  ['chip.mirror', ['chip-mirror', 'wavelength']],
+  ['baseFinish', ['base', 'base-material']],
   ['base', ['base-reflectance', 'base-material', 'wavelength']],
+  ['body.floorRadiusMm', ['cup-floor-radius', 'chip', 'body']],
+  ['body.topRadiusMm', ['cup-top-radius', 'cup-floor-radius', 'body']],
+  ['body.depthMm', ['cup-depth', 'chip', 'chip-layers', 'body']],
+  ['body.wallFinish', ['wall']],
+  ['body.wallReflectance', ['wall-reflectance']],
+  ['body', ['body']],
   ['encapsulant.medium', ['n-enc', 'enc-material', 'wavelength', 'shape']],
-  ['encapsulant.shape', ['shape']],
-  ['encapsulant.radiusMm', ['radius', 'chip', 'height', 'shape']],
+  ['encapsulant.shape', ['shape', 'body']],
+  ['encapsulant.radiusMm', ['radius', 'cup-top-radius', 'chip', 'height', 'shape', 'body']],
   ['encapsulant.heightMm', ['height', 'chip', 'shape']],
   ['encapsulant.absorptionPerMm', ['enc-absorption']],
   ['outside', ['n-out', 'out-material', 'wavelength']],
@@ -120,6 +148,35 @@ function text(values: ParsedValues, name: string): string {
   return raw;
 }
 
+/**
+ * --chip-layers "0.005:2.45:0.5,0.15:sapphire-o:0": thickness mm : index or material id : absorption
+ * 1/mm, bottom to top. Each layer is named after its material (or "layer i" for a typed index); the
+ * chip height becomes the total, and the emitting layer stays the bottom one unless --emit-layer says.
+ */
+function applyLayers(s: Scenario, raw: string): void {
+  const pieces = raw.split(',').map((p) => p.trim());
+  const layers = pieces.map((piece, i) => {
+    const parts = piece.split(':').map((p) => p.trim());
+    if (parts.length !== 3 || parts.some((p) => p === '')) {
+      throw new CliError(`--chip-layers: layer ${i + 1} must be THICKNESS:INDEX-OR-MATERIAL:ABSORPTION, e.g. 0.15:sapphire-o:0 (got '${truncate(piece)}')`);
+    }
+    const [t, medium, a] = parts;
+    const typed = /^[-+.\d]/.test(medium);
+    const spec = typed ? { kind: 'index' as const, n: numberOf(medium) } : libraryMedium(medium);
+    const name = !typed && spec.kind === 'material' ? spec.id : `layer ${i + 1}`;
+    return { name, medium: spec as NonNullable<Scenario['chip']['layers']>[number]['medium'], thicknessMm: numberOf(t), absorptionPerMm: numberOf(a) };
+  });
+  // names are the ledger's bins: two layers of one material are told apart by their number
+  const repeated = new Set(layers.map((l) => l.name).filter((name, i, all) => all.indexOf(name) !== i));
+  layers.forEach((layer, i) => {
+    if (repeated.has(layer.name)) layer.name = `${layer.name} (layer ${i + 1})`;
+  });
+  s.chip.layers = layers;
+  if (s.chip.emitLayer === undefined || s.chip.emitLayer >= layers.length) s.chip.emitLayer = 0;
+  const total = layers.reduce((sum, l) => sum + l.thicknessMm, 0);
+  if (Number.isFinite(total)) s.chip.heightMm = Number(total.toPrecision(12));
+}
+
 /** The scenario object the options describe, before validation. */
 function applyOptions(base: Scenario, values: ParsedValues): Scenario {
   const s = structuredClone(base);
@@ -143,10 +200,57 @@ function applyOptions(base: Scenario, values: ParsedValues): Scenario {
       s.chip.heightMm = h;
     }
   }
+  if (has('chip-layers')) applyLayers(s, text(values, 'chip-layers'));
+  if (has('emit-layer')) {
+    const raw = text(values, 'emit-layer');
+    const count = s.chip.layers?.length ?? 1;
+    const n = numberOf(raw);
+    if (!Number.isInteger(n) || n < 1 || n > count) {
+      throw new CliError(`--emit-layer must be a whole layer number from 1 to ${count} (got '${truncate(raw)}')`);
+    }
+    s.chip.emitLayer = n - 1;
+  }
+  // a new layer stack or emitting layer puts the emitter in the middle of the emitting layer
+  if ((has('chip-layers') || has('emit-layer')) && s.chip.layers) {
+    const [z0, z1] = layerSpan(s.chip.layers, s.chip.emitLayer ?? 0);
+    s.chip.emitterZMm = Number(((z0 + z1) / 2).toPrecision(12));
+  }
   if (has('emitter-z')) s.chip.emitterZMm = numberOf(text(values, 'emitter-z'));
+  if (has('chip-mirror')) {
+    const raw = text(values, 'chip-mirror').trim();
+    if (raw.toLowerCase() === 'none') delete s.chip.mirror;
+    else if (/^[-+.\d]/.test(raw)) s.chip.mirror = { kind: 'reflectance', reflectance: numberOf(raw) };
+    else {
+      const material = findMaterial(raw);
+      s.chip.mirror = { kind: 'metal', id: material ? material.id : raw.toLowerCase().slice(0, 40) };
+    }
+  }
+  if (has('top-texture')) s.chip.topTexture = numberOf(text(values, 'top-texture'));
   if (has('emission')) s.chip.emission = text(values, 'emission') as Scenario['chip']['emission'];
   if (has('chip-absorption')) s.chip.absorptionPerMm = numberOf(text(values, 'chip-absorption'));
 
+  if (has('body')) {
+    const body = text(values, 'body').trim();
+    if (body === 'flat') s.body = { kind: 'flat' };
+    else if (body === 'cup') {
+      if (s.body.kind !== 'cup') {
+        s.body = { ...DEFAULT_CUP };
+        // a cup alone is filled flat to its rim
+        if (!has('shape')) s.encapsulant.shape = 'flat';
+      }
+    } else throw new CliError(`--body must be 'flat' or 'cup' (got '${truncate(body)}')`);
+  }
+  const cupOption = CUP_OPTIONS.find(has);
+  if (cupOption && s.body.kind !== 'cup') throw new CliError(`--${cupOption} needs --body cup (a reflector cup)`);
+  if (s.body.kind === 'cup') {
+    const cup = s.body;
+    if (has('cup-floor-radius')) cup.floorRadiusMm = numberOf(text(values, 'cup-floor-radius'));
+    if (has('cup-top-radius')) cup.topRadiusMm = numberOf(text(values, 'cup-top-radius'));
+    if (has('cup-depth')) cup.depthMm = numberOf(text(values, 'cup-depth'));
+    if (has('wall-reflectance')) cup.wallReflectance = numberOf(text(values, 'wall-reflectance'));
+    if (has('wall')) cup.wallFinish = text(values, 'wall').trim() as 'specular';
+  }
+  if (has('base')) s.baseFinish = text(values, 'base').trim() as Scenario['baseFinish'];
   if (has('shape')) s.encapsulant.shape = text(values, 'shape') as Scenario['encapsulant']['shape'];
   if (has('radius')) s.encapsulant.radiusMm = numberOf(text(values, 'radius'));
   if (has('height')) s.encapsulant.heightMm = numberOf(text(values, 'height'));

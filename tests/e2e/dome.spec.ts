@@ -44,7 +44,7 @@ test.describe('dome page', () => {
     await openDome(page);
     // No button is pressed: the trace starts by itself.
     await expect(page.getByTestId('trace-extraction')).toHaveText(/^\d+\.\d+ % ± \d+(\.\d+)? %$/, { timeout: 15_000 });
-    await expect(page.getByTestId('trace-rays')).toContainText('200,000');
+    await expect(page.getByTestId('trace-rays')).toContainText('250,000');
     await expect(page.getByTestId('trace-bare')).toHaveText(/^\d+\.\d+ % ± /);
     await expect(page.getByTestId('trace-gain')).toHaveText(/\d ± \d/);
     await expect(page.getByTestId('trace-speed')).toContainText('rays/s');
@@ -176,7 +176,7 @@ test.describe('dome page', () => {
     expect(doc.scenario.encapsulant.shape).toBe('dome');
     expect(doc.closedForm.etaDome).toBeGreaterThan(0);
     expect(doc.trace.stale).toBe(false);
-    expect(doc.trace.package.rays).toBe(200_000);
+    expect(doc.trace.package.rays).toBe(250_000);
     expect(doc.trace.package.extraction).toBeGreaterThan(doc.closedForm.etaDome);
   });
 });

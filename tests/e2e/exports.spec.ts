@@ -10,8 +10,7 @@ import { parseIes } from '../../src/lib/export/ies';
 async function openDomeWithTrace(page: Page): Promise<void> {
   await page.goto('/dome');
   await expect(page).toHaveURL(/[?&]s=/);
-  const run = page.getByRole('button', { name: 'Run trace' });
-  if (await run.isVisible()) await run.click();
+  // the trace runs by itself on open
   await expect(page.getByRole('heading', { name: 'Far field' })).toBeVisible({ timeout: 30_000 });
 }
 

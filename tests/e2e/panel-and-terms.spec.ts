@@ -23,12 +23,12 @@ test('at 390 px wide the home, dome and escape pages do not scroll sideways', as
   }
 });
 
-test('a red AlGaInP chip moves the wavelength from 450 to 620 nm with a notice, and "Keep 450 nm" undoes it', async ({ page }) => {
+test('a red chip (GaP, standing for AlGaInP on its GaP window) moves the wavelength from 450 to 620 nm with a notice, and "Keep 450 nm" undoes it', async ({ page }) => {
   await page.goto('/escape');
-  await panel(page).getByLabel('Chip material').selectOption({ label: 'AlGaInP (typical, red–yellow)' });
+  await panel(page).getByLabel('Chip material').selectOption({ label: 'GaP' });
   const moved = page.getByTestId('wavelength-moved');
   await expect(moved).toContainText('from 450 nm to 620 nm');
-  await expect(moved).toContainText('560–650 nm');
+  await expect(moved).toContainText('555–700 nm');
   await expect(panel(page).getByLabel('Wavelength')).toHaveValue('620');
   await moved.getByRole('button', { name: 'Keep 450 nm' }).click();
   await expect(panel(page).getByLabel('Wavelength')).toHaveValue('450');

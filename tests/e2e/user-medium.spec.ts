@@ -64,12 +64,12 @@ test('a user material is chosen as encapsulant, travels in a link and can be kep
 });
 
 test('a saved scenario that cannot be read is set aside, not overwritten, and the user is told', async ({ page }) => {
-  await seedStorageOnce(page, 'outcouple.scenario.v3', '{"version": 3, "name": 42}');
+  await seedStorageOnce(page, 'outcouple.scenario.v4', '{"version": 4, "name": 42}');
   await page.goto('/');
   const alert = panel(page).getByRole('alert').filter({ hasText: 'Your saved scenario could not be read' });
-  await expect(alert).toContainText('outcouple.scenario.v3.unreadable');
+  await expect(alert).toContainText('outcouple.scenario.v4.unreadable');
   await expect(alert).toContainText('Showing the demo scenario.');
-  expect(await page.evaluate(() => localStorage.getItem('outcouple.scenario.v3.unreadable'))).toBe('{"version": 3, "name": 42}');
+  expect(await page.evaluate(() => localStorage.getItem('outcouple.scenario.v4.unreadable'))).toBe('{"version": 4, "name": 42}');
   await alert.getByRole('button', { name: 'Dismiss' }).click();
   await expect(alert).toHaveCount(0);
 });
@@ -101,7 +101,7 @@ test('a scenario saved by the previous version is read, and the old entry is lef
   await page.goto('/');
   await expect(panel(page)).toContainText('Saved before the upgrade');
   expect(await page.evaluate(() => localStorage.getItem('outcouple.scenario.v1'))).toBe(v1);
-  await expect.poll(() => page.evaluate(() => JSON.parse(localStorage.getItem('outcouple.scenario.v3') ?? '{}').version)).toBe(3);
+  await expect.poll(() => page.evaluate(() => JSON.parse(localStorage.getItem('outcouple.scenario.v4') ?? '{}').version)).toBe(4);
 });
 
 test('a chip that emits elsewhere moves the wavelength with a notice; a wavelength with no index for it is refused beside the field', async ({ page }) => {

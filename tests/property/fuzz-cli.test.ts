@@ -49,8 +49,7 @@ async function runMain(argv: string[]): Promise<Run> {
   }
 }
 
-/** JSON fields a command documents as nullable (null means "not applicable", not a failed number). */
-// beamAngleNote: a sentence when the beam angle is not defined, else null (a text, not a number)
+/** JSON fields a command documents as nullable (null means "not applicable", not a failed number; beamAngleNote is the reason text, null when the beam angle is defined). */
 const NULLABLE = new Set(['criticalAngleDeg', 'radiusMm', 'noTir', 'warning', 'beamAngleDeg', 'beamAngleNote', 'onAxisVsLambertian', 'trappedIn', 'nEnc']);
 
 function nullsOutsideAllowList(value: unknown, key = '', out: string[] = []): string[] {

@@ -19,7 +19,7 @@ import { check, deeplyNested, hostileValue, prototypePolluted, real, RUNS } from
 
 /** Words a scenario message uses to name its field (the schema's own field labels). */
 const FIELD_WORDS =
-  /scenario|version|name|emission|wavelength|spectrum|peak|width|chip|emitter|absorption|base|metal|reflectance|encapsulant|radius|height|length|outside|index|extinction|rays|seed|trace|polari[sz]ation|material|medium|shape/i;
+  /scenario|version|name|emission|wavelength|spectrum|peak|width|chip|emitter|absorption|base|metal|reflectance|encapsulant|radius|height|length|outside|index|extinction|rays|seed|trace|polari[sz]ation|material|medium|shape|body|cup|finish|wall|layer|mirror|textur/i;
 
 function expectNamesAField(message: unknown): void {
   expect(typeof message, 'message is text').toBe('string');
@@ -116,9 +116,12 @@ const wellFormedScenario: fc.Arbitrary<Scenario> = fc
         heightMm: g.H,
         emitterZMm: g.H * g.zFraction,
         absorptionPerMm: g.chipAbs,
-        emission: g.chipEmission
+        emission: g.chipEmission,
+        topTexture: 0
       },
       base: g.base,
+      baseFinish: 'specular',
+      body: { kind: 'flat' },
       encapsulant: {
         medium: g.encMedium,
         shape: g.shape,

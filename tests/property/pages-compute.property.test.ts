@@ -79,7 +79,7 @@ const scenarioArb = fc
   .map((g): unknown => {
     const s: Scenario = demoScenario();
     s.emission = { kind: 'single', wavelengthNm: g.wavelengthNm };
-    s.chip = { medium: g.chipMedium, widthMm: g.w, lengthMm: g.l, heightMm: g.h, emitterZMm: g.h * g.emitterShare, absorptionPerMm: g.chipAbs, emission: g.emission };
+    s.chip = { medium: g.chipMedium, widthMm: g.w, lengthMm: g.l, heightMm: g.h, emitterZMm: g.h * g.emitterShare, absorptionPerMm: g.chipAbs, emission: g.emission, topTexture: 0 };
     s.base = g.base;
     const heightMm = Math.min(LIMITS.sizeMm.max, g.h * g.heightOver);
     const minR = minEncapsulantRadiusMm(s.chip, { shape: g.shape, radiusMm: 1, heightMm });
@@ -151,9 +151,12 @@ describe('every page computes every scenario the schema accepts', () => {
 
   it('regression: a library chip whose formula leaves the index range at the wavelength is refused by the schema, with the range named', () => {
     const s = demoScenario();
-    s.chip.medium = { kind: 'material', id: 'ag' }; // silver's tabulated n at 450 nm is about 0.04, below the dielectric range
+    s.chip.medium = { kind: 'material', id: 'gaas' };
+    // GaAs's formula (Skauli et al. 2003) has a pole at 874.6 nm: just past it, extrapolated below its
+    // 970 nm data range, it gives n ≈ 6.5 — inside GaAs's own emission band
+    s.emission = { kind: 'single', wavelengthNm: 875 };
     const parsed = parseScenario(s);
     expect(parsed.ok).toBe(false);
-    if (!parsed.ok) expect(parsed.issues.map((i) => i.message)).toContainEqual(expect.stringMatching(/^Chip index n must be between 1 and 6; .* gives 0\.\d+ at 450 nm\.$/));
+    if (!parsed.ok) expect(parsed.issues.map((i) => i.message)).toContainEqual(expect.stringMatching(/^Chip index n must be between 1 and 6; .* gives 6\.\d+ at 875 nm\.$/));
   });
 });

@@ -6,7 +6,8 @@
  *    only if it leaves through the opening, a disc of radius r1 at height Hc. From the source at
  *    height z_e that is a cone of half-angle θ = atan(r1/(Hc − z_e)), fraction (1 − cos θ)/2 of an
  *    isotropic source (solid angle of a cone over 4π, common practice). Tolerance 4σ (binomial),
- *    plus the chip's 1e-4 mm size (its effect on θ is under 1e-4 rad, a fraction change < 1e-4).
+ *    plus the chip's size: 1 µm (the smallest of the limits table) in a cup ten times the size quoted in the
+ *    test names, so its effect on θ is under 1e-4 rad, a fraction change < 1e-4.
  * 2. A point source (tiny index-matched chip) on a Lambertian base of reflectance R under a
  *    transparent dome (index equal to the outside): half the rays go up and escape; the other half
  *    meet the base and are sent up with probability R, then escape; escape = (1 + R)/2 exactly.
@@ -19,7 +20,9 @@ import { traceSync } from '../../src/lib/trace/trace';
 import { assertInDelta } from '../support/assert';
 
 const K = 4;
-const tiny = 1e-4;
+const tiny = 1e-3;
+/** Cup dimensions are given at 1/10 scale in the test names and traced ten times larger (see above). */
+const SCALE = 10;
 
 function pointChip(n: number): TracePackage['chip'] {
   return { widthMm: tiny, lengthMm: tiny, heightMm: tiny, n, absorptionPerMm: 0, emission: 'plane', emitterZMm: tiny / 2 };
@@ -36,12 +39,12 @@ describe('reference: reflector cup, absorbing wall and floor, point source on th
       encapsulant: { shape: 'none', radiusMm: 1, heightMm: 1, n: 1, absorptionPerMm: 0 },
       outsideN: 1,
       polarization: 'average',
-      body: { kind: 'cup', floorRadiusMm: r0, topRadiusMm: r1, depthMm: depth, wallFinish: finish, wallReflectance: 0, fill: 'none' }
+      body: { kind: 'cup', floorRadiusMm: r0 * SCALE, topRadiusMm: r1 * SCALE, depthMm: depth * SCALE, wallFinish: finish, wallReflectance: 0, fill: 'none' }
     };
     const N = 60_000;
     const s = summarize(traceSync(pkg, { rays: N, seed: 17 }));
-    const h = depth - tiny / 2;
-    const expected = (1 - h / Math.hypot(h, r1)) / 2;
+    const h = depth * SCALE - tiny / 2;
+    const expected = (1 - h / Math.hypot(h, r1 * SCALE)) / 2;
     assertInDelta(s.extraction, expected, K * Math.sqrt((expected * (1 - expected)) / N) + 1e-4);
     expect(s.geometryErrors).toBe(0);
     expect(s.parts.reduce((a, p) => a + p.count, 0)).toBe(N);

@@ -49,10 +49,10 @@ describe('reference: diffuse floor under a point source in a hemisphere, many bo
   const e = 1 - r0;
   const expected = (0.5 * (1 + R) * e) / (1 - r0 * R);
   const pkg: TracePackage = {
-    chip: { widthMm: 1e-4, lengthMm: 1e-4, heightMm: 1e-4, n: 1.5, absorptionPerMm: 0, emission: 'plane' },
+    chip: { widthMm: 1e-3, lengthMm: 1e-3, heightMm: 1e-3, n: 1.5, absorptionPerMm: 0, emission: 'plane' },
     base: { kind: 'reflectance', reflectance: R },
     baseFinish: 'diffuse',
-    encapsulant: { shape: 'dome', radiusMm: 1, heightMm: 1, n: 1.5, absorptionPerMm: 0 },
+    encapsulant: { shape: 'dome', radiusMm: 10, heightMm: 10, n: 1.5, absorptionPerMm: 0 },
     outsideN: 1,
     polarization: 'average'
   };
@@ -87,9 +87,9 @@ describe('reference: diffuse floor under a point source in a hemisphere, many bo
 describe('reference: textured top face with s = 1 on a very wide slab chip in air', () => {
   it.each([0.9, 0.5])('base reflectance %s: escape against the Lambertian per-angle balance (within 4σ + 0.001; a flat top gives 0.08 at 0.9)', (Rb) => {
     const n = 2.45;
-    const h = 1e-4;
+    const h = 1e-3;
     const pkg: TracePackage = {
-      chip: { widthMm: 10, lengthMm: 10, heightMm: h, n, absorptionPerMm: 0, emission: 'plane', emitterZMm: h / 2, topScatter: 1 },
+      chip: { widthMm: 100, lengthMm: 100, heightMm: h, n, absorptionPerMm: 0, emission: 'plane', emitterZMm: h / 2, topScatter: 1 },
       base: { kind: 'reflectance', reflectance: Rb },
       encapsulant: { shape: 'none', radiusMm: 1, heightMm: 1, n: 1, absorptionPerMm: 0 },
       outsideN: 1,

@@ -13,17 +13,18 @@ const K = 4;
 describe('reference: dome encapsulant (dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3)', () => {
   // dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3: η_dome = η_F(chip → encapsulant) · (1 − R_normal(encapsulant → air)) for a chip small
   // against the dome, taken from the core's domeEstimate. Geometry that makes the closed form exact up to
-  // small terms: a 1 × 1 mm chip 0.01 µm thick (W/H = 1e5: side escapes ≈ 5e-5, see
-  // trace-escape-cone.test.ts) on an absorbing base, under a dome R = 100 mm, so rays meet the dome within
-  // 0.3° of normal incidence. Second order: light the dome reflects comes back onto the chip and is
+  // small terms: a 100 × 100 mm chip 1 µm thick (W/H = 1e5: side escapes ≈ 5e-5, see
+  // trace-escape-cone.test.ts; 1 µm is the smallest size of the limits table) on an absorbing base, under
+  // a dome R = 1000 mm, so rays meet the dome within 4.1° of normal incidence, where the unpolarised
+  // reflectance 1.41 → 1 differs from its normal value by < 2e-6 (Fresnel equations, Born & Wolf §1.5.2). Second order: light the dome reflects comes back onto the chip and is
   // reflected up again with R ≈ 0.07 (1.41 → 2.45), adding ≈ η·0.03·0.07 ≈ 1.6e-4; with the side term,
   // the closed form may sit up to 2.5e-4 below the trace, added to the 4σ tolerance on that side.
   it('a tiny thin chip under a large dome extracts domeEstimate().etaDome (within 4σ, + 2.5e-4 above)', () => {
-    const expected = domeEstimate({ nChip: 2.45, nEnc: 1.41, nOut: 1, chipWidthMm: 1, chipLengthMm: 1, radiusMm: 100 }).etaDome;
+    const expected = domeEstimate({ nChip: 2.45, nEnc: 1.41, nOut: 1, chipWidthMm: 100, chipLengthMm: 100, radiusMm: 1000 }).etaDome;
     const pkg: TracePackage = {
-      chip: { widthMm: 1, lengthMm: 1, heightMm: 1e-5, n: 2.45, absorptionPerMm: 0, emission: 'plane' },
+      chip: { widthMm: 100, lengthMm: 100, heightMm: 1e-3, n: 2.45, absorptionPerMm: 0, emission: 'plane' },
       base: { kind: 'reflectance', reflectance: 0 },
-      encapsulant: { shape: 'dome', radiusMm: 100, heightMm: 100, n: 1.41, absorptionPerMm: 0 },
+      encapsulant: { shape: 'dome', radiusMm: 1000, heightMm: 1000, n: 1.41, absorptionPerMm: 0 },
       outsideN: 1,
       polarization: 'average'
     };
@@ -37,10 +38,10 @@ describe('reference: dome encapsulant (dome: Schubert, Light-Emitting Diodes, 2n
 
   // dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3: a source at distance r from the centre of a sphere of radius R meets the surface at
   // sin θ ≤ r/R (sine rule), so no ray is trapped while r ≤ R · nOut/nEnc (the inner aplanatic point,
-  // Born & Wolf, from memory). R = 1 mm, nEnc = 1.5: r_max = 0.667 mm. The source is a tall 1e-4 mm
-  // chip index-matched to the dome (invisible), emitting at height r on the axis; base absorbing.
+  // Born & Wolf, from memory). R = 1 mm, nEnc = 1.5: r_max = 0.667 mm. The source is a tall 1 µm wide
+  // chip (the limits table's smallest size) index-matched to the dome (invisible), emitting at height r on the axis; base absorbing.
   const displaced = (r: number): TracePackage => ({
-    chip: { widthMm: 1e-4, lengthMm: 1e-4, heightMm: 0.95, n: 1.5, absorptionPerMm: 0, emitterZMm: r, emission: 'plane' },
+    chip: { widthMm: 1e-3, lengthMm: 1e-3, heightMm: 0.95, n: 1.5, absorptionPerMm: 0, emitterZMm: r, emission: 'plane' },
     base: { kind: 'reflectance', reflectance: 0 },
     encapsulant: { shape: 'dome', radiusMm: 1, heightMm: 1, n: 1.5, absorptionPerMm: 0 },
     outsideN: 1,

@@ -1,9 +1,9 @@
 /**
  * Reference checks of the Monte Carlo tracer with a point source at the centre of a hemispherical dome
  * (dome: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5; sine rule, Born & Wolf §4.2.3). Monte Carlo tolerances: k = 4 binomial standard errors, σ = √(p(1 − p)/N) with p the
- * expected value. The "point source" is a 1e-4 mm chip index-matched to the dome (no interface, no
- * absorption) emitting at 5e-5 mm above the base: its rays meet a 1 mm dome within 5e-5 rad of normal
- * incidence, which changes R by under 1e-8 — far below σ.
+ * expected value. The "point source" is a 1 µm chip (the smallest size of the limits table)
+ * index-matched to the dome (no interface, no absorption) emitting 0.5 µm above the base: its rays meet
+ * a 10 mm dome within 5e-5 rad of normal incidence, which changes R by under 1e-8 — far below σ.
  */
 import { describe, expect, it } from 'vitest';
 import { reflectanceComplex } from '../../src/lib/optics/fresnel';
@@ -15,9 +15,9 @@ const K = 4;
 
 function pointInHemisphere(base: TraceBase, polarization: TracePackage['polarization'] = 'average'): TracePackage {
   return {
-    chip: { widthMm: 1e-4, lengthMm: 1e-4, heightMm: 1e-4, n: 1.5, absorptionPerMm: 0, emission: 'plane' },
+    chip: { widthMm: 1e-3, lengthMm: 1e-3, heightMm: 1e-3, n: 1.5, absorptionPerMm: 0, emission: 'plane' },
     base,
-    encapsulant: { shape: 'dome', radiusMm: 1, heightMm: 1, n: 1.5, absorptionPerMm: 0 },
+    encapsulant: { shape: 'dome', radiusMm: 10, heightMm: 10, n: 1.5, absorptionPerMm: 0 },
     outsideN: 1,
     polarization
   };

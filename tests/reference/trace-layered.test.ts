@@ -1,7 +1,8 @@
 /**
  * Reference check of a layered chip against the per-angle incoherent balance through both layers.
  *
- * A very wide, very thin two-layer slab (10 mm × 10 mm, 0.1 µm in all: its sides take a negligible
+ * A very wide, very thin two-layer slab (200 mm × 200 mm, 2 µm in all — the smallest layer the limits
+ * table allows, 1 µm, at the same width-to-thickness ratio as 10 mm over 0.1 µm: its sides take a negligible
  * share) in air, lossless layers n1 (emitting, bottom) and n2 (top), on an absorbing chip mirror (R = 0).
  * A ray leaving the emitter upward at θ1 meets the n1 → n2 interface: reflected, it goes down to the
  * absorber; transmitted at θ2 (n1 sin θ1 = n2 sin θ2) it meets the top: transmitted, it escapes;
@@ -55,11 +56,11 @@ describe('reference: two-layer slab on an absorber, against the per-angle incohe
     [2.45, 1.78],
     [1.78, 2.45]
   ])('n1 %s (emitting) under n2 %s: extraction within 4σ + 0.001', (n1, n2) => {
-    const h = 5e-5;
+    const h = 0.001;
     const pkg: TracePackage = {
       chip: {
-        widthMm: 10,
-        lengthMm: 10,
+        widthMm: 200,
+        lengthMm: 200,
         heightMm: 2 * h,
         n: n1,
         absorptionPerMm: 0,

@@ -50,12 +50,12 @@ export function cupPackage(chip: TracePackage['chip']): TracePackage {
 }
 
 /**
- * A point-like emitter: a 1 µm chip, 0.2 µm tall, index-matched to the dome (n 1.5 both), emitting
- * 0.1 µm above a base of the given reflectance. Its only interface is the dome surface.
+ * A point-like emitter: a 1 µm cube (the smallest size of the limits table), index-matched to the dome
+ * (n 1.5 both), emitting 0.5 µm above a base of the given reflectance. Its only interface is the dome surface.
  */
 export function pointSourcePackage(reflectance: number): TracePackage {
   return {
-    chip: { widthMm: 0.001, lengthMm: 0.001, heightMm: 0.0002, n: 1.5, absorptionPerMm: 0, emitterZMm: 0.0001, emission: 'plane' },
+    chip: { widthMm: 0.001, lengthMm: 0.001, heightMm: 0.001, n: 1.5, absorptionPerMm: 0, emitterZMm: 0.0005, emission: 'plane' },
     base: { kind: 'reflectance', reflectance },
     encapsulant: { shape: 'dome', radiusMm: 1, heightMm: 1, n: 1.5, absorptionPerMm: 0 },
     outsideN: 1,

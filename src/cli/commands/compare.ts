@@ -1,7 +1,7 @@
 import { readFileSync, statSync } from 'node:fs';
 import { scenarioRanking, traceRanking, TRACE_SEPARATION_K, type TracedRow } from '../../lib/decisions';
 import { tallyTracer, type Tracer } from '../../lib/runs';
-import { demoScenario, readScenario, resolveScenario, toTracePackage, type Scenario } from '../../lib/scenario';
+import { DEMO_SCENARIO, demoScenario, readScenario, resolveScenario, toTracePackage, type Scenario } from '../../lib/scenario';
 import { traceSync } from '../../lib/trace/trace';
 import { createNodeTracePool, defaultThreads, MAX_THREADS } from '../../lib/trace/node/node-pool';
 import { CliError } from '../cli-error';
@@ -12,7 +12,7 @@ export const summary = 'encapsulants ranked by the Monte Carlo trace of the whol
 export const help = `outcouple compare — every encapsulant put into the package in turn, ranked by the traced extraction
 
   --scenario FILE.json     a scenario saved by the app (default: the app's demo scenario)
-  --rays N                 rays per candidate, 1000 to 100000000 (default: the scenario's, 200000 for the demo)
+  --rays N                 rays per candidate, 1000 to 100000000 (default: the scenario's, ${DEMO_SCENARIO.trace.rays} for the demo)
   --seed S                 0 to 4294967295 (default: the scenario's); the current encapsulant uses it, the others
                            their own seed derived from it, so the runs are independent
   --optics                 also rank optic materials (lens plastics and glasses), which are not potting materials

@@ -4,7 +4,7 @@ import { parseOptions, type OptionSpec } from '../options';
 import { emit, percent, type Row } from '../output';
 import { SCENARIO_OPTION_HELP, SCENARIO_OPTIONS, scenarioFromOptions } from '../scenario-options';
 
-export const summary = 'closed-form dome encapsulant estimate: extraction, gain, no-TIR dome radius';
+export const summary = 'closed-form dome encapsulant estimate: extraction, gain, smallest dome radius with no total internal reflection';
 export const help = `outcouple dome — closed-form dome estimate (point-like chip face at the centre of a spherical dome)
 
 With no options it estimates the app's demo scenario. Only the chip footprint matters here, so
@@ -38,7 +38,7 @@ export function run(argv: string[]): void {
     ['bare chip, one face (Fresnel-weighted)', percent(estimate.etaBare)],
     ['under the dome, one face', percent(estimate.etaDome)],
     ['gain', estimate.gain.toFixed(3), '×'],
-    ['no-TIR dome radius (r·n_enc/n_out)', estimate.minRadiusNoTirMm.toFixed(3), 'mm'],
+    ['smallest radius with no total internal reflection', estimate.minRadiusNoTirMm.toFixed(3), 'mm (chip half-diagonal × encapsulant index ÷ outside index)'],
     ['dome radius', radiusMm, 'mm'],
     ['no total internal reflection at the dome', estimate.noTir ? 'yes' : 'no — dome too small']
   ];

@@ -1,5 +1,7 @@
 import { writeFileSync } from 'node:fs';
 import { summarize } from '../../lib/trace/summary';
+import { packageScene } from '../../lib/trace/package-scene';
+import { partShares } from '../../lib/trace/part-shares';
 import { traceSync } from '../../lib/trace/trace';
 import { defaultThreads, traceParallel, MAX_THREADS } from '../../lib/trace/node/node-pool';
 import { LIMITS, phosphorSettingOf, toWhitePackage } from '../../lib/scenario';
@@ -73,7 +75,7 @@ export async function run(argv: string[]): Promise<void> {
     if (s.counts.escaped === 0) throw new CliError('no ray escaped, so there is no far field to write');
     // The same file the dome page writes: zone-averaged near the poles, the smoothing stated in it
     const ies = traceIes({ binIntensities: s.farField.bins.map((b) => b.relativeIntensity), lumens, rays, seed,
-      issueDate: new Date().toISOString().slice(0, 10), name, opening: packageOpening(pkg.encapsulant, pkg.chip) });
+      issueDate: new Date().toISOString().slice(0, 10), name, opening: packageOpening(pkg.encapsulant, pkg.chip, pkg.body) });
     if (iesPath) {
       writeOutput(iesPath, ies.text, 'ies');
       notes.push(`IES LM-63 file written to ${iesPath} (${lumens} lm)`);
@@ -86,10 +88,13 @@ export async function run(argv: string[]): Promise<void> {
 
   const white = phosphorSummary(tally);
   if (white) notes.push(...whiteNotes(white));
+  const scene = packageScene(pkg);
+  const shares = partShares(s, scene);
   const result = {
-    scenario, package: pkg, rays, seed, threads,
-    extraction: s.extraction, stderr: s.stderr, ledger: s.ledger, counts: s.counts,
-    escapedBelowHorizon: s.escapedBelowHorizon, perSurface: s.perSurface, eventsPerRay: s.eventsPerRay,
+    scenario, package: pkg, scene, rays, seed, threads,
+    extraction: s.extraction, stderr: s.stderr, ledger: { ...s.ledger, ...shares }, counts: s.counts,
+    escapedBelowHorizon: s.escapedBelowHorizon, perSurface: s.perSurface, escapedBySurface: s.escapedBySurface, parts: s.parts,
+    eventsPerRay: s.eventsPerRay,
     geometryErrors: s.geometryErrors, raysPerSecond: rays / seconds, seconds,
     farField: { beamAngleDeg: s.farField.beamAngleDeg, beamAngleNote: s.farField.beamAngleNote, onAxisVsLambertian: s.farField.onAxisVsLambertian, bins: s.farField.bins },
     ...(white ? whiteJson(white, s.ledger) : {}),
@@ -98,8 +103,14 @@ export async function run(argv: string[]): Promise<void> {
   const rows: Row[] = [
     ['extraction', `${percent(s.extraction, 2)} ± ${percent(s.stderr, 2)}`, '(1 standard error)'],
     ['escaped', percent(s.ledger.escaped, 2)], ['  of which below the horizon', percent(s.escapedBelowHorizon, 2)],
-    ['absorbed in the chip', percent(s.ledger.chip, 2)], ['absorbed in the encapsulant', percent(s.ledger.encapsulant, 2)],
-    ['absorbed at the base', percent(s.ledger.base, 2)], ['lost (event cap)', percent(s.ledger.lost, 2)],
+    ['absorbed in the chip', percent(s.ledger.chip, 2)],
+    ...(shares.chipLayers.length > 1 ? shares.chipLayers.map((l): Row => [`  in layer ${l.name}`, percent(l.fraction, 2)]) : []),
+    ['absorbed in the encapsulant', percent(s.ledger.encapsulant, 2)],
+    ['absorbed at the base, wall and mirrors', percent(s.ledger.base, 2)],
+    ...(pkg.body?.kind === 'cup' ? [['  at the cup wall', percent(shares.wall, 2)] as Row] : []),
+    ...(pkg.chip.mirror ? [['  at the chip mirror', percent(shares.mirror, 2)] as Row] : []),
+    ['lost (event cap)', percent(s.ledger.lost, 2)],
+    ...Object.entries(s.escapedBySurface).map(([surface, f]): Row => [`escaped via ${surface}`, percent(f, 2)]),
     ['beam angle (full width at half maximum)', s.farField.beamAngleDeg === null ? `— ${s.farField.beamAngleNote ?? ''}` : s.farField.beamAngleDeg.toFixed(1), s.farField.beamAngleDeg === null ? '' : '°'],
     ['on-axis intensity vs Lambertian', s.farField.onAxisVsLambertian === null ? '—' : s.farField.onAxisVsLambertian.toFixed(3), '×'],
     ['events per ray', s.eventsPerRay.toFixed(2)], ['rays', rays], ['threads', threads],

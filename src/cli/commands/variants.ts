@@ -1,14 +1,13 @@
 import { readFileSync, statSync } from 'node:fs';
-import { summarize } from '../../lib/trace/summary';
+import { tallyTracer, type Tracer } from '../../lib/runs/tracer';
 import { traceSync } from '../../lib/trace/trace';
-import { createNodeTracePool, defaultThreads, MAX_THREADS, type NodeTracePool } from '../../lib/trace/node/node-pool';
-import type { TracePackage } from '../../lib/trace/package-spec';
+import { createNodeTracePool, defaultThreads, MAX_THREADS } from '../../lib/trace/node/node-pool';
 import { cellText } from '../../lib/variants/cell-text';
 import { comparisonRows } from '../../lib/variants/comparison-rows';
 import { readComparison } from '../../lib/variants/read-comparison';
 import { variantFigures } from '../../lib/variants/variant-figures';
-import { variantPlan } from '../../lib/variants/variant-plan';
-import { VARIANT_RAYS, variantTrace, type VariantResult } from '../../lib/variants/variant-result';
+import { traceVariant } from '../../lib/variants/trace-variant';
+import type { VariantResult } from '../../lib/variants/variant-result';
 import { CliError } from '../cli-error';
 import { integerOption, parseOptions, truncate, type OptionSpec } from '../options';
 
@@ -19,12 +18,12 @@ FILE.json is the page's "Save comparison (JSON)" file, or a plain variants docum
 ({ "version": 1, "variants": [{ "name": "A", "scenario": {…} }, …] }).
 
 A variant whose results the file carries is printed from them, as saved. A variant without results
-is traced here like the page traces it: its package and its bare chip on the same base, ${VARIANT_RAYS.toLocaleString('en-US')} rays
-each with the scenario's seed (the same numbers as the page for the same seed and ray count).
+is traced here like the page traces it: its package and its bare chip on the same base, with the
+rays and seed of the variant's scenario (the same numbers as the page for the same seed and ray count).
 
 Options
   --trace           trace every variant anew, ignoring the results in the file
-  --rays N          rays per trace when tracing, 1000 to 100000000 (default ${VARIANT_RAYS})
+  --rays N          rays per trace when tracing, 1000 to 100000000 (default: each scenario's own)
   --threads T       1 to ${MAX_THREADS} (default: all cores)
   --json            print one JSON object (variants, where their results came from, and the rows)
 
@@ -66,7 +65,7 @@ function table(header: string[], body: string[][]): string {
 export async function run(argv: string[]): Promise<void> {
   const { values, positionals } = parseOptions(argv, options, 'variants');
   if (positionals.length !== 1) throw new CliError("variants needs one comparison file: outcouple variants FILE.json (see 'outcouple variants --help')");
-  const rays = integerOption(values, 'rays', 1000, 1e8, VARIANT_RAYS);
+  const rays = values.rays === undefined ? undefined : integerOption(values, 'rays', 1000, 1e8);
   const threads = integerOption(values, 'threads', 1, MAX_THREADS, defaultThreads());
   const read = readComparison(readJsonFile(positionals[0]));
   if (!read.ok) throw new CliError(read.message);
@@ -75,12 +74,12 @@ export async function run(argv: string[]): Promise<void> {
   const retrace = values.trace === true;
   const results: VariantResult[] = [];
   const origin: ('file' | 'traced')[] = [];
-  let pool: NodeTracePool | null = null;
-  const traceOne = async (pkg: TracePackage, seed: number) => {
-    if (threads === 1) return summarize(traceSync(pkg, { rays, seed }));
-    pool ??= createNodeTracePool(threads);
-    return summarize(await pool.run(pkg, { rays, seed }));
-  };
+  // The pool starts only when a variant has to be traced
+  const needsTrace = retrace || read.results.some((r) => !r);
+  const pool = threads > 1 && needsTrace ? createNodeTracePool(threads) : null;
+  const tracer: Tracer = pool
+    ? tallyTracer((pkg, o, onProgress) => pool.run(pkg, o, onProgress), threads)
+    : tallyTracer(async (pkg, o) => traceSync(pkg, o), 1);
   try {
     for (let i = 0; i < read.variants.length; i++) {
       const given = read.results[i];
@@ -89,14 +88,11 @@ export async function run(argv: string[]): Promise<void> {
         origin.push('file');
         continue;
       }
-      const plan = variantPlan(read.variants[i].scenario, rays);
-      const pack = variantTrace(await traceOne(plan.pkg, plan.seed));
-      const bare = plan.bare ? variantTrace(await traceOne(plan.bare, plan.seed)) : null;
-      results.push({ seed: plan.seed, package: pack, bareChip: bare });
+      results.push(await traceVariant(tracer, read.variants[i].scenario, { rays }));
       origin.push('traced');
     }
   } finally {
-    await (pool as NodeTracePool | null)?.close();
+    await pool?.close();
   }
 
   const figures = read.variants.map((v, i) => variantFigures(v.name, v.scenario, results[i]));
@@ -112,7 +108,7 @@ export async function run(argv: string[]): Promise<void> {
   }
   const lines = ['Variants side by side', '---------------------'];
   read.variants.forEach((v, i) => {
-    const from = origin[i] === 'file' ? 'results from the file' : `traced now, ${rays.toLocaleString('en-US')} rays, seed ${results[i].seed}`;
+    const from = origin[i] === 'file' ? 'results from the file' : `traced now, ${results[i].package.rays.toLocaleString('en-US')} rays, seed ${results[i].seed}`;
     lines.push(`${v.name}: ${v.scenario.name} (${from})`);
   });
   lines.push('');

@@ -86,7 +86,7 @@ export function equalUnitsAspectRatio(canvasW: number, canvasH: number, plotW: n
 
 /**
  * The Chart.js configuration of a spec: 'line', 'scatter' and 'polar' become scatter charts with
- * per-series lines (numeric x axes); 'bar' a bar chart over `categories`. Animations are off so updates
+ * per-series lines (numeric x axes); 'bar' a bar chart over `categories` (sideways with `horizontal`). Animations are off so updates
  * while typing are immediate. Polar charts keep equal scales on both axes through their aspect ratio (estimated here, corrected
  * after layout with equalUnitsAspectRatio).
  */
@@ -127,7 +127,10 @@ export function chartConfig(spec: ChartSpec, palette: ChartPalette): ChartConfig
         animation: false,
         responsive: true,
         maintainAspectRatio: false,
-        scales: { x: axis(spec.x, 'category', palette), y: axis(spec.y, spec.y.log ? 'logarithmic' : 'linear', palette) },
+        // A sideways bar chart: Chart.js puts the categories on its y scale and the values on x
+        ...(spec.horizontal
+          ? { indexAxis: 'y', scales: { x: axis(spec.y, spec.y.log ? 'logarithmic' : 'linear', palette), y: axis(spec.x, 'category', palette) } }
+          : { scales: { x: axis(spec.x, 'category', palette), y: axis(spec.y, spec.y.log ? 'logarithmic' : 'linear', palette) } }),
         plugins: { legend, tooltip }
       }
     } as ChartConfiguration;

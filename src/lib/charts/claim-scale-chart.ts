@@ -75,9 +75,11 @@ export function claimScaleChart(kind: ClaimKind, value: number, result: ClaimRes
   const words = bars.map((bar) => `${bar.label} ${shown(bar.value, axis.unit)}`).join(', ');
   return {
     kind: 'bar',
+    // Sideways: the bound names stay level and readable at phone width (upright bars would tilt them)
+    horizontal: true,
     title: 'The claim against the physical bounds',
     ariaLabel: `Bar chart of the claim among the bounds of this package, in ascending order: ${words}. Verdict: ${result.verdict}.`,
-    x: { title: 'Bound (ascending)' },
+    x: { title: 'Bound (ascending, top to bottom)' },
     y: kind === 'extraction' ? { title: axis.title, min: 0, max: 100 } : { title: axis.title, min: bottom, max: top > 0 ? undefined : 1 },
     categories: bars.map((bar) => `${bar.label} ${shown(bar.value, axis.unit)}`),
     series: [

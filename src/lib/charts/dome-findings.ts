@@ -3,7 +3,7 @@
  * error, and the likely reasons; and what the "lost" share of the ledger means. Pure: numbers in,
  * sentences out, so the rules are tested in Node.
  */
-import { fmtIndex, fmtPlain, fmtPoints } from '../components/format';
+import { fmtIndex, fmtPlain, fmtPoints } from '../format/format';
 import type { TracePackage } from '../trace/package-spec';
 import type { LedgerFractions } from './dome-ledger-chart';
 

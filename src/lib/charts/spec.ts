@@ -69,6 +69,11 @@ export interface ChartSpec {
   series: SeriesSpec[];
   /** Bar charts: category names; a bar series' point x is the category's index. */
   categories?: string[];
+  /**
+   * Bar charts: bars run sideways, the categories down the left edge (x stays the category axis and y
+   * the value axis of the spec). Long category names then stay level and readable on a phone.
+   */
+  horizontal?: boolean;
   /** Texts drawn inside the plot area (e.g. "30°" at the end of a polar guide ray). */
   labels?: ChartLabel[];
   /** CSV to export instead of the default table built from the series (e.g. polar: angle and intensity). */

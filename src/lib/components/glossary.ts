@@ -78,6 +78,36 @@ export const GLOSSARY = {
     long: 'Lambertian',
     meaning: 'An emitter whose intensity falls as cos θ from its normal, like a flat diffuse surface; its beam angle is 120°.'
   },
+  escapeCone: {
+    short: 'escape cone',
+    long: 'escape cone',
+    meaning: 'The cone of directions, half-angle θc around a face’s normal, in which light from inside can leave through that face.'
+  },
+  singlePass: {
+    short: 'single pass',
+    long: 'single pass',
+    meaning: 'Counting only light that leaves the first time it meets a surface; light reflected back gets no second chance.'
+  },
+  recycling: {
+    short: 'recycling',
+    long: 'recycling',
+    meaning: 'Light reflected back into the chip or off the base that changes direction and gets another chance to escape.'
+  },
+  sPolarised: {
+    short: 's-polarised',
+    long: 's-polarised',
+    meaning: 'Light whose electric field is perpendicular to the plane of incidence (s for the German senkrecht, perpendicular).'
+  },
+  pPolarised: {
+    short: 'p-polarised',
+    long: 'p-polarised',
+    meaning: 'Light whose electric field lies in the plane of incidence (p for parallel); it passes a surface unreflected at Brewster’s angle.'
+  },
+  quarterWave: {
+    short: 'quarter-wave layer',
+    long: 'quarter-wave layer',
+    meaning: 'A layer a quarter of the wavelength thick, measured inside it; with the index √(n₁·n₂) its two reflections cancel at normal incidence.'
+  },
   ies: {
     short: 'IES',
     long: 'IES LM-63 photometric file',

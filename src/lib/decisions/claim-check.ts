@@ -41,6 +41,7 @@ import { BEST_REPORTED_EXTRACTION, REPORTED_FIGURES, type ReportedFigure } from 
 import { claimBounds, type ClaimBoundSet } from './claim-bounds';
 import { CLAIM_DEFAULTS, claimCoreLimit } from './claim-input';
 import { LIMITS } from '../scenario/limits';
+import { fmtPercentPlain, fmtPlain } from '../format/format';
 
 export type ClaimKind = 'extraction' | 'gain' | 'coating';
 export type ChipStructure = 'planar' | 'textured' | 'thin-film' | 'unknown';
@@ -98,7 +99,7 @@ export interface ClaimResult {
 const SLACK = 1e-9;
 
 function pct(x: number): string {
-  return `${Number((x * 100).toPrecision(3))} %`;
+  return fmtPercentPlain(x, 3);
 }
 
 function signed(x: number): string {
@@ -106,11 +107,11 @@ function signed(x: number): string {
 }
 
 function times(x: number): string {
-  return `${Number(x.toPrecision(3))}×`;
+  return `${fmtPlain(x, 3)}×`;
 }
 
 function idx(n: number): string {
-  return String(Number(n.toPrecision(4)));
+  return fmtPlain(n, 4);
 }
 
 function requireIn(field: string, value: unknown, min: number, max: number, openMin = false): number {

@@ -71,14 +71,21 @@ export function iesOpeningMetres(opening: IesOpening): [number, number, number] 
 }
 
 /**
- * The opening of a package: the dome or cylinder around the chip (see the header for the dome), or the
- * bare chip as a box with luminous sides.
+ * The opening of a package: the dome or cylinder around the chip (see the header for the dome), the
+ * bare chip as a box with luminous sides, or a cup's rim (a dome on it adds its height): a luminous
+ * disc of the rim's diameter (a cylinder of the dome's height with a dome).
  */
 export function packageOpening(
-  encapsulant: { shape: 'none' | 'dome' | 'cylinder'; radiusMm: number; heightMm: number },
-  chip: { widthMm: number; lengthMm: number; heightMm: number }
+  encapsulant: { shape: 'none' | 'dome' | 'cylinder' | 'flat'; radiusMm: number; heightMm: number },
+  chip: { widthMm: number; lengthMm: number; heightMm: number },
+  body?: { kind: 'flat' } | { kind: 'cup'; topRadiusMm: number; fill?: 'flat' | 'dome' | 'none' }
 ): IesOpening {
-  if (encapsulant.shape === 'none') {
+  if (body?.kind === 'cup') {
+    const d = 2 * body.topRadiusMm;
+    const domed = body.fill === 'dome' || (body.fill === undefined && encapsulant.shape === 'dome');
+    return domed ? { shape: 'cylinder', widthMm: d, lengthMm: d, heightMm: encapsulant.heightMm } : { shape: 'disc', widthMm: d, lengthMm: d, heightMm: 0 };
+  }
+  if (encapsulant.shape === 'none' || encapsulant.shape === 'flat') {
     return { shape: 'box', widthMm: chip.widthMm, lengthMm: chip.lengthMm, heightMm: chip.heightMm };
   }
   const d = 2 * encapsulant.radiusMm;

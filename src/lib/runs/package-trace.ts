@@ -3,6 +3,7 @@
  * same base (the companion that turns it into a gain) and that gain ± σ — two traces run one after the
  * other through any Tracer. Pure.
  */
+import { bareChip } from '../sweeps/vary-package';
 import type { TracePackage } from '../trace/package-spec';
 import { throwIfAborted } from './abort';
 import type { TraceOutcome, Tracer } from './tracer';
@@ -31,11 +32,6 @@ export interface PackageTrace {
   gain: { gain: number; stderr: number } | null;
 }
 
-/** The same package with no encapsulant: the bare chip on the same base, in the outside medium. */
-function bareChipOf(pkg: TracePackage): TracePackage {
-  return { ...pkg, encapsulant: { ...pkg.encapsulant, shape: 'none' } };
-}
-
 /**
  * Traces `pkg` with `rays` rays, then (when it has an encapsulant) the bare chip with bareRays(rays),
  * both from `seed`. Progress runs over both traces in proportion to their rays.
@@ -52,7 +48,7 @@ export async function tracePackage(
   const dome = await tracer(pkg, { rays, seed, signal, onProgress: (f) => onProgress?.((f * rays) / total) });
   throwIfAborted(signal);
   const bare = hasEncapsulant
-    ? await tracer(bareChipOf(pkg), { rays: nBare, seed, signal, onProgress: (f) => onProgress?.((rays + f * nBare) / total) })
+    ? await tracer(bareChip(pkg), { rays: nBare, seed, signal, onProgress: (f) => onProgress?.((rays + f * nBare) / total) })
     : null;
   throwIfAborted(signal);
   const gain = bare ? traceGain(dome.summary.extraction, dome.summary.stderr, bare.summary.extraction, bare.summary.stderr) : null;

@@ -6,7 +6,7 @@
 import type { TracePackage } from '../trace/package-spec';
 
 /** Bump when the tracer's numbers for the same inputs change, so results cached before are not reused. */
-export const TRACE_RESULTS_VERSION = 1;
+export const TRACE_RESULTS_VERSION = 2;
 
 /** JSON with object keys sorted, so two equal packages built in different key orders give one text. */
 export function canonicalJson(value: unknown): string {

@@ -1,6 +1,6 @@
 /**
  * Where each library chip material emits, so the scenario's wavelength can follow a chip that is
- * changed: a red AlGaInP chip left at a blue 450 nm is evaluated where it never emits (and outside
+ * changed: a red chip left at a blue 450 nm is evaluated where it never emits (and outside
  * its index data). Pure.
  *
  * Ranges are those of LED material systems as a textbook surveys them (E. F. Schubert, Light-Emitting
@@ -21,9 +21,10 @@ export interface EmissionRange {
 /** By library material id. Substrates, encapsulants and user materials have none. */
 export const CHIP_EMISSION: Readonly<Record<string, EmissionRange>> = {
   gan: { minNm: 365, maxNm: 530, typicalNm: 450 },
-  // The library's GaP also stands for red AlGaInP chips (their thick GaP window carries most of the light),
-  // so its range is the AlGaInP one: yellow-green to red.
-  gap: { minNm: 560, maxNm: 650, typicalNm: 620 },
+  ingan: { minNm: 400, maxNm: 530, typicalNm: 450 },
+  // GaP also stands for red–yellow AlGaInP chips on their GaP window (no open AlGaInP data; retired-ids.ts):
+  // their range 560–650 nm lies inside GaP's own, and red 620 nm is the common emitter of the two
+  gap: { minNm: 555, maxNm: 700, typicalNm: 620 },
   gaas: { minNm: 850, maxNm: 980, typicalNm: 940 }
 };
 
@@ -43,12 +44,13 @@ export interface EmissionAdvice {
  * index, so it also answers for a chip whose formula cannot be evaluated at the present wavelength.
  */
 export function emissionAdvice(scenario: Scenario): EmissionAdvice | null {
-  const id = scenario.chip.medium.kind === 'material' ? scenario.chip.medium.id : null;
-  const range = id ? CHIP_EMISSION[id] : undefined;
-  if (!id || !range) return null;
+  // By the library entry the id finds (an alias or a retired id names its replacement)
+  const material = scenario.chip.medium.kind === 'material' ? findMaterial(scenario.chip.medium.id) : undefined;
+  const range = material ? CHIP_EMISSION[material.id] : undefined;
+  if (!material || !range) return null;
   const nm = designWavelengthNm(scenario.emission);
   if (nm >= range.minNm && nm <= range.maxNm) return null;
-  return { chip: findMaterial(id)?.name ?? id, range, currentNm: nm, movable: scenario.emission.kind !== 'table' };
+  return { chip: material.name, range, currentNm: nm, movable: scenario.emission.kind !== 'table' };
 }
 
 /** The emission moved to `wavelengthNm`: the single wavelength, or the Gaussian's peak (its width kept). */

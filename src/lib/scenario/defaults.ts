@@ -17,9 +17,12 @@ export const DEMO_SCENARIO: Scenario = deepFreeze({
     heightMm: 0.15,
     emitterZMm: 0.14,
     absorptionPerMm: 0.5,
-    emission: 'plane'
+    emission: 'plane',
+    topTexture: 0
   },
   base: { kind: 'reflectance', reflectance: 0.92 },
+  baseFinish: 'specular',
+  body: { kind: 'flat' },
   encapsulant: {
     medium: { kind: 'material', id: 'silicone-methyl' },
     shape: 'dome',
@@ -28,7 +31,7 @@ export const DEMO_SCENARIO: Scenario = deepFreeze({
     absorptionPerMm: 0.001
   },
   outside: { kind: 'material', id: 'air' },
-  trace: { rays: 200_000, seed: 1, polarization: 'average' }
+  trace: { rays: 250_000, seed: 1, polarization: 'average' }
 });
 
 /** The second silicone of the demo's decision (n ≈ 1.53). */

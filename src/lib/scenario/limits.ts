@@ -53,8 +53,6 @@ export const LIMITS = {
   materialN: { min: 0, max: 10, unit: '' },
   /** Extinction coefficient of any material or layer (metals reach about 15 in the infrared). */
   materialK: { min: 0, max: 50, unit: '' },
-  /** Any length the tracer core accepts: the scenario's sizes and smaller, down to the point-like test sources (1 µm chips, 0.1 µm films) the reference checks use. */
-  traceSizeMm: { min: 1e-6, max: 1000, unit: 'mm' },
   /** Fraction of the light leaving a textured chip face in a Lambertian direction instead of the specular one. */
   scatteredFraction: { min: 0, max: 1, unit: '' },
   /** Layers of a layered chip, bottom to top. */

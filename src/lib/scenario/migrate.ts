@@ -1,8 +1,11 @@
 /**
  * Lifts older scenario layouts to the current version before validation.
  *
- * Version 3 → 4: an optional `phosphor` block was added; a version-3 scenario has none (a clear
- * encapsulant), so it is read as version 4 with its number raised.
+ * Version 3 → 4: the package body, the base finish and the chip's structure are new. A version-3
+ * package is the flat body with a specular base and a flat-topped single-box chip standing on the base,
+ * which is what the new fields say when they are added as { kind: 'flat' }, 'specular' and a top
+ * texture of 0 (no layers, no chip mirror): the tracer builds the same scene and every number stays.
+ * An optional `phosphor` block came with version 4 too; a version-3 scenario has none (a clear encapsulant).
  *
  * Version 2 → 3: a typed encapsulant index loses its k. Every computation already took the
  * encapsulant's loss from its absorption per mm and ignored that k (the tracer and the closed form use
@@ -99,7 +102,13 @@ export function migrateScenario(raw: unknown): MigrateResult {
   // Version 2 only added user-material media: a version-1 scenario is a version-2 one with its number raised.
   const v2 = version <= 1 ? { ...(version === 0 ? fromV0(raw) : raw), version: 2 } : raw;
   const v3 = version <= 2 ? fromV2(v2) : raw;
-  return { ok: true, value: renameRetired({ ...v3, version: 4 }), from: version };
+  return { ok: true, value: renameRetired(fromV3(v3)), from: version };
+}
+
+/** v3 → v4: the flat body, a specular base, a flat-topped single-box chip — today's package, unchanged. */
+function fromV3(v3: Record<string, unknown>): Record<string, unknown> {
+  const chip = isRecord(v3.chip) ? { ...v3.chip, topTexture: 0 } : v3.chip;
+  return { ...v3, version: 4, baseFinish: 'specular', body: { kind: 'flat' }, chip };
 }
 
 /** v2 → v3: the typed encapsulant index drops its k (never used: the absorption per mm is the encapsulant's loss). */
@@ -117,12 +126,16 @@ function renameMedium(medium: unknown): unknown {
   return id === medium.id ? medium : { ...medium, id };
 }
 
-/** The scenario with retired library ids renamed in chip, encapsulant and outside media (copies, never edits). */
+/** The scenario with retired library ids renamed in chip (and its layers), encapsulant and outside media (copies, never edits). */
 function renameRetired(s: Record<string, unknown>): Record<string, unknown> {
   const out: Record<string, unknown> = { ...s, outside: renameMedium(s.outside) };
   for (const part of ['chip', 'encapsulant'] as const) {
     const p = s[part];
     if (isRecord(p)) out[part] = { ...p, medium: renameMedium(p.medium) };
+  }
+  const chip = out.chip;
+  if (isRecord(chip) && Array.isArray(chip.layers)) {
+    out.chip = { ...chip, layers: chip.layers.map((l) => (isRecord(l) ? { ...l, medium: renameMedium(l.medium) } : l)) };
   }
   if (s.outside === undefined) delete out.outside;
   return out;

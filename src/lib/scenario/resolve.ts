@@ -4,7 +4,7 @@
  */
 import { findMaterial, indexAt } from '../materials/index';
 import type { Material } from '../materials/types';
-import type { TracePackage } from '../trace/package-spec';
+import type { TraceBase, TraceBody, TraceChip, TracePackage } from '../trace/package-spec';
 import type { AnyMediumSpec, BaseSpec, EmissionSpec, Scenario } from './schema';
 
 /** A medium's complex index n + ik at one wavelength, and where it came from. */
@@ -33,6 +33,10 @@ export interface ResolvedScenario {
   /** The wavelength every index is taken at (nm). */
   wavelengthNm: number;
   chip: ResolvedMedium;
+  /** Each layer's medium of a layered chip, bottom to top (empty for a single box). */
+  chipLayers: ResolvedMedium[];
+  /** The chip's own bottom mirror, when it has one. */
+  chipMirror: ResolvedBase | null;
   encapsulant: ResolvedMedium;
   outside: ResolvedMedium;
   base: ResolvedBase;
@@ -96,9 +100,9 @@ export function resolveMedium(spec: AnyMediumSpec, wavelengthNm: number, field =
   };
 }
 
-function resolveBase(base: BaseSpec, wavelengthNm: number): ResolvedBase {
+function resolveBase(base: BaseSpec, wavelengthNm: number, field = 'Base metal'): ResolvedBase {
   if (base.kind === 'reflectance') return { kind: 'reflectance', reflectance: base.reflectance };
-  const m = resolveMedium({ kind: 'material', id: base.id }, wavelengthNm, 'Base metal');
+  const m = resolveMedium({ kind: 'material', id: base.id }, wavelengthNm, field);
   return { kind: 'metal', n: m.n, k: m.k, label: m.label, materialId: base.id, inRange: m.inRange, warning: m.warning };
 }
 
@@ -114,15 +118,39 @@ export function resolveScenario(scenario: Scenario): ResolvedScenario {
       : typedEncapsulant;
   const outside = resolveMedium(scenario.outside, wavelengthNm, 'Outside medium');
   const base = resolveBase(scenario.base, wavelengthNm);
+  const chipLayers = (scenario.chip.layers ?? []).map((l, i) => resolveMedium(l.medium, wavelengthNm, `Chip layer ${i + 1}`));
+  const chipMirror = scenario.chip.mirror ? resolveBase(scenario.chip.mirror, wavelengthNm, 'Chip mirror metal') : null;
   const warnings: string[] = [];
   const note = (part: string, w: string | null) => {
     if (w) warnings.push(`${part}: ${w}`);
   };
-  note('Chip', chip.warning);
+  if (chipLayers.length === 0) note('Chip', chip.warning);
+  chipLayers.forEach((m, i) => note(`Chip layer ${i + 1}`, m.warning));
+  if (chipMirror?.kind === 'metal') note('Chip mirror', chipMirror.warning);
   if (scenario.encapsulant.shape !== 'none') note('Encapsulant', encapsulant.warning);
   note('Outside medium', outside.warning);
   if (base.kind === 'metal') note('Base', base.warning);
-  return { wavelengthNm, chip, encapsulant, outside, base, warnings };
+  return { wavelengthNm, chip, chipLayers, chipMirror, encapsulant, outside, base, warnings };
+}
+
+function traceMirror(m: ResolvedBase): TraceBase {
+  return m.kind === 'reflectance' ? { kind: 'reflectance', reflectance: m.reflectance } : { kind: 'metal', n: m.n, k: m.k };
+}
+
+/** The tracer's body: the flat base, or the cup with its fill taken from the encapsulant's shape. */
+function traceBody(scenario: Scenario): TraceBody {
+  const b = scenario.body;
+  if (b.kind === 'flat') return { kind: 'flat' };
+  const shape = scenario.encapsulant.shape;
+  return {
+    kind: 'cup',
+    floorRadiusMm: b.floorRadiusMm,
+    topRadiusMm: b.topRadiusMm,
+    depthMm: b.depthMm,
+    wallFinish: b.wallFinish,
+    wallReflectance: b.wallReflectance,
+    fill: shape === 'dome' ? 'dome' : shape === 'none' ? 'none' : 'flat'
+  };
 }
 
 /**
@@ -132,22 +160,31 @@ export function resolveScenario(scenario: Scenario): ResolvedScenario {
 export function toTracePackage(scenario: Scenario, resolved: ResolvedScenario = resolveScenario(scenario)): TracePackage {
   const c = scenario.chip;
   const e = scenario.encapsulant;
+  const chip: TraceChip = {
+    widthMm: c.widthMm,
+    lengthMm: c.lengthMm,
+    heightMm: c.heightMm,
+    n: resolved.chip.n,
+    absorptionPerMm: c.absorptionPerMm,
+    emitterZMm: c.emitterZMm,
+    emission: c.emission
+  };
+  if (c.layers) {
+    chip.layers = c.layers.map((l, i) => ({ name: l.name, thicknessMm: l.thicknessMm, n: resolved.chipLayers[i].n, absorptionPerMm: l.absorptionPerMm }));
+    chip.emitLayer = c.emitLayer ?? 0;
+  }
+  if (resolved.chipMirror) chip.mirror = traceMirror(resolved.chipMirror);
+  // 0 stays absent: the flat top face, the scene of version 3 exactly
+  if (c.topTexture > 0) chip.topScatter = c.topTexture;
+  const body = traceBody(scenario);
   return {
-    chip: {
-      widthMm: c.widthMm,
-      lengthMm: c.lengthMm,
-      heightMm: c.heightMm,
-      n: resolved.chip.n,
-      absorptionPerMm: c.absorptionPerMm,
-      emitterZMm: c.emitterZMm,
-      emission: c.emission
-    },
-    base:
-      resolved.base.kind === 'reflectance'
-        ? { kind: 'reflectance', reflectance: resolved.base.reflectance }
-        : { kind: 'metal', n: resolved.base.n, k: resolved.base.k },
+    chip,
+    base: traceMirror(resolved.base),
+    ...(scenario.baseFinish === 'diffuse' ? { baseFinish: 'diffuse' as const } : {}),
+    ...(body.kind === 'cup' ? { body } : {}),
     encapsulant: {
-      shape: e.shape,
+      // a cup's fill is in its body; the flat body's 'flat' never validates
+      shape: e.shape === 'flat' ? 'none' : e.shape,
       radiusMm: e.radiusMm,
       heightMm: e.heightMm,
       n: resolved.encapsulant.n,

@@ -1,5 +1,8 @@
 /**
  * The scenario: one LED package description shared by every page, the URL and the command line.
+ * Version 4: the package body (flat base or reflector cup, the encapsulant filling it flat, with a dome
+ * or not at all), the base's finish (specular or diffuse), and the chip's structure (a single box or
+ * layers, its own bottom mirror, a textured top face).
  * Version 3: the encapsulant's absorption is one input, `absorptionPerMm`; its typed index is n only (k is
  * derived from the absorption, see `encapsulantK`). Version 2 added media that carry a user's own
  * material in full, so a link is self-contained.
@@ -99,6 +102,50 @@ const emissionSchema = z.discriminatedUnion(
   { error: 'Emission must be a single wavelength, a Gaussian band or a table.' }
 );
 
+const mirrorSchema = (field: string) =>
+  z.discriminatedUnion(
+    'kind',
+    [
+      z.object({ kind: z.literal('reflectance'), reflectance: num(`${field} reflectance`, LIMITS.reflectance) }, objectMessages(field)).strict(),
+      z.object({ kind: z.literal('metal'), id: materialId(`${field} metal`) }, objectMessages(field)).strict()
+    ],
+    { error: `${field} must be a reflectance or a metal from the library.` }
+  );
+
+const finishSchema = (field: string) => z.enum(['specular', 'diffuse'], { error: `${field} must be 'specular' or 'diffuse'.` });
+
+/** One layer of a layered chip: its medium (n alone when typed: its loss is the absorption per mm). */
+const chipLayerSchema = (i: number) =>
+  z
+    .object(
+      {
+        name: z
+          .string({ error: `Chip layer ${i + 1} name must be text.` })
+          .trim()
+          .min(1, { error: `Chip layer ${i + 1} name must be 1 to 40 characters.` })
+          .max(40, { error: `Chip layer ${i + 1} name must be 1 to 40 characters.` }),
+        medium: encapsulantMedium(`Chip layer ${i + 1}`),
+        thicknessMm: num(`Chip layer ${i + 1} thickness`, LIMITS.sizeMm),
+        absorptionPerMm: num(`Chip layer ${i + 1} absorption`, LIMITS.absorptionPerMm)
+      },
+      objectMessages(`Chip layer ${i + 1}`)
+    )
+    .strict();
+
+const chipLayersSchema = z
+  .array(z.unknown(), { error: 'Chip layers must be a list of layers, bottom to top.' })
+  .min(LIMITS.chipLayers.min, { error: rangeMessage('Number of chip layers', LIMITS.chipLayers) })
+  .max(LIMITS.chipLayers.max, { error: rangeMessage('Number of chip layers', LIMITS.chipLayers) })
+  .transform((layers, ctx) => {
+    const out: z.infer<ReturnType<typeof chipLayerSchema>>[] = [];
+    layers.forEach((layer, i) => {
+      const r = chipLayerSchema(i).safeParse(layer);
+      if (r.success) out.push(r.data);
+      else for (const issue of r.error.issues) ctx.addIssue({ code: 'custom', path: [i, ...issue.path], message: issue.message });
+    });
+    return out;
+  });
+
 const chipSchema = z
   .object({
     medium: medium('Chip'),
@@ -107,23 +154,50 @@ const chipSchema = z
     heightMm: num('Chip height', LIMITS.sizeMm),
     emitterZMm: num('Emitter height', LIMITS.emitterZMm),
     absorptionPerMm: num('Chip absorption', LIMITS.absorptionPerMm),
-    emission: z.enum(['plane', 'volume'], { error: "Chip emission must be 'plane' or 'volume'." })
+    emission: z.enum(['plane', 'volume'], { error: "Chip emission must be 'plane' or 'volume'." }),
+    /** Textured top face: the fraction s of the light crossing or reflected there that leaves in a Lambertian direction. */
+    topTexture: num('Textured top fraction', LIMITS.scatteredFraction),
+    /** Layers bottom to top (absent: one box of the chip's medium, height and absorption); heightMm is then their total. */
+    layers: chipLayersSchema.optional(),
+    /** The emitting layer, counted from 0 at the bottom (with layers). */
+    emitLayer: z.number({ error: 'Emitting layer must be a layer number.' }).int({ error: 'Emitting layer must be a whole layer number.' }).optional(),
+    /** The chip's own bottom mirror (absent: the chip stands on the base and that reflects). */
+    mirror: mirrorSchema('Chip mirror').optional()
   }, objectMessages('Chip'))
   .strict();
 
-const baseSchema = z.discriminatedUnion(
+const baseSchema = mirrorSchema('Base');
+
+/**
+ * The body the chip stands in: an endless flat base, or a reflector cup (floor radius at the base, wall a
+ * cone frustum to the top radius at the cup's depth; the floor is the base).
+ */
+const bodySchema = z.discriminatedUnion(
   'kind',
   [
-    z.object({ kind: z.literal('reflectance'), reflectance: num('Base reflectance', LIMITS.reflectance) }, objectMessages('Base')).strict(),
-    z.object({ kind: z.literal('metal'), id: materialId('Base metal') }, objectMessages('Base')).strict()
+    z.object({ kind: z.literal('flat') }, objectMessages('Body')).strict(),
+    z
+      .object(
+        {
+          kind: z.literal('cup'),
+          floorRadiusMm: num('Cup floor radius', LIMITS.sizeMm),
+          topRadiusMm: num('Cup top radius', LIMITS.sizeMm),
+          depthMm: num('Cup depth', LIMITS.sizeMm),
+          wallFinish: finishSchema('Cup wall finish'),
+          wallReflectance: num('Cup wall reflectance', LIMITS.reflectance)
+        },
+        objectMessages('Body')
+      )
+      .strict()
   ],
-  { error: 'Base must be a reflectance or a metal from the library.' }
+  { error: "Body must be 'flat' or a cup." }
 );
 
 const encapsulantSchema = z
   .object({
     medium: encapsulantMedium('Encapsulant'),
-    shape: z.enum(['none', 'dome', 'cylinder'], { error: "Encapsulant shape must be 'none', 'dome' or 'cylinder'." }),
+    /** Flat body: none, dome or cylinder. Cup: 'flat' fills it to the rim, 'dome' adds a dome on the rim plane, 'none' leaves it empty. */
+    shape: z.enum(['none', 'dome', 'cylinder', 'flat'], { error: "Encapsulant shape must be 'none', 'dome', 'cylinder' or 'flat'." }),
     radiusMm: num('Encapsulant radius', LIMITS.sizeMm),
     heightMm: num('Encapsulant height', LIMITS.sizeMm),
     absorptionPerMm: num('Encapsulant absorption', LIMITS.absorptionPerMm)
@@ -165,6 +239,8 @@ const objectSchema = z
     emission: emissionSchema,
     chip: chipSchema,
     base: baseSchema,
+    baseFinish: finishSchema('Base finish'),
+    body: bodySchema,
     encapsulant: encapsulantSchema,
     outside: medium('Outside medium'),
     trace: traceSchema,
@@ -263,8 +339,24 @@ function crossChecks(s: ObjectScenario, ctx: Ctx): void {
   checkIndexInRange(ctx, ['outside'], 'Outside medium', materialOf(s.outside), wl);
   if (s.base.kind === 'metal') checkIndexExists(ctx, ['base', 'id'], 'Base metal', findMaterial(s.base.id), wl);
   if (s.base.kind === 'metal') checkMaterial(ctx, ['base', 'id'], 'Base metal', s.base.id, true);
+  const mirror = s.chip.mirror;
+  if (mirror?.kind === 'metal') {
+    checkMaterial(ctx, ['chip', 'mirror', 'id'], 'Chip mirror metal', mirror.id, true);
+    checkIndexExists(ctx, ['chip', 'mirror', 'id'], 'Chip mirror metal', findMaterial(mirror.id), wl);
+  }
+  (s.chip.layers ?? []).forEach((layer, i) => {
+    const path = ['chip', 'layers', i, 'medium'];
+    const field = `Chip layer ${i + 1}`;
+    // a layer's name is its ledger bin: unique, and not a medium the package already names
+    const taken = ['outside', 'encapsulant'].includes(layer.name) || s.chip.layers!.findIndex((l) => l.name === layer.name) !== i;
+    if (taken) ctx.addIssue({ code: 'custom', path: ['chip', 'layers', i, 'name'], message: `${field} name must differ from the other layers' and from 'outside' and 'encapsulant'.` });
+    if (layer.medium.kind === 'material') checkMaterial(ctx, [...path, 'id'], `${field} material`, layer.medium.id, false);
+    if (layer.medium.kind === 'user') checkUserMaterial(ctx, [...path, 'material'], `${field} material`, layer.medium.material);
+    checkIndexExists(ctx, path, `${field} material`, materialOf(layer.medium), wl);
+    checkIndexInRange(ctx, path, field, materialOf(layer.medium), wl);
+  });
 
-  for (const problem of packageFitProblems(s.chip, s.encapsulant)) {
+  for (const problem of packageFitProblems(s.chip, s.encapsulant, s.body, { kind: s.base.kind, finish: s.baseFinish })) {
     ctx.addIssue({ code: 'custom', path: problem.path.split('.'), message: problem.message });
   }
 
@@ -300,6 +392,9 @@ export type AnyMediumSpec = MediumSpec | EncapsulantMediumSpec;
 export type EmissionSpec = Scenario['emission'];
 export type BaseSpec = Scenario['base'];
 export type EncapsulantShape = Scenario['encapsulant']['shape'];
+export type BodySpec = Scenario['body'];
+export type ChipLayerSpec = NonNullable<Scenario['chip']['layers']>[number];
+export type MirrorSpec = Scenario['base'];
 
 /** One problem found in a scenario: a dotted path ('chip.widthMm') and a message naming field and range. */
 export interface ScenarioIssue {

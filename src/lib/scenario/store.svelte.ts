@@ -15,9 +15,9 @@ import { parseScenario, type ParseResult, type Scenario } from './schema';
 import { decodeScenarioParam, encodeScenarioParam, SCENARIO_PARAM } from './url';
 
 /** localStorage key; the number is the scenario version written under it. */
-export const STORAGE_KEY = 'outcouple.scenario.v3';
+export const STORAGE_KEY = 'outcouple.scenario.v4';
 /** Keys older versions wrote, newest first: read (and migrated) when the current key is empty, never written. */
-export const OLDER_STORAGE_KEYS = ['outcouple.scenario.v2', 'outcouple.scenario.v1'];
+export const OLDER_STORAGE_KEYS = ['outcouple.scenario.v3', 'outcouple.scenario.v2', 'outcouple.scenario.v1'];
 
 export const STORAGE_UNAVAILABLE =
   "Cannot save in this browser: the scenario is kept only in this tab's link.";

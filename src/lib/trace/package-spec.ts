@@ -128,7 +128,7 @@ export const DEFAULT_MAX_EVENTS = 1000;
  * table's minimum is what a user may ask for.
  */
 export const TRACE_LIMITS = {
-  sizeMm: LIMITS.traceSizeMm,
+  sizeMm: LIMITS.sizeMm,
   index: LIMITS.indexN,
   absorptionPerMm: LIMITS.absorptionPerMm,
   reflectance: LIMITS.reflectance,

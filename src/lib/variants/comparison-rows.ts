@@ -4,9 +4,9 @@
  * (precision.ts). The page's table, the CSV and the command line all print these rows. Pure.
  */
 import { LEDGER_CATEGORIES } from '../charts/dome-ledger-chart';
-import { roundSignificant, roundWithSigma } from './precision';
-import { ratioWithSigma, type Estimate } from './ratio';
-import type { VariantFigures } from './variant-figures';
+import { roundSignificant } from '../export/number-text';
+import { roundWithSigma } from './precision';
+import { ratioOf, type Estimate, type VariantFigures } from './variant-figures';
 
 export interface ComparisonCell {
   value: number;
@@ -44,7 +44,7 @@ function plain(x: number | null | undefined, digits: number): ComparisonCell | n
 /**
  * The comparison rows for `variants` (first is the reference of the ratio row). Traced shares carry
  * ± one binomial standard error √(p(1 − p)/N); the ratio carries the propagated error of both
- * traces (ratio.ts).
+ * traces (traceGain).
  */
 export function comparisonRows(variants: readonly VariantFigures[]): ComparisonRow[] {
   const rows: ComparisonRow[] = [];
@@ -68,7 +68,7 @@ export function comparisonRows(variants: readonly VariantFigures[]): ComparisonR
     `Ratio to ${variants[0]?.name ?? 'the first variant'} (traced extraction)`,
     '×',
     'traced',
-    (f, i) => (i === 0 && f.traced ? { value: 1, sigma: null, decimals: null } : f.traced && first ? est(ratioWithSigma(f.traced.extraction, first), 1) : null),
+    (f, i) => (i === 0 && f.traced ? { value: 1, sigma: null, decimals: null } : f.traced && first ? est(ratioOf(f.traced.extraction, first), 1) : null),
     (f) => (!f.traced || !variants[0]?.traced ? TRACE_PENDING : 'first variant extracts nothing')
   );
   add('bare', 'Bare chip on the same base, traced', '%', 'traced', (f) => est(f.traced?.bare, 100), pending);

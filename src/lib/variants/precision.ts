@@ -3,14 +3,10 @@
  * the decimal of the error's second significant digit, the error to two significant digits (JCGM
  * 100:2008, Guide to the Expression of Uncertainty in Measurement, §7.2.6: "at most two significant
  * digits"); a value without one to a stated number of significant digits. Pure; returns plain numbers
- * whose shortest decimal text is the rounded value (no 38.63700000000001).
+ * whose shortest decimal text is the rounded value (no 38.63700000000001). Significant-digit rounding
+ * is the exports' own (export/number-text.ts), so a table cell and a file cell round alike.
  */
-
-/** `x` rounded to `digits` significant digits (1–15); non-finite values pass through. */
-export function roundSignificant(x: number, digits: number): number {
-  if (!Number.isFinite(x) || x === 0) return x;
-  return Number(x.toPrecision(Math.min(15, Math.max(1, Math.round(digits)))));
-}
+import { roundSignificant } from '../export/number-text';
 
 /** `x` rounded to `decimals` places (may be negative: −1 rounds to tens). */
 export function roundDecimals(x: number, decimals: number): number {

@@ -7,8 +7,15 @@
 import { domeClosedForm } from '../sweeps/dome-closed-form';
 import { resolveScenario, toTracePackage } from '../scenario/resolve';
 import type { Scenario } from '../scenario/schema';
-import { ratioWithSigma, type Estimate } from './ratio';
+import { traceGain } from '../runs/trace-gain';
 import type { VariantResult, VariantTrace } from './variant-result';
+
+/** A traced figure and its standard error. */
+export interface Estimate {
+  value: number;
+  /** Standard error (≥ 0). */
+  sigma: number;
+}
 
 export interface VariantFigures {
   name: string;
@@ -36,6 +43,12 @@ function estimate(t: VariantTrace): Estimate {
   return { value: t.extraction, sigma: t.stderr };
 }
 
+/** a / b ± σ of two traced estimates by the one rule every page uses (traceGain); null when b is not > 0. */
+export function ratioOf(a: Estimate, b: Estimate): Estimate | null {
+  const r = traceGain(a.value, a.sigma, b.value, b.sigma);
+  return r && { value: r.gain, sigma: r.stderr };
+}
+
 /** Figures of a variant (`result` null: closed form only). Never throws. */
 export function variantFigures(name: string, scenario: Scenario, result: VariantResult | null): VariantFigures {
   const resolved = resolveScenario(scenario);
@@ -57,7 +70,7 @@ export function variantFigures(name: string, scenario: Scenario, result: Variant
       rays: result.package.rays,
       extraction: pack,
       bare,
-      gain: result.bareChip && bare ? ratioWithSigma(pack, bare) : bare ? { value: 1, sigma: 0 } : null,
+      gain: result.bareChip && bare ? ratioOf(pack, bare) : bare ? { value: 1, sigma: 0 } : null,
       trace: result.package
     };
   }

@@ -6,9 +6,6 @@
 import { z } from 'zod';
 import type { TraceSummary } from '../trace/summary';
 
-/** Rays of each trace of a variant (package and bare chip), on the page and the command line alike: σ of an extraction near 40 % is about 0.1 %. */
-export const VARIANT_RAYS = 250_000;
-
 const fraction = z.number().min(0).max(1);
 
 export const variantTraceSchema = z

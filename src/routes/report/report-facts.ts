@@ -3,7 +3,7 @@
  * its resolved indices, plus the closed-form results and the report's fixed assumptions and cautions.
  * Pure apart from its $lib imports; the page only lays these out.
  */
-import { fmtNumber, fmtPercent, fmtPlain, fmtUnit } from '$lib/components/format';
+import { fmtNumber, fmtPercent, fmtPlain, fmtUnit } from '$lib/format/format';
 import { domeEstimate, escapeCone } from '$lib/optics';
 import type { ResolvedScenario } from '$lib/scenario/resolve';
 import type { Scenario } from '$lib/scenario/schema';

@@ -47,6 +47,18 @@ describe('chartConfig', () => {
     expect(c.options.scales.x.type).toBe('category');
   });
 
+  it('a horizontal bar chart puts the categories on the vertical axis and the values on the horizontal one', () => {
+    const c = chartConfig(
+      { ...line, kind: 'bar', horizontal: true, categories: ['a', 'b'], series: [{ label: 'v', points: [{ x: 0, y: 1 }, { x: 1, y: 2 }], color: 2 }] },
+      FALLBACK_PALETTE
+    ) as any;
+    expect(c.options.indexAxis).toBe('y');
+    expect(c.options.scales.y.type).toBe('category');
+    expect(c.options.scales.y.title.text).toBe(line.x.title);
+    expect(c.options.scales.x.type).toBe('linear');
+    expect(c.options.scales.x.title.text).toBe(line.y.title);
+  });
+
   it('polar charts keep their aspect ratio so a circle stays round', () => {
     const c = chartConfig(polarChart([{ label: 'a', thetaRad: [0], intensity: [1] }], { title: 'F', intensityLabel: 'I' }), FALLBACK_PALETTE) as any;
     expect(c.options.maintainAspectRatio).toBe(true);

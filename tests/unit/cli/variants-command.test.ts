@@ -5,9 +5,9 @@ import { describe, expect, it } from 'vitest';
 import { demoScenario } from '../../../src/lib/scenario/defaults';
 import { summarize } from '../../../src/lib/trace/summary';
 import { traceSync } from '../../../src/lib/trace/trace';
+import { variantRequest } from '../../../src/lib/variants/trace-variant';
 import { comparisonRows } from '../../../src/lib/variants/comparison-rows';
 import { variantFigures } from '../../../src/lib/variants/variant-figures';
-import { variantPlan } from '../../../src/lib/variants/variant-plan';
 import { comparisonJson } from '../../../src/lib/variants/variants-export';
 import { fakeResult, phenylScenario, twoVariants } from '../variants/fixtures';
 import { runCli, runJson } from './run-cli';
@@ -25,7 +25,7 @@ describe('outcouple variants', () => {
     const out = runJson(['variants', path, '--rays', '2000', '--threads', '1']);
     expect(out.variants.map((v: { name: string; results: string }) => [v.name, v.results])).toEqual([['A', 'traced'], ['B', 'traced']]);
     // the page's plan traced in-process: identical tallies for the same seed and rays (chunk seeding)
-    const plan = variantPlan(phenylScenario(), 2000);
+    const plan = variantRequest(phenylScenario(), 2000);
     const p = summarize(traceSync(plan.pkg, { rays: plan.rays, seed: plan.seed }));
     const extraction = out.rows.find((r: { key: string }) => r.key === 'extraction');
     const sigma = Math.sqrt((p.extraction * (1 - p.extraction)) / 2000) * 100;

@@ -20,6 +20,12 @@ describe('checkClaim(claim) — extraction', () => {
     expect(r.requires.join(' ')).toMatch(/recycling/);
   });
 
+  it('writes a tiny claimed share as "< 0.001 %", never in exponent form (1.6e-7 %)', () => {
+    const r = checkClaim(gan({ value: 1.6e-9 }));
+    expect(r.reason).toContain('< 0.001 %');
+    expect(r.reason).not.toMatch(/\de-\d|10⁻/);
+  });
+
   it('calls a value within the ideal dome consistent', () => {
     expect(checkClaim(gan({ value: 0.3 })).verdict).toBe('consistent');
   });

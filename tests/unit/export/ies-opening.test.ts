@@ -32,3 +32,15 @@ describe('packageOpening(encapsulant, chip)', () => {
       .toEqual({ shape: 'box', widthMm: 1, lengthMm: 0.5, heightMm: 0.15 });
   });
 });
+
+describe('packageOpening(encapsulant, chip, body) with a reflector cup', () => {
+  const chip = { widthMm: 1, lengthMm: 1, heightMm: 0.15 };
+  const cup = { kind: 'cup' as const, topRadiusMm: 1.5 };
+  it("a cup filled flat or empty is a luminous disc of the rim's diameter (LM-63-2019 disc: −d −d 0, from memory)", () => {
+    expect(packageOpening({ shape: 'flat', radiusMm: 9, heightMm: 9 }, chip, { ...cup, fill: 'flat' })).toEqual({ shape: 'disc', widthMm: 3, lengthMm: 3, heightMm: 0 });
+    expect(packageOpening({ shape: 'none', radiusMm: 9, heightMm: 9 }, chip, { ...cup, fill: 'none' }).shape).toBe('disc');
+  });
+  it("a dome on the rim is the vertical cylinder of the rim's diameter and the dome's height", () => {
+    expect(packageOpening({ shape: 'dome', radiusMm: 1.5, heightMm: 1 }, chip, { ...cup, fill: 'dome' })).toEqual({ shape: 'cylinder', widthMm: 3, lengthMm: 3, heightMm: 1 });
+  });
+});

@@ -9,19 +9,25 @@ describe('emissionAdvice(scenario, resolved)', () => {
     expect(emissionAdvice(s)).toBeNull();
   });
 
-  it('advises a red AlGaInP chip (the library’s GaP window material) left at 450 nm to move to its range (560–650 nm), typical 620 nm', () => {
+  it('advises a red chip (GaP, which also stands for AlGaInP on its GaP window) left at 450 nm to move to its range (555–700 nm), typical 620 nm', () => {
     const s = demoScenario();
     s.chip.medium = { kind: 'material', id: 'gap' };
     const a = emissionAdvice(s);
-    expect(a).toMatchObject({ currentNm: 450, movable: true, range: { minNm: 560, maxNm: 650, typicalNm: 620 } });
-    expect(a?.chip).toMatch(/GaP/);
+    expect(a).toMatchObject({ currentNm: 450, movable: true, range: { minNm: 555, maxNm: 700, typicalNm: 620 } });
+    expect(a?.chip).toBe('GaP');
+  });
+
+  it('answers for a retired id by the entry that replaced it (a saved "algainp" chip is the GaP entry)', () => {
+    const s = demoScenario();
+    s.chip.medium = { kind: 'material', id: 'algainp' };
+    expect(emissionAdvice(s)).toMatchObject({ chip: 'GaP', range: { typicalNm: 620 } });
   });
 
   it('says nothing for a typed chip index, and calls a tabulated spectrum not movable', () => {
     const s = demoScenario();
     s.chip.medium = { kind: 'index', n: 3.4, k: 0 };
     expect(emissionAdvice(s)).toBeNull();
-    s.chip.medium = { kind: 'material', id: 'gap' };
+    s.chip.medium = { kind: 'material', id: 'algainp' };
     s.emission = { kind: 'table', rows: [[450, 1], [460, 0.5]] };
     expect(emissionAdvice(s)?.movable).toBe(false);
   });

@@ -98,6 +98,23 @@ describe('migrateScenario', () => {
     if (r.ok) expect(resolveScenario(r.scenario).encapsulant.k).toBeCloseTo(1.7905e-5, 9);
   });
 
+  it('reads a version-3 scenario as the flat body, specular base and flat-topped single-box chip: the traced package is the same', () => {
+    const { baseFinish: _f, body: _b, ...v3 } = demoScenario();
+    const { topTexture: _t, ...chip } = v3.chip;
+    const r = readScenario({ ...v3, version: 3, chip, encapsulant: { ...v3.encapsulant, shape: 'cylinder', heightMm: 1 } });
+    expect(r.ok).toBe(true);
+    if (!r.ok) return;
+    expect(r.migratedFrom).toBe(3);
+    expect(r.scenario.body).toEqual({ kind: 'flat' });
+    expect(r.scenario.baseFinish).toBe('specular');
+    expect(r.scenario.chip.topTexture).toBe(0);
+    // The version-3 package had exactly these fields: no body, finish, layers, mirror or texture
+    const pkg = toTracePackage(r.scenario);
+    expect(Object.keys(pkg).sort()).toEqual(['base', 'chip', 'encapsulant', 'outsideN', 'polarization']);
+    expect(Object.keys(pkg.chip).sort()).toEqual(['absorptionPerMm', 'emission', 'emitterZMm', 'heightMm', 'lengthMm', 'n', 'widthMm']);
+    expect(pkg.encapsulant.shape).toBe('cylinder');
+  });
+
   it('refuses non-objects and odd versions', () => {
     for (const bad of [null, 3, 'x', [], { version: -1 }, { version: 1.5 }, { version: '1' }]) {
       expect(migrateScenario(bad).ok).toBe(false);

@@ -34,3 +34,54 @@ describe('packageFitProblems(chip, encapsulant)', () => {
     expect(packageFitProblems(chip, { shape: 'none', radiusMm: 0.001, heightMm: 0.001 })).toEqual([]);
   });
 });
+
+describe('packageFitProblems with a cup, layers and a base finish', () => {
+  const cup = { kind: 'cup' as const, floorRadiusMm: 1.3, topRadiusMm: 1.5, depthMm: 0.8 };
+  const flatFill = { shape: 'flat' as const, radiusMm: 1.5, heightMm: 1 };
+
+  it('accepts the mid-power cup: a 1 × 1 mm chip on a 1.3 mm floor, 0.8 mm deep, filled flat or with a dome as wide as the rim', () => {
+    expect(packageFitProblems(chip, flatFill, cup)).toEqual([]);
+    expect(packageFitProblems(chip, { shape: 'dome', radiusMm: 1.5, heightMm: 1.5 }, cup)).toEqual([]);
+    expect(packageFitProblems(chip, { shape: 'none', radiusMm: 9, heightMm: 9 }, cup)).toEqual([]);
+  });
+
+  it('a chip wider than the floor or taller than the cup is refused, naming the field and the bound', () => {
+    // half-diagonal of 2 × 2 mm: √2 = 1.41421 mm > 1.3 mm
+    const wide = packageFitProblems({ ...chip, widthMm: 2, lengthMm: 2 }, flatFill, cup);
+    expect(wide).toEqual([
+      { path: 'body.floorRadiusMm', message: "Cup floor radius must be more than the chip's half-diagonal (1.42 mm) so the chip fits on the floor, and at most 1000 mm." }
+    ]);
+    expect(packageFitProblems(chip, flatFill, { ...cup, depthMm: 0.15 })[0]).toEqual({
+      path: 'body.depthMm',
+      message: 'Cup depth must be more than the chip height (0.15 mm) and at most 1000 mm.'
+    });
+  });
+
+  it('a dome wider than the rim, a rim narrower than the floor and a cylinder in a cup are refused', () => {
+    expect(packageFitProblems(chip, { shape: 'dome', radiusMm: 1.6, heightMm: 1 }, cup)[0].path).toBe('encapsulant.radiusMm');
+    expect(packageFitProblems(chip, { shape: 'dome', radiusMm: 1.6, heightMm: 1 }, cup)[0].message).toMatch(/top radius \(1\.5 mm\)/);
+    expect(packageFitProblems(chip, flatFill, { ...cup, topRadiusMm: 1.2 })[0].path).toBe('body.topRadiusMm');
+    expect(packageFitProblems(chip, { ...flatFill, shape: 'cylinder' }, cup)[0].path).toBe('encapsulant.shape');
+    expect(packageFitProblems(chip, flatFill)[0].path).toBe('encapsulant.shape');
+  });
+
+  it('layers must add up to the chip height and the emitter must lie in the emitting layer', () => {
+    const layers = [{ thicknessMm: 0.005 }, { thicknessMm: 0.15 }];
+    const layered = { widthMm: 1, lengthMm: 1, heightMm: 0.155, emitterZMm: 0.0025, layers, emitLayer: 0 };
+    expect(packageFitProblems(layered, flatFill, cup)).toEqual([]);
+    expect(packageFitProblems({ ...layered, heightMm: 0.2 }, flatFill, cup)[0].path).toBe('chip.heightMm');
+    expect(packageFitProblems({ ...layered, emitLayer: 2 }, flatFill, cup)[0]).toEqual({
+      path: 'chip.emitLayer',
+      message: 'Emitting layer must be a layer number from 1 to 2.'
+    });
+    expect(packageFitProblems({ ...layered, emitterZMm: 0.1 }, flatFill, cup)[0]).toEqual({
+      path: 'chip.emitterZMm',
+      message: 'Emitter height must be inside emitting layer 1: between 0 and 0.005 mm.'
+    });
+  });
+
+  it('a diffuse base needs a plain reflectance', () => {
+    expect(packageFitProblems(chip, flatFill, cup, { kind: 'metal', finish: 'diffuse' })[0].path).toBe('baseFinish');
+    expect(packageFitProblems(chip, flatFill, cup, { kind: 'reflectance', finish: 'diffuse' })).toEqual([]);
+  });
+});

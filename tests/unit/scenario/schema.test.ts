@@ -140,3 +140,50 @@ describe('limits', () => {
     expect(checkNumber('Rays', LIMITS.rays, 1000.5)).toBe(rangeMessage('Rays', LIMITS.rays));
   });
 });
+
+describe('parseScenario, version 4 package bodies', () => {
+  const layered = () => {
+    const s = demoScenario();
+    s.chip = {
+      ...s.chip,
+      heightMm: 0.155,
+      emitterZMm: 0.0025,
+      layers: [
+        { name: 'GaN', medium: { kind: 'material', id: 'gan' }, thicknessMm: 0.005, absorptionPerMm: 0.5 },
+        { name: 'sapphire', medium: { kind: 'index', n: 1.78 }, thicknessMm: 0.15, absorptionPerMm: 0 }
+      ],
+      emitLayer: 0
+    };
+    return s;
+  };
+  const first = (x: unknown) => {
+    const r = parseScenario(x);
+    return r.ok ? null : r.issues[0];
+  };
+
+  it('accepts a layered chip with a typed and a library layer', () => {
+    expect(first(layered())).toBeNull();
+  });
+
+  it('names the layer and its range: a layer of zero thickness, an unknown layer material, a repeated name', () => {
+    const thin = layered();
+    thin.chip.layers![1].thicknessMm = 0;
+    expect(first(thin)).toEqual({ path: 'chip.layers.1.thicknessMm', message: 'Chip layer 2 thickness must be between 0.001 and 1000 mm.' });
+    const unknown = layered();
+    unknown.chip.layers![0].medium = { kind: 'material', id: 'unobtainium' };
+    expect(first(unknown)?.message).toBe("Chip layer 1 material 'unobtainium' is not in the material library.");
+    const twice = layered();
+    twice.chip.layers![1].name = 'GaN';
+    expect(first(twice)?.path).toBe('chip.layers.1.name');
+  });
+
+  it('a reflectance of a cup wall or chip mirror outside [0, 1] names the field', () => {
+    const s = demoScenario();
+    s.body = { kind: 'cup', floorRadiusMm: 1.3, topRadiusMm: 1.5, depthMm: 0.8, wallFinish: 'diffuse', wallReflectance: 1.1 };
+    s.encapsulant.shape = 'flat';
+    expect(first(s)?.message).toBe('Cup wall reflectance must be between 0 and 1.');
+    const m = demoScenario();
+    m.chip.mirror = { kind: 'reflectance', reflectance: -0.1 };
+    expect(first(m)?.message).toBe('Chip mirror reflectance must be between 0 and 1.');
+  });
+});

@@ -104,6 +104,14 @@ describe('scenario in the URL', () => {
     }
   });
 
+  it('a link saved at version 3 opens as the same package (flat body, specular base, flat chip top)', () => {
+    const { baseFinish: _f, body: _b, ...v3 } = demoScenario();
+    const { topTexture: _t, ...chip } = v3.chip;
+    const d = decodeScenarioParam(`3.${b64url(JSON.stringify({ ...v3, version: 3, chip }))}`);
+    expect(d.fromLink).toBe(true);
+    expect(d.scenario).toEqual(DEMO_SCENARIO);
+  });
+
   it('an invalid scenario names the field and range in the message', () => {
     const bad = { ...demoScenario(), chip: { ...demoScenario().chip, widthMm: -1 } };
     const d = decodeScenarioParam(`1.${b64url(JSON.stringify(bad))}`);

@@ -68,7 +68,7 @@ describe('runSweep(plan, trace, options)', () => {
   });
 
   it('reproduces 0.5·(1 − 0.04) = 0.48 for a point source at the centre of a 1.5 hemisphere on an absorbing base', async () => {
-    // An exact result the Monte Carlo must reproduce (closed form: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5). The emitter sits 0.1 µm above the base, 1.4e-4 of R
+    // An exact result the Monte Carlo must reproduce (closed form: Schubert, Light-Emitting Diodes, 2nd ed., ch. 5). The emitter sits 0.5 µm above the base, 7.1e-4 of R
     // or less, which shifts the value by < 1e-4 — far below σ ≈ 0.0035 at 20 000 rays. k = 4 standard errors.
     const plan = planRadiusSweep(pointSourcePackage(0), [1000, 5000]);
     const run = await runSweep(plan, syncTracer, { rays: 20_000, seed: 7 });

@@ -26,7 +26,7 @@ describe('validateTracePackage(pkg)', () => {
   });
 
   it.each([
-    ['chip.widthMm', 0, /chip\.widthMm must be a number in \[0\.000001, 1000\]/],
+    ['chip.widthMm', 0, /chip\.widthMm must be a number in \[0\.001, 1000\]/],
     ['chip.heightMm', Number.NaN, /chip\.heightMm must be a number in/],
     ['chip.n', 0.5, /chip\.n must be a number in \[1, 6\]/],
     ['chip.absorptionPerMm', -1, /chip\.absorptionPerMm must be a number in \[0, 1000\]/],
@@ -115,7 +115,7 @@ describe('validateTracePackage(pkg): bodies, layers, mirror, texture', () => {
     ['a chip wider than the cup floor', { body: { ...cupBody, floorRadiusMm: 0.6 } }, /body\.floorRadiusMm must be greater than the chip's half-diagonal 0\.707107 mm/],
     ['a chip taller than the cup', { body: { ...cupBody, depthMm: 0.1 } }, /body\.depthMm must be greater than chip\.heightMm = 0\.15 mm/],
     ['a top narrower than the floor', { body: { ...cupBody, topRadiusMm: 1 } }, /body\.topRadiusMm must be a number in \[1\.3, 1000\]/],
-    ['a dome wider than the rim', { body: { ...cupBody, fill: 'dome' }, encapsulant: { ...domePackage().encapsulant, radiusMm: 2 } }, /encapsulant\.radiusMm \(dome on the cup rim, at most body\.topRadiusMm\) must be a number in \[0\.000001, 1\.5\]/],
+    ['a dome wider than the rim', { body: { ...cupBody, fill: 'dome' }, encapsulant: { ...domePackage().encapsulant, radiusMm: 2 } }, /encapsulant\.radiusMm \(dome on the cup rim, at most body\.topRadiusMm\) must be a number in \[0\.001, 1\.5\]/],
     ['a wall reflectance above 1', { body: { ...cupBody, wallReflectance: 1.2 } }, /body\.wallReflectance must be a number in \[0, 1\]/],
     ['a texture fraction above 1', { chip: { ...domePackage().chip, topScatter: 1.5 } }, /chip\.topScatter must be a number in \[0, 1\]/],
     ['a layer of zero thickness', { chip: { ...layered, layers: [{ ...layered.layers[0], thicknessMm: 0 }, layered.layers[1]] } }, /chip\.layers\[0\]\.thicknessMm must be a number in/],

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { decimalText, roundDecimals, roundSignificant, roundWithSigma } from '../../../src/lib/variants/precision';
+import { roundSignificant } from '../../../src/lib/export/number-text';
+import { decimalText, roundDecimals, roundWithSigma } from '../../../src/lib/variants/precision';
 
 describe('numbers at the precision they carry', () => {
   it('roundWithSigma: σ to two significant digits, the value to the same decimal (JCGM 100:2008 §7.2.6)', () => {

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { loadSaved } from '../../../src/lib/scenario/saved-item';
 import { demoScenario } from '../../../src/lib/scenario/defaults';
+import { SCENARIO_VERSION } from '../../../src/lib/scenario/schema';
 import { MAX_VARIANTS, readVariants, VARIANTS_STORAGE_KEY } from '../../../src/lib/variants/variants-doc';
 import { twoVariants } from './fixtures';
 
@@ -38,7 +39,7 @@ describe('readVariants', () => {
     const r = readVariants({ version: 1, variants: [{ name: 'A', scenario: v0 }] });
     expect(r.ok).toBe(true);
     if (r.ok) {
-      expect(r.value.variants[0].scenario.version).toBe(3);
+      expect(r.value.variants[0].scenario.version).toBe(SCENARIO_VERSION);
       expect(r.value.variants[0].scenario.encapsulant.medium).toEqual({ kind: 'material', id: 'silicone-phenyl' });
     }
   });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { fmtDeg, fmtIndex, fmtNumber, fmtPercent, fmtPlain, fmtPoints, fmtUnit, missing, plainName } from '../../../src/lib/components/format';
+import { fmtDeg, fmtIndex, fmtNumber, fmtPercent, fmtPercentPlain, fmtPlain, fmtPoints, fmtUnit, missing, plainName } from '../../../src/lib/format/format';
 
 describe('fmtNumber', () => {
   it.each([
@@ -52,6 +52,17 @@ describe('fmtPercent, fmtDeg, fmtUnit, fmtIndex, fmtPlain', () => {
   ])('fmtPercent(%s) is "%s": no power of ten for a tiny share', (x, text) => {
     expect(fmtPercent(x)).toBe(text);
     expect(fmtPercent(x)).not.toMatch(/10⁻|e-/);
+  });
+
+  it.each([
+    [0.85, '85 %'],
+    [0.38637, '38.6 %'],
+    [-0.05, '-5 %'],
+    [1.6e-9, '< 0.001 %'],
+    [0, '0 %'],
+    [NaN, '— (not defined)']
+  ])('fmtPercentPlain(%s) is "%s": no trailing zeros, the same floor as fmtPercent', (x, text) => {
+    expect(fmtPercentPlain(x)).toBe(text);
   });
 
   it('fmtPoints names a difference in percentage points, singular for exactly one', () => {

@@ -52,6 +52,18 @@ export function fmtPercent(fraction: number, digits = 4, reason = 'not defined')
 }
 
 /**
+ * A fraction as a percentage without trailing zeros, at most `digits` significant digits, for sentences
+ * that echo a stated value beside computed ones: 0.85 → "85 %", 0.3864 → "38.6 %". The same floor as
+ * {@link fmtPercent}: 1.6e-9 → "< 0.001 %", never a power of ten below it.
+ */
+export function fmtPercentPlain(fraction: number, digits = 3, reason = 'not defined'): string {
+  if (typeof fraction !== 'number' || !Number.isFinite(fraction)) return missing(reason);
+  const pct = fraction * 100;
+  if (pct !== 0 && Math.abs(pct) < SMALLEST_PERCENT) return fmtPercent(fraction, digits);
+  return `${fmtPlain(pct, digits)} %`;
+}
+
+/**
  * A difference of two fractions in percentage points, `digits` significant digits, the same floor as
  * {@link fmtPercent}: 0.311 → "31.1 percentage points", 0.01 → "1.00 percentage point",
  * 1.6e-9 → "< 0.001 percentage points".
