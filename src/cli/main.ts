@@ -8,15 +8,16 @@ import * as claim from './commands/claim';
 import * as variants from './commands/variants';
 import * as color from './commands/color';
 import * as mie from './commands/mie';
+import * as phosphorLoad from './commands/phosphor-load';
 import * as compare from './commands/compare';
 
 type Command = { summary: string; help: string; run: (argv: string[]) => Promise<void> | void };
 
-const commands: Record<string, Command> = { escape, stack, dome, material, trace, claim, compare, variants, color, mie };
+const commands: Record<string, Command> = { escape, stack, dome, material, trace, claim, compare, variants, color, mie, 'phosphor-load': phosphorLoad };
 
 function usage(): string {
   const lines = ['outcouple — LED package light extraction from the command line', '', 'Commands:'];
-  for (const [name, command] of Object.entries(commands)) lines.push(`  ${name.padEnd(9)} ${command.summary}`);
+  for (const [name, command] of Object.entries(commands)) lines.push(`  ${name.padEnd(13)} ${command.summary}`);
   lines.push('', "Add --json for one JSON object. 'outcouple <command> --help' lists a command's options.");
   return lines.join('\n');
 }

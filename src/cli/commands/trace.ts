@@ -4,12 +4,14 @@ import { packageScene } from '../../lib/trace/package-scene';
 import { partShares } from '../../lib/trace/part-shares';
 import { traceSync } from '../../lib/trace/trace';
 import { defaultThreads, traceParallel, MAX_THREADS } from '../../lib/trace/node/node-pool';
-import { LIMITS, toTracePackage } from '../../lib/scenario';
+import { LIMITS, phosphorSettingOf, toWhitePackage } from '../../lib/scenario';
 import { farFieldCsv, packageOpening, traceIes } from '../../lib/export';
 import { CliError } from '../cli-error';
 import { integerOption, numberOption, parseOptions, stringOption, truncate, type OptionSpec } from '../options';
 import { emit, percent, type Row } from '../output';
 import { SCENARIO_OPTION_HELP, SCENARIO_OPTIONS, scenarioFromOptions } from '../scenario-options';
+import { PHOSPHOR_OPTION_HELP, PHOSPHOR_OPTIONS, phosphorFromOptions } from '../phosphor-options';
+import { phosphorSummary, type PhosphorSummary } from '../../lib/trace/phosphor-summary';
 
 export const summary = 'Monte Carlo ray trace of an LED package: extraction, loss ledger, far field; IES LM-63 export';
 export const help = `outcouple trace — Monte Carlo ray trace of a package (units mm, z up, base plane z = 0)
@@ -17,9 +19,10 @@ export const help = `outcouple trace — Monte Carlo ray trace of a package (uni
 With no options it traces the app's demo scenario, with the same rays and seed as the page.
 
 ${SCENARIO_OPTION_HELP}
+${PHOSPHOR_OPTION_HELP}
 Run
   --threads T                         1 to ${MAX_THREADS} (default: all cores; any count gives the same ledger)
-  --max-events E                      events before a ray counts as lost, ${LIMITS.maxEvents.min} to ${LIMITS.maxEvents.max} (default 1000)
+  --max-events E                      events before a ray counts as lost, ${LIMITS.maxEvents.min} to ${LIMITS.maxEvents.max} (default 1000; 10000 with a phosphor)
 Output
   --ies FILE --lumens L               write the far field as an IES LM-63-2019 file scaled to L lm
   --csv FILE                          write the far field as CSV (with --lumens: candela too)
@@ -29,6 +32,7 @@ Example: outcouple trace --chip 1x1x0.15 --enc-material silicone-phenyl --rays 1
 
 const options: OptionSpec = {
   ...SCENARIO_OPTIONS,
+  ...PHOSPHOR_OPTIONS,
   threads: { type: 'string' }, 'max-events': { type: 'string' }, ies: { type: 'string' }, lumens: { type: 'string' },
   csv: { type: 'string' }, json: { type: 'boolean' }
 };
@@ -45,11 +49,13 @@ export async function run(argv: string[]): Promise<void> {
   const { values, positionals } = parseOptions(argv, options, 'trace');
   if (positionals.length) throw new CliError(`trace: unexpected argument '${truncate(positionals[0])}'`);
   const { scenario, resolved } = scenarioFromOptions(values);
-  const pkg = toTracePackage(scenario, resolved);
+  // Phosphor options win over the scenario's phosphor block
+  const setting = phosphorFromOptions(values) ?? phosphorSettingOf(scenario);
+  const pkg = toWhitePackage(scenario, resolved, setting);
   const { rays, seed } = scenario.trace;
   const name = scenario.name;
   const threads = integerOption(values, 'threads', 1, MAX_THREADS, defaultThreads());
-  const maxEvents = integerOption(values, 'max-events', LIMITS.maxEvents.min, LIMITS.maxEvents.max, 1000);
+  const maxEvents = integerOption(values, 'max-events', LIMITS.maxEvents.min, LIMITS.maxEvents.max, setting ? 10000 : 1000);
   const iesPath = stringOption(values, 'ies');
   const csvPath = stringOption(values, 'csv');
   const lumensGiven = values.lumens !== undefined;
@@ -80,6 +86,8 @@ export async function run(argv: string[]): Promise<void> {
     }
   }
 
+  const white = phosphorSummary(tally);
+  if (white) notes.push(...whiteNotes(white));
   const scene = packageScene(pkg);
   const shares = partShares(s, scene);
   const result = {
@@ -89,6 +97,7 @@ export async function run(argv: string[]): Promise<void> {
     eventsPerRay: s.eventsPerRay,
     geometryErrors: s.geometryErrors, raysPerSecond: rays / seconds, seconds,
     farField: { beamAngleDeg: s.farField.beamAngleDeg, beamAngleNote: s.farField.beamAngleNote, onAxisVsLambertian: s.farField.onAxisVsLambertian, bins: s.farField.bins },
+    ...(white ? whiteJson(white, s.ledger) : {}),
     notes
   };
   const rows: Row[] = [
@@ -107,5 +116,47 @@ export async function run(argv: string[]): Promise<void> {
     ['events per ray', s.eventsPerRay.toFixed(2)], ['rays', rays], ['threads', threads],
     ['speed', (rays / seconds / 1e6).toFixed(2), 'million rays/s']
   ];
+  if (white) rows.push(...whiteRows(white));
   emit(values.json === true, result, 'Package ray trace', rows, notes);
+}
+
+/** The white-light part of the JSON: ledger.phosphor, photon fractions, energy efficiency, colour, spectrum, colour over angle. */
+function whiteJson(w: PhosphorSummary, ledger: Record<string, number>) {
+  const c = w.color;
+  return {
+    ledger: { ...ledger, phosphor: w.phosphorHeat },
+    escapedBlue: w.escapedBlue,
+    escapedConverted: w.escapedConverted,
+    energyEfficiency: w.energyEfficiency,
+    stokes: { meanChipNm: w.meanChipNm, meanEscapedNm: w.meanEscapedNm },
+    color: c && {
+      x: c.x, y: c.y, uPrime: c.uPrime, vPrime: c.vPrime, cctK: c.cctK, duv: c.duv, ra: c.ra, r9: c.r9, lerLmPerW: c.lerLmPerW,
+      sigma: c.sigma, warnings: c.warnings
+    },
+    spectrum: w.spectrum,
+    colorOverAngle: { bins: w.colorOverAngle, deltaUvPrime: w.deltaUvPrime },
+    scatterEventsPerRay: w.scatterEventsPerRay,
+    conversionsPerRay: w.conversionsPerRay
+  };
+}
+
+function whiteNotes(w: PhosphorSummary): string[] {
+  const notes = ['refractive indices are taken at the design wavelength for every ray (no per-ray dispersion yet)'];
+  if (w.color) notes.push(...w.color.warnings);
+  notes.push('caution: a white LED still emits intense blue; do not stare into it, and mind the phosphor heat in a real package');
+  return notes;
+}
+
+function whiteRows(w: PhosphorSummary): Row[] {
+  const c = w.color;
+  const f = (v: number | null, d: number, sigma?: number | null) => (v === null ? '—' : sigma ? `${v.toFixed(d)} ± ${sigma.toFixed(d)}` : v.toFixed(d));
+  return [
+    ['absorbed by the phosphor (heat)', percent(w.phosphorHeat, 2)],
+    ['escaped blue (not converted)', percent(w.escapedBlue, 2)], ['escaped converted', percent(w.escapedConverted, 2)],
+    ['energy efficiency (W out / W of chip light)', percent(w.energyEfficiency, 2)],
+    ['chromaticity x, y', c ? `${f(c.x, 4, c.sigma.x)}, ${f(c.y, 4, c.sigma.y)}` : '—'],
+    ['CCT', c ? f(c.cctK, 0, c.sigma.cctK) : '—', 'K'], ['Duv', c ? f(c.duv, 4, c.sigma.duv) : '—'],
+    ['Ra, R9', c ? `${f(c.ra, 1)}, ${f(c.r9, 1)}` : '—'], ['luminous efficacy of radiation', c ? c.lerLmPerW.toFixed(0) : '—', 'lm/W'],
+    ['Δu′v′ over angle', f(w.deltaUvPrime, 4)], ['scatter events per ray', w.scatterEventsPerRay.toFixed(2)]
+  ];
 }

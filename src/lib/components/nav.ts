@@ -23,6 +23,11 @@ export const NAV_PAGES: readonly NavPage[] = [
     label: 'Dome',
     blurb: 'Gain from a dome encapsulant, the dome size that traps no light, and the package ray trace.'
   },
+  {
+    path: '/white',
+    label: 'White light',
+    blurb: 'A phosphor in the encapsulant: colour, CCT, colour rendering, efficiency, and the load for a target CCT.'
+  },
   { path: '/materials', label: 'Materials', blurb: 'The refractive index library, with sources and valid ranges.' },
   {
     path: '/variants',

@@ -67,7 +67,19 @@ export const LIMITS = {
   /** A claimed gain of an encapsulant over the bare chip, a factor (minimum exclusive). */
   claimGain: { min: 0, max: 100, unit: '×' },
   /** A claimed change of extraction from a flat coating, percent (−100 % is all light lost: minimum exclusive). */
-  claimCoatingPercent: { min: -100, max: 10000, unit: '%' }
+  claimCoatingPercent: { min: -100, max: 10000, unit: '%' },
+  /** Phosphor weight in the phosphor–host mixture (independent scattering is a dilute-cloud model; above ~60 wt% it fails). */
+  phosphorWeightPercent: { min: 0, max: 60, unit: 'wt%' },
+  /** Phosphor particle diameter (d50): the Mie evaluation's supported range. */
+  phosphorDiameterUm: { min: 0.05, max: 50, unit: 'µm' },
+  /** Phosphor layer thickness (conformal, remote, floor layers). */
+  phosphorThicknessMm: { min: 0.005, max: 10, unit: 'mm' },
+  /** Quantum yield: re-emitted photons per absorbed photon. */
+  quantumYield: { min: 0, max: 1, unit: '' },
+  /** Target correlated colour temperature of a load search. */
+  targetCctK: { min: 2000, max: 10000, unit: 'K' },
+  /** Peak and FWHM of a Gaussian phosphor emission given on the command line (FWHM down to 0.1 nm for line-like tests). */
+  phosphorEmissionFwhmNm: { min: 0.1, max: 500, unit: 'nm' }
 } as const satisfies Record<string, NumberLimit>;
 
 export type LimitName = keyof typeof LIMITS;

@@ -5,6 +5,7 @@
  * package is the flat body with a specular base and a flat-topped single-box chip standing on the base,
  * which is what the new fields say when they are added as { kind: 'flat' }, 'specular' and a top
  * texture of 0 (no layers, no chip mirror): the tracer builds the same scene and every number stays.
+ * An optional `phosphor` block came with version 4 too; a version-3 scenario has none (a clear encapsulant).
  *
  * Version 2 → 3: a typed encapsulant index loses its k. Every computation already took the
  * encapsulant's loss from its absorption per mm and ignored that k (the tracer and the closed form use

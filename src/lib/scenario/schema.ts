@@ -204,6 +204,20 @@ const encapsulantSchema = z
   }, objectMessages('Encapsulant'))
   .strict();
 
+/** Traced phosphor regions (the scenario keeps only what the tracer can trace). */
+export const SCENARIO_PHOSPHOR_REGIONS = ['encapsulant'] as const;
+
+/** An optional phosphor (version 4): a library phosphor dispersed in a region at a load. */
+const phosphorSchema = z
+  .object({
+    id: z.string({ error: 'Phosphor must be a library phosphor id.' }).regex(MATERIAL_ID_PATTERN, { error: 'Phosphor must be a library phosphor id (lower-case letters, digits, dashes).' }),
+    region: z.enum(SCENARIO_PHOSPHOR_REGIONS, { error: `Phosphor region must be one of: ${SCENARIO_PHOSPHOR_REGIONS.join(', ')}.` }),
+    weightPercent: num('Phosphor load', LIMITS.phosphorWeightPercent),
+    diameterUm: num('Phosphor particle diameter', LIMITS.phosphorDiameterUm),
+    quantumYield: num('Quantum yield', LIMITS.quantumYield)
+  }, objectMessages('Phosphor'))
+  .strict();
+
 const traceSchema = z
   .object({
     rays: num('Rays', LIMITS.rays),
@@ -229,7 +243,8 @@ const objectSchema = z
     body: bodySchema,
     encapsulant: encapsulantSchema,
     outside: medium('Outside medium'),
-    trace: traceSchema
+    trace: traceSchema,
+    phosphor: phosphorSchema.optional()
   }, objectMessages('Scenario'))
   .strict();
 

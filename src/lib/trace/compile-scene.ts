@@ -54,7 +54,13 @@ import {
   S_TIR_BEHIND,
   S_TIR_FRONT
 } from './scene-layout';
-import type { LegacyEscape, SceneDescription, SceneSurface, Shape } from './scene';
+import { buildSpectralTables, type SpectralTables } from './phosphor-tables';
+import type { LegacyEscape, ScenePhosphor, SceneDescription, SceneSurface, Shape } from './scene';
+
+/** Emitter direction kinds (SceneEmitter.direction). */
+export const EMIT_ISOTROPIC = 0;
+export const EMIT_DOWN = 1;
+export const EMIT_LAMBERTIAN_DOWN = 2;
 
 /** Which count of the older fixed ledger (Tally fields) a bin also adds to. */
 export type LedgerGroup = 'escaped' | 'absorbedChip' | 'absorbedEncapsulant' | 'absorbedBase' | 'lost';
@@ -70,7 +76,13 @@ export interface CompiledScene {
   emitterMedium: number;
   emitterVolume: boolean;
   emitterZ: number;
+  /** EMIT_ISOTROPIC, EMIT_DOWN or EMIT_LAMBERTIAN_DOWN. */
+  emitterDirection: number;
   track: boolean;
+  /** Spectral rays and phosphor tables when some medium holds a phosphor; null otherwise (no wavelength is drawn). */
+  spectral: SpectralTables | null;
+  /** Ledger bin of each phosphor's heat (absorbed, not re-emitted), by phosphor index. */
+  phosphorBins: number[];
   /** True when some medium absorbs (each ray then draws an optical depth). */
   absorbing: boolean;
   binNames: string[];
@@ -158,6 +170,8 @@ export function compileScene(scene: SceneDescription): CompiledScene {
   const nm = scene.media.length;
   const media = new Float64Array(nm * MEDIUM_STRIDE);
   let absorbing = false;
+  const phosphors: ScenePhosphor[] = [];
+  const phosphorBins: number[] = [];
   scene.media.forEach((m, i) => {
     const o = i * MEDIUM_STRIDE;
     media[o + M_INDEX] = m.n;
@@ -165,6 +179,11 @@ export function compileScene(scene: SceneDescription): CompiledScene {
     media[o + M_SCATTERING] = 0;
     media[o + M_ASYMMETRY] = 0;
     media[o + M_PHOSPHOR] = NONE;
+    if (m.phosphor && i !== outside) {
+      media[o + M_PHOSPHOR] = phosphors.length;
+      phosphors.push(m.phosphor);
+      phosphorBins.push(binOf(`phosphor:${m.name}`, 'absorbedEncapsulant'));
+    }
     media[o + M_IS_CHIP] = m.role === 'chip' ? 1 : 0;
     if (i !== outside && m.absorptionPerMm > 0) {
       absorbing = true;
@@ -253,6 +272,8 @@ export function compileScene(scene: SceneDescription): CompiledScene {
 
   const emitterMedium = mediumOf(scene.emitter.medium, 'emitter');
   if (!scene.media[emitterMedium].box) throw new Error(`scene: the emitter's medium '${scene.emitter.medium}' must be a box`);
+  if (phosphors.length && !scene.chipSpectrum) throw new Error('scene: a phosphor medium needs the chip spectrum');
+  const direction = scene.emitter.direction ?? 'isotropic';
   return {
     media,
     surfaces,
@@ -261,6 +282,9 @@ export function compileScene(scene: SceneDescription): CompiledScene {
     emitterMedium,
     emitterVolume: scene.emitter.mode === 'volume',
     emitterZ: scene.emitter.z,
+    emitterDirection: direction === 'down' ? EMIT_DOWN : direction === 'lambertian-down' ? EMIT_LAMBERTIAN_DOWN : EMIT_ISOTROPIC,
+    spectral: phosphors.length && scene.chipSpectrum ? buildSpectralTables(scene.chipSpectrum, phosphors) : null,
+    phosphorBins,
     track: scene.polarization === 'track',
     absorbing,
     binNames,

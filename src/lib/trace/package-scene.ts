@@ -44,7 +44,13 @@ export function packageScene(pkg: TracePackage): SceneDescription {
   });
   const media: SceneMedium[] = [...chip.media];
   const surfaces: SceneSurface[] = [...chip.surfaces];
-  if (!bare) media.push({ name: ENCAPSULANT, role: 'encapsulant', n: enc.n, absorptionPerMm: enc.absorptionPerMm });
+  const ph = pkg.phosphor;
+  if (!bare) {
+    media.push({
+      name: ENCAPSULANT, role: 'encapsulant', n: enc.n, absorptionPerMm: enc.absorptionPerMm,
+      ...(ph ? { phosphor: { coefficients: ph.coefficients, emission: ph.emission, quantumYield: ph.quantumYield } } : {})
+    });
+  }
   if (cup) {
     surfaces.push(
       ...cupSurfaces({
@@ -104,6 +110,7 @@ export function packageScene(pkg: TracePackage): SceneDescription {
     surfaces,
     outside: OUTSIDE,
     emitter: { medium: layers[pkg.chip.emitLayer ?? 0].name, mode: pkg.chip.emission, z: emitterHeightMm(pkg.chip) },
-    polarization: pkg.polarization
+    polarization: pkg.polarization,
+    ...(ph ? { chipSpectrum: ph.chipSpectrum } : {})
   };
 }

@@ -7,6 +7,7 @@
  */
 import { LIMITS } from '../scenario/limits';
 import { packageFitProblems } from '../scenario/package-fit';
+import { validateTracePhosphor, type TracePhosphor } from './package-phosphor';
 
 /** Where rays start inside the chip. */
 export type EmissionMode = 'plane' | 'volume';
@@ -105,6 +106,8 @@ export interface TracePackage {
   baseFinish?: SurfaceFinish;
   /** Default { kind: 'flat' }. */
   body?: TraceBody;
+  /** A phosphor (package-phosphor.ts): rays then carry their wavelength. Needs an encapsulant. */
+  phosphor?: TracePhosphor;
 }
 
 export interface TraceOptions {
@@ -229,6 +232,11 @@ export function validateTracePackage(p: TracePackage): void {
 
   requireObject('encapsulant', p.encapsulant);
   const enc = p.encapsulant;
+  if (p.phosphor !== undefined) {
+    validateTracePhosphor(p.phosphor);
+    const bare = p.body?.kind === 'cup' ? p.body.fill === 'none' : enc.shape === 'none';
+    if (bare) throw new RangeError("phosphor.region 'encapsulant' needs an encapsulant (the package has none)");
+  }
   if (p.body !== undefined) {
     requireObject('body', p.body);
     requireChoice('body.kind', p.body.kind, ['flat', 'cup']);

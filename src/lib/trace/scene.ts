@@ -103,6 +103,21 @@ export interface SceneMedium {
    * slab method instead of testing each surface.
    */
   box?: { a: number; b: number; z0: number; z1: number; faces: [string, string, string, string, string, string] };
+  /** Phosphor particles dispersed in this medium: scattering, absorption and conversion (medium-events.ts). */
+  phosphor?: ScenePhosphor;
+}
+
+/**
+ * A phosphor as a medium property, per wavelength. Rows sorted by wavelength; linear between rows,
+ * the first and last rows held beyond the ends.
+ */
+export interface ScenePhosphor {
+  /** [wavelength nm, μs 1/mm, μa 1/mm, Henyey–Greenstein g]. */
+  coefficients: [number, number, number, number][];
+  /** Emission spectrum [wavelength nm, power per nm] (any scale). */
+  emission: [number, number][];
+  /** Probability that an absorbed photon is re-emitted, [0, 1]. */
+  quantumYield: number;
 }
 
 /** Which summary count of the older fixed ledger an escape through this surface also adds to. */
@@ -129,6 +144,11 @@ export interface SceneEmitter {
   medium: string;
   /** 'plane': uniform over the box's footprint at height z; 'volume': uniform in the box. */
   mode: 'plane' | 'volume';
+  /**
+   * Directions: 'isotropic' (default); 'down': a collimated beam along −z; 'lambertian-down': a
+   * diffuse (cosine-weighted) beam into the lower half space — the two incidences of slab references.
+   */
+  direction?: 'isotropic' | 'down' | 'lambertian-down';
   /** Emitting plane height, mm (used in 'plane' mode). */
   z: number;
 }
@@ -141,4 +161,9 @@ export interface SceneDescription {
   emitter: SceneEmitter;
   /** 'average': reflect with probability (Rs + Rp)/2; 'track': carry each ray's field. */
   polarization: 'average' | 'track';
+  /**
+   * The chip's emission [wavelength nm, power per nm] (one row: a line). Needed when a medium holds a
+   * phosphor: rays then carry their wavelength (spectral rays); absent otherwise.
+   */
+  chipSpectrum?: [number, number][];
 }

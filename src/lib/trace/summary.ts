@@ -19,6 +19,7 @@
  * Sources: Lambertian I(θ) = I0 cos θ with Φ = π I0 and FWHM 120° (common practice); solid angle of a
  * polar zone 2π (cos θ1 − cos θ2) (common practice).
  */
+import { phosphorSummary, type PhosphorSummary } from './phosphor-summary';
 import { POLAR_BINS, type Tally } from './tally';
 
 export interface FarFieldBin {
@@ -32,8 +33,8 @@ export interface FarFieldBin {
 export interface LedgerPart {
   /** The bin's full name, e.g. 'escaped:dome', 'medium:chip', 'surface:base', 'lost:event cap'. */
   bin: string;
-  /** What happened there: escaped through a surface, absorbed in a medium or at a surface, or lost. */
-  kind: 'escaped' | 'medium' | 'surface' | 'lost';
+  /** What happened there: escaped through a surface, absorbed in a medium or at a surface, turned to heat by a phosphor in a medium, or lost. */
+  kind: 'escaped' | 'medium' | 'surface' | 'lost' | 'phosphor';
   /** The surface, medium or reason named by the bin. */
   part: string;
   count: number;
@@ -43,6 +44,8 @@ export interface LedgerPart {
 
 export interface TraceSummary {
   rays: number;
+  /** White-light figures (phosphor-summary.ts); present only when the package holds a phosphor. */
+  white?: PhosphorSummary;
   /** Escaped / launched. */
   extraction: number;
   /** Binomial standard error of the extraction, √(p(1 − p)/N). */
@@ -158,7 +161,7 @@ function farField(histogram: Float64Array, escaped: number): TraceSummary['farFi
   return { beamAngleDeg: Math.min(180, 2 * halfMaxDeg), beamAngleNote: null, onAxisVsLambertian, bins };
 }
 
-const PART_KINDS: readonly LedgerPart['kind'][] = ['escaped', 'medium', 'surface', 'lost'];
+const PART_KINDS: readonly LedgerPart['kind'][] = ['escaped', 'medium', 'surface', 'lost', 'phosphor'];
 
 /** The named ledger of a tally, with fractions of `launched`. */
 function ledgerParts(parts: Record<string, number>, inv: number): LedgerPart[] {
@@ -176,7 +179,9 @@ export function summarize(tally: Tally): TraceSummary {
   const inv = N > 0 ? 1 / N : 0;
   const p = tally.escaped * inv;
   const trapped = tally.lost - tally.geometryErrors;
+  const white = phosphorSummary(tally);
   return {
+    ...(white ? { white } : {}),
     rays: N,
     extraction: p,
     // binomial standard error √(p(1 − p)/N)

@@ -10,6 +10,7 @@
  * fields group the named bins: absorbedChip holds every chip layer, absorbedEncapsulant every other
  * medium, absorbedBase every absorbing surface (base, floor, wall, chip mirror).
  */
+import { createSpectralTally, mergeSpectralTally, type SpectralTally } from './spectral-tally';
 
 /** Number of polar-angle bins of the escape histogram: 1° wide, covering 0..180°. */
 export const POLAR_BINS = 180;
@@ -51,6 +52,8 @@ export interface Tally {
   parts: Record<string, number>;
   /** Escaped rays per 1° polar-angle bin: bin i holds θ in [i°, (i+1)°), θ measured from +z. */
   polarHistogram: Float64Array;
+  /** Spectral rays' tallies (spectral-tally.ts); present only when the scene holds a phosphor. */
+  spectral?: SpectralTally;
 }
 
 /** A fresh all-zero tally. */
@@ -99,5 +102,6 @@ export function mergeTally(into: Tally, from: Tally): Tally {
   const bins = into.polarHistogram;
   const add = from.polarHistogram;
   for (let i = 0; i < POLAR_BINS; i++) bins[i] += add[i];
+  if (from.spectral) mergeSpectralTally((into.spectral ??= createSpectralTally()), from.spectral);
   return into;
 }

@@ -46,7 +46,9 @@
 import { fresnelRealAt, MIRROR_AMPLITUDES_LENGTH, mirrorAmplitudesAt } from '../optics/fresnel';
 import { reflectDirection, refractDirectionAt } from '../optics/snell';
 import { boxExit } from './box-exit';
-import { compileScene, type CompiledScene } from './compile-scene';
+import { compileScene, EMIT_DOWN, EMIT_ISOTROPIC, type CompiledScene } from './compile-scene';
+import { configureSpectral, ENDED, isPhosphorMedium, launchWavelength, phosphorFlight, REDIRECTED, spectralEscape } from './medium-events';
+import { createSpectralTally } from './spectral-tally';
 import { lambertianDirection } from './lambertian';
 import { DEFAULT_MAX_EVENTS, type TracePackage } from './package-spec';
 import { packageScene } from './package-scene';
@@ -136,6 +138,10 @@ let emitterMedium = 0;
 let volumeEmission = false;
 let absorbing = false;
 let track = false;
+// Spectral rays (a phosphor in the scene: medium-events.ts) and the emitter's direction kind
+let spectral = false;
+let emitterDirection = EMIT_ISOTROPIC;
+const downAxis = new Float64Array([0, 0, -1]);
 // The emitting plane's height, mm (an array, so the double is not boxed)
 const emitterZ = new Float64Array(1);
 
@@ -143,7 +149,7 @@ const emitterZ = new Float64Array(1);
 let medium = 0;
 let lastSurface = NONE;
 
-function configure(scene: CompiledScene): void {
+function configure(scene: CompiledScene, tally?: Tally): void {
   media = scene.media;
   surfaces = scene.surfaces;
   bounds = scene.bounds;
@@ -157,6 +163,8 @@ function configure(scene: CompiledScene): void {
   volumeEmission = scene.emitterVolume;
   absorbing = scene.absorbing;
   track = scene.track;
+  emitterDirection = scene.emitterDirection;
+  spectral = scene.spectral !== null && configureSpectral(scene, tally ? (tally.spectral ??= createSpectralTally()) : createSpectralTally());
 }
 
 /** Starts a ray in the emitting medium: position, isotropic direction, polarisation, optical depth. */
@@ -175,19 +183,28 @@ function launch(): void {
   }
   // Isotropic direction without trigonometry (Marsaglia 1972): (u, v) uniform in the unit disc,
   // s = u² + v²; then (2u√(1 − s), 2v√(1 − s), 1 − 2s) is uniform on the sphere
-  let a = 0;
-  let b = 0;
-  let s = 1;
-  while (s >= 1) {
+  if (emitterDirection === EMIT_ISOTROPIC) {
+    let a = 0;
+    let b = 0;
+    let s = 1;
+    while (s >= 1) {
+      uniformsInto(u, 2);
+      a = 2 * u[0] - 1;
+      b = 2 * u[1] - 1;
+      s = a * a + b * b;
+    }
+    const k = 2 * Math.sqrt(1 - s);
+    ray[3] = k * a;
+    ray[4] = k * b;
+    ray[5] = 1 - 2 * s;
+  } else if (emitterDirection === EMIT_DOWN) {
+    ray[3] = 0;
+    ray[4] = 0;
+    ray[5] = -1;
+  } else {
     uniformsInto(u, 2);
-    a = 2 * u[0] - 1;
-    b = 2 * u[1] - 1;
-    s = a * a + b * b;
+    lambertianDirection(direction, downAxis, u);
   }
-  const k = 2 * Math.sqrt(1 - s);
-  ray[3] = k * a;
-  ray[4] = k * b;
-  ray[5] = 1 - 2 * s;
   if (track) {
     uniformsInto(trackArgs, 1);
     launchPolarization(direction, trackArgs);
@@ -441,6 +458,7 @@ function escape(histogram: Float64Array): void {
   }
   bins[bin]++;
   histogram[polarBin()]++;
+  if (spectral) spectralEscape(ray[5]);
   if (ray[5] < 0) counters[COUNTER_ESCAPED_BELOW]++;
 }
 
@@ -452,6 +470,7 @@ function runRays(rays: number, maxEvents: number, histogram: Float64Array, onPro
   for (let i = 0; i < rays; i++) {
     if (onProgress !== undefined && i > 0 && i % PROGRESS_EVERY === 0) onProgress(i);
     launch();
+    if (spectral) launchWavelength(i);
     let rayEvents = 0;
     for (;;) {
       const entry = nearestBoundary();
@@ -470,7 +489,15 @@ function runRays(rays: number, maxEvents: number, histogram: Float64Array, onPro
         bins[BIN_GEOMETRY_ERROR]++;
         break;
       }
-      if (!flight()) break;
+      // A phosphor medium: particles met on the way (medium-events.ts)
+      if (spectral && isPhosphorMedium(media, medium * MEDIUM_STRIDE)) {
+        const outcome = phosphorFlight(ray, hit, media, medium * MEDIUM_STRIDE, bins);
+        if (outcome === ENDED) break;
+        if (outcome === REDIRECTED) {
+          if (track) redrawPolarization();
+          continue;
+        }
+      } else if (!flight()) break;
       if (!surfaceEvent(entry)) break;
     }
     counters[COUNTER_EVENTS] += rayEvents;
@@ -503,6 +530,7 @@ export function recordSceneRays(scene: CompiledScene, chunkIndex: number, rays: 
   for (let i = 0; i < rays; i++) {
     before.set(bins);
     launch();
+    if (spectral) launchWavelength(i);
     sink.point(ray[0], ray[1], ray[2], NONE);
     let rayEvents = 0;
     for (;;) {
@@ -520,6 +548,23 @@ export function recordSceneRays(scene: CompiledScene, chunkIndex: number, rays: 
       if (entry === NONE) {
         bins[BIN_GEOMETRY_ERROR]++;
         break;
+      }
+      // A phosphor medium: a particle event is a point on no surface; an absorption ends the path there
+      if (spectral && isPhosphorMedium(media, medium * MEDIUM_STRIDE)) {
+        const outcome = phosphorFlight(ray, hit, media, medium * MEDIUM_STRIDE, bins);
+        if (outcome === ENDED) {
+          sink.absorbed(ray[0], ray[1], ray[2]);
+          break;
+        }
+        if (outcome === REDIRECTED) {
+          if (track) redrawPolarization();
+          sink.point(ray[0], ray[1], ray[2], NONE);
+          continue;
+        }
+        const endedHere = !surfaceEvent(entry);
+        sink.point(ray[0], ray[1], ray[2], entry >> 1);
+        if (endedHere) break;
+        continue;
       }
       // Where the optical depth left would run out, should this flight absorb the ray
       const alpha = media[medium * MEDIUM_STRIDE + M_ABSORPTION];
@@ -558,7 +603,7 @@ export function traceSceneChunk(
   maxEvents: number = DEFAULT_MAX_EVENTS,
   onProgress?: (raysDone: number) => void
 ): Tally {
-  configure(scene);
+  configure(scene, tally);
   seedChunk(seed, chunkIndex);
   runRays(rays, maxEvents, tally.polarHistogram, onProgress);
 

@@ -1,0 +1,58 @@
+/**
+ * The spectral part of a compiled scene, built once per run from the scene's chip spectrum and its
+ * phosphor media: each phosphor's μs, μa, g tabulated on one wavelength grid (GRID_FROM_NM..GRID_TO_NM
+ * in GRID_STEP_NM steps, linear between the given rows, the first and last rows held beyond the ends),
+ * its emission as a quantile table, its quantum yield; and the chip's quantile table.
+ * The ray loop (medium-events.ts) reads these flat arrays only.
+ */
+import { quantileTable, QUANTILES } from './spectral-sampler';
+import type { ScenePhosphor } from './scene';
+
+export const GRID_FROM_NM = 300;
+export const GRID_TO_NM = 900;
+export const GRID_STEP_NM = 1;
+export const GRID_POINTS = (GRID_TO_NM - GRID_FROM_NM) / GRID_STEP_NM + 1;
+/** Per phosphor: μs, μa, g over the grid (three runs of GRID_POINTS). */
+export const PHOSPHOR_TABLE_STRIDE = 3 * GRID_POINTS;
+
+export interface SpectralTables {
+  /** Quantile table of the chip's emission (QUANTILES entries). */
+  chip: Float64Array;
+  /** True when the chip emits one line (no number is drawn for its wavelength). */
+  chipLine: boolean;
+  /** PHOSPHOR_TABLE_STRIDE doubles per phosphor. */
+  coefficients: Float64Array;
+  /** QUANTILES doubles per phosphor: its emission's quantile table. */
+  emission: Float64Array;
+  quantumYield: Float64Array;
+}
+
+/** Linear interpolation in rows sorted by x (column `col`), ends held. */
+export function interpolateHeld(rows: readonly (readonly number[])[], x: number, col: number): number {
+  if (x <= rows[0][0]) return rows[0][col];
+  const last = rows.length - 1;
+  if (x >= rows[last][0]) return rows[last][col];
+  let i = 1;
+  while (rows[i][0] < x) i++;
+  const [x0, x1] = [rows[i - 1][0], rows[i][0]];
+  const f = (x - x0) / (x1 - x0);
+  return rows[i - 1][col] + f * (rows[i][col] - rows[i - 1][col]);
+}
+
+export function buildSpectralTables(chipSpectrum: readonly (readonly [number, number])[], phosphors: readonly ScenePhosphor[]): SpectralTables {
+  const coefficients = new Float64Array(phosphors.length * PHOSPHOR_TABLE_STRIDE);
+  const emission = new Float64Array(phosphors.length * QUANTILES);
+  const quantumYield = new Float64Array(phosphors.length);
+  phosphors.forEach((p, i) => {
+    const o = i * PHOSPHOR_TABLE_STRIDE;
+    for (let k = 0; k < GRID_POINTS; k++) {
+      const nm = GRID_FROM_NM + k * GRID_STEP_NM;
+      coefficients[o + k] = interpolateHeld(p.coefficients, nm, 1);
+      coefficients[o + GRID_POINTS + k] = interpolateHeld(p.coefficients, nm, 2);
+      coefficients[o + 2 * GRID_POINTS + k] = interpolateHeld(p.coefficients, nm, 3);
+    }
+    emission.set(quantileTable(p.emission), i * QUANTILES);
+    quantumYield[i] = p.quantumYield;
+  });
+  return { chip: quantileTable(chipSpectrum), chipLine: chipSpectrum.length === 1, coefficients, emission, quantumYield };
+}
