@@ -47,6 +47,8 @@ import { DEFAULT_MAX_EVENTS, type TracePackage } from './package-spec';
 import { packageScene } from './package-scene';
 import { TRACK_TIR, TRACK_TRANSMITTED, launchPolarization, trackedInterface, trackedMirror } from './polarization';
 import { seedChunk, uniformsInto } from './rng';
+import { useRevolutionProfiles } from './revolution-shape';
+import { launchSourceRay } from './source-launch';
 import * as layout from './scene-layout';
 import { intersectSurface, surfaceNormal } from './shape-intersect';
 import { POLAR_BINS, type Tally } from './tally';
@@ -66,6 +68,7 @@ const {
   COUNTER_EVENTS,
   COUNTER_TIR_CHIP,
   COUNTER_TIR_OUTER,
+  EMIT_LAMBERTIAN_RECT,
   MEDIUM_STRIDE,
   M_ABSORPTION,
   M_BIN,
@@ -133,6 +136,10 @@ let absorbing = false;
 let track = false;
 // The emitting plane's height, mm (an array, so the double is not boxed)
 const emitterZ = new Float64Array(1);
+// A source that is not a chip (source-launch.ts): kind, [z, half width, half length], ray table
+let sourceKind = 0;
+const sourceParams = new Float64Array(3);
+let sourceRays: Float64Array = new Float64Array(0);
 
 // The current ray's medium and the last surface it met
 let medium = 0;
@@ -152,10 +159,33 @@ function configure(scene: CompiledScene): void {
   volumeEmission = scene.emitterVolume;
   absorbing = scene.absorbing;
   track = scene.track;
+  sourceKind = scene.emitterKind;
+  sourceParams[0] = scene.emitterZ;
+  sourceParams[1] = scene.emitterHalfWidth;
+  sourceParams[2] = scene.emitterHalfLength;
+  sourceRays = scene.emitterRays;
+  useRevolutionProfiles(scene.profiles, scene.surfaceNames.length);
 }
 
-/** Starts a ray in the emitting medium: position, isotropic direction, polarisation, optical depth. */
+/** Starts a ray in the emitting medium (or from a source, see source-launch.ts): position, direction, polarisation, optical depth. */
 function launch(): void {
+  if (sourceKind >= EMIT_LAMBERTIAN_RECT) launchSourceRay(ray, sourceKind, sourceParams, sourceRays);
+  else launchFromChip();
+  if (track) {
+    uniformsInto(trackArgs, 1);
+    launchPolarization(direction, trackArgs);
+  }
+  // Optical depth to absorption, τ ~ Exp(1) by inverse transform (1 − u ∈ (0, 1]); none if nothing absorbs
+  if (absorbing) {
+    uniformsInto(u, 1);
+    ray[6] = -Math.log(1 - u[0]);
+  } else ray[6] = Infinity;
+  medium = emitterMedium;
+  lastSurface = NONE;
+}
+
+/** Position and isotropic direction of a ray from the emitting chip layer (plane or volume). */
+function launchFromChip(): void {
   const o = emitterOffset;
   // Position on the emitting plane or in the volume of the emitting box
   uniformsInto(u, 2);
@@ -183,17 +213,6 @@ function launch(): void {
   ray[3] = k * a;
   ray[4] = k * b;
   ray[5] = 1 - 2 * s;
-  if (track) {
-    uniformsInto(trackArgs, 1);
-    launchPolarization(direction, trackArgs);
-  }
-  // Optical depth to absorption, τ ~ Exp(1) by inverse transform (1 − u ∈ (0, 1]); none if nothing absorbs
-  if (absorbing) {
-    uniformsInto(u, 1);
-    ray[6] = -Math.log(1 - u[0]);
-  } else ray[6] = Infinity;
-  medium = emitterMedium;
-  lastSurface = NONE;
 }
 
 /**
