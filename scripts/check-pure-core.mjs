@@ -5,7 +5,7 @@ import { join } from 'node:path';
 
 const pureRoots = ['src/lib/optics', 'src/lib/trace', 'src/lib/materials', 'src/lib/scenario', 'src/lib/photometry',
   'src/lib/decisions', 'src/lib/export', 'src/lib/variants', 'src/lib/color', 'src/lib/scatter', 'src/lib/phosphors',
-  'src/lib/optic-design', 'src/lib/runs'];
+  'src/lib/optic-design', 'src/lib/optic-trace', 'src/lib/runs'];
 const browserShims = new Set(['trace-worker.ts', 'trace-pool.ts', 'browser-tracer.ts']); // worker glue may use Worker/self/navigator
 const banned = [
   [/from\s+['"]svelte(\/[^'"]*)?['"]/, 'imports svelte'],

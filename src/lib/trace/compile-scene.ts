@@ -85,6 +85,8 @@ export interface CompiledScene {
   emitterHalfLength: number;
   /** 'rays' emitter: EMIT_RAY_STRIDE doubles per ray, the last the cumulative weight (the final one = 1). */
   emitterRays: Float64Array;
+  /** Surface a launched ray counts as last met (NONE for a chip: it meets the chip's faces). */
+  emitterSurface: number;
   /** Prepared profiles of the revolution surfaces, by the index packed in their records. */
   profiles: RevolutionProfile[];
   track: boolean;
@@ -277,6 +279,11 @@ export function compileScene(scene: SceneDescription): CompiledScene {
   });
 
   const em = scene.emitter;
+  const surfaceOf = (name: string): number => {
+    const i = surfaceIndex.get(name);
+    if (i === undefined) throw new Error(`scene: the emitter names unknown surface '${name}'`);
+    return i;
+  };
   const emitterMedium = mediumOf(em.medium, 'emitter');
   const boxEmitter = em.mode === 'plane' || em.mode === 'volume';
   if (boxEmitter && !scene.media[emitterMedium].box) throw new Error(`scene: the emitter's medium '${em.medium}' must be a box`);
@@ -315,6 +322,7 @@ export function compileScene(scene: SceneDescription): CompiledScene {
     emitterHalfWidth: em.source ? em.source.widthMm / 2 : 0,
     emitterHalfLength: em.source ? (em.source.shape === 'disc' ? em.source.widthMm : em.source.lengthMm) / 2 : 0,
     emitterRays,
+    emitterSurface: em.surface === undefined ? NONE : surfaceOf(em.surface),
     profiles,
     track: scene.polarization === 'track',
     absorbing,

@@ -144,6 +144,8 @@ export interface SceneEmitter {
   source?: { shape: 'disc' | 'rect'; widthMm: number; lengthMm: number };
   /** 'rays': stride 7 per ray: x, y, z (mm), unit direction dx, dy, dz, weight (> 0). */
   rays?: Float64Array;
+  /** 'lambertian', 'rays': the surface a ray's escape is credited to until it meets another (the source's own). */
+  surface?: string;
 }
 
 export interface SceneDescription {

@@ -140,6 +140,11 @@ const emitterZ = new Float64Array(1);
 let sourceKind = 0;
 const sourceParams = new Float64Array(3);
 let sourceRays: Float64Array = new Float64Array(0);
+let sourceSurface = NONE;
+
+// Escaping rays recorded for a ray file (recordEscapes): x, y, z, dx, dy, dz each, up to the buffer's length
+let escapeLog: Float64Array = new Float64Array(0);
+let escapesLogged = 0;
 
 // The current ray's medium and the last surface it met
 let medium = 0;
@@ -164,6 +169,7 @@ function configure(scene: CompiledScene): void {
   sourceParams[1] = scene.emitterHalfWidth;
   sourceParams[2] = scene.emitterHalfLength;
   sourceRays = scene.emitterRays;
+  sourceSurface = scene.emitterSurface;
   useRevolutionProfiles(scene.profiles, scene.surfaceNames.length);
 }
 
@@ -181,7 +187,7 @@ function launch(): void {
     ray[6] = -Math.log(1 - u[0]);
   } else ray[6] = Infinity;
   medium = emitterMedium;
-  lastSurface = NONE;
+  lastSurface = sourceSurface;
 }
 
 /** Position and isotropic direction of a ray from the emitting chip layer (plane or volume). */
@@ -455,7 +461,26 @@ function escape(histogram: Float64Array): void {
   }
   bins[bin]++;
   histogram[polarBin()]++;
+  if (escapesLogged * 6 < escapeLog.length) logEscape();
   if (ray[5] < 0) counters[COUNTER_ESCAPED_BELOW]++;
+}
+
+/** Copies the escaping ray's position and direction into the recording buffer. */
+function logEscape(): void {
+  const o = escapesLogged * 6;
+  for (let k = 0; k < 6; k++) escapeLog[o + k] = ray[k];
+  escapesLogged++;
+}
+
+/**
+ * Records the position and direction of the next escaping rays (6 doubles each) into `buffer` until it
+ * is full, across the chunks traced after this call; an empty buffer stops recording.
+ * @returns a function giving the number of rays recorded so far
+ */
+export function recordEscapes(buffer: Float64Array): () => number {
+  escapeLog = buffer;
+  escapesLogged = 0;
+  return () => escapesLogged;
 }
 
 /**
