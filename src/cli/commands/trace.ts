@@ -52,7 +52,7 @@ for (const name of stringOptions) options[name] = { type: 'string' };
 const MAX_SCENARIO_BYTES = 2 * 1024 * 1024;
 
 /** Reads --scenario: an app scenario (any known version) or a flat object of option names. */
-function readScenarioFile(path: string): { pkg?: TracePackage; values?: ParsedValues; rays?: number; seed?: number; name?: string } {
+export function readScenarioFile(path: string): { pkg?: TracePackage; values?: ParsedValues; rays?: number; seed?: number; name?: string } {
   let text: string;
   try {
     if (statSync(path).size > MAX_SCENARIO_BYTES) throw new CliError(`--scenario: file is larger than 2 MB (${path.slice(0, 80)})`);
@@ -87,7 +87,7 @@ function readScenarioFile(path: string): { pkg?: TracePackage; values?: ParsedVa
   return { values };
 }
 
-function packageFromOptions(values: ParsedValues, base?: TracePackage): TracePackage {
+export function packageFromOptions(values: ParsedValues, base?: TracePackage): TracePackage {
   const wavelengthNm = numberOption(values, 'wavelength', 200, 2500, 450);
   const given = (name: string) => values[name] !== undefined;
   const chipIndex = !base || given('n-chip') || given('chip-material') ? indexOption(values, 'n-chip', 'chip-material', wavelengthNm, '2.45').n : base.chip.n;

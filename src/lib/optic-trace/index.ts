@@ -5,3 +5,4 @@ export * from './optic-results';
 export * from './optic-run';
 export * from './ray-file';
 export * from './package-rays';
+export * from './optic-ies';
