@@ -21,12 +21,13 @@ export function packageEscapingRays(pkg: TracePackage, rays: number, seed: numbe
   const compiled = compileScene(packageScene(pkg));
   const plan = chunkPlan(rays);
   const tally = createTally();
+  let count = 0;
   try {
     for (let i = 0; i < plan.chunkCount; i++) traceSceneChunk(compiled, i, raysInChunk(plan, i), seed, tally);
+    count = recorded();
   } finally {
     recordEscapes(new Float64Array(0));
   }
-  const count = recorded();
   return { positionsDirections: buffer.subarray(0, 6 * count), count, launched: rays };
 }
 
