@@ -6,3 +6,4 @@ export * from './optic-run';
 export * from './ray-file';
 export * from './package-rays';
 export * from './optic-ies';
+export * from './ray-paths';
