@@ -23,6 +23,11 @@ export const NAV_PAGES: readonly NavPage[] = [
     label: 'Dome',
     blurb: 'Gain from a dome encapsulant, the dome size that traps no light, and the package ray trace.'
   },
+  {
+    path: '/beam',
+    label: 'Beam optics',
+    blurb: 'A reflector, a lens or a TIR collimator over the package: efficiency, beam angle, cd/klm and the étendue limit.'
+  },
   { path: '/materials', label: 'Materials', blurb: 'The refractive index library, with sources and valid ranges.' },
   {
     path: '/variants',

@@ -7,3 +7,4 @@ export * from './ray-file';
 export * from './package-rays';
 export * from './optic-ies';
 export * from './ray-paths';
+export * from './beam-limits';
