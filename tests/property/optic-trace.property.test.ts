@@ -43,6 +43,8 @@ describe('optic trace, random designs', () => {
           const cone = coneHoldingDeg(run.tally, run.tally.launched * r.sourceFraction, f);
           const bound = (2 * Math.asin(Math.sqrt(f) * Math.sin((r.etendueLimitDeg * Math.PI) / 360)) * 180) / Math.PI;
           expect(cone).toBeGreaterThanOrEqual(bound * 0.97);
+          // the beam's own étendue use stays at or below 1 (5 % slack for the 1° zones and 4000 rays)
+          expect(r.etendueRatio).toBeLessThanOrEqual(1.05);
         }
       ),
       30

@@ -44,7 +44,11 @@ export interface OpticResults {
   peakCdPerKlm: number;
   /** Narrowest full beam angle any optic of this exit could make from this source, degrees. */
   etendueLimitDeg: number;
-  /** étendue limit / beam angle: 1 would be a perfect optic of this size. */
+  /**
+   * How close the beam comes to the étendue limit: √f · sin(limit/2) / sin(beam/2), f the share of the source
+   * flux inside the beam angle. A uniform Lambertian source's flux f needs the étendue f·G_s, so this is at most
+   * 1 (a perfect optic of this exit size); a half-maximum width narrower than the limit holds less flux.
+   */
   etendueRatio: number;
   ledger: OpticLedger;
   /** Per-face escapes and absorptions of the optic and package, fractions of launched rays. */
@@ -141,13 +145,20 @@ export function opticResults(tally: Tally, roles: Record<string, OpticFaceRole>,
     fieldAngleDeg,
     peakCdPerKlm: Math.max(0, ...cdPerKlm),
     etendueLimitDeg,
-    etendueRatio: beamAngleDeg > 0 ? Math.min(etendueLimitDeg / beamAngleDeg, 1e6) : 0,
+    etendueRatio: etendueRatio(etendueLimitDeg, beamAngleDeg, sourceRays > 0 ? inBeam / sourceRays : 0),
     ledger,
     parts,
     farField: { thetaDeg, cdPerKlm },
     rays: n,
     sourceFraction
   };
+}
+
+/** √f · sin(limit/2) / sin(beam/2) (see OpticResults.etendueRatio); 0 for no beam. Angles in degrees. */
+export function etendueRatio(limitDeg: number, beamDeg: number, fluxFraction: number): number {
+  const half = (beamDeg * Math.PI) / 360;
+  if (!(half > 0) || !(fluxFraction > 0)) return 0;
+  return (Math.sqrt(fluxFraction) * Math.sin((limitDeg * Math.PI) / 360)) / Math.sin(Math.min(half, Math.PI / 2));
 }
 
 /**
