@@ -11,7 +11,7 @@ import { opticParts, type OpticFaceRole } from '../trace/body-optic';
 import { packageScene } from '../trace/package-scene';
 import type { MirrorSpec, SceneDescription, SceneSurface } from '../trace/scene';
 import type { OpticDesign } from '../optic-design/optic-design';
-import { sourceFootprint, type OpticSource } from './optic-source';
+import { packageIntrusionMm, sourceFootprint, type OpticSource } from './optic-source';
 
 export const SOURCE_BOARD = 'source';
 const OUTSIDE = 'outside';
@@ -28,11 +28,19 @@ export interface OpticScene {
  * The scene of `design` over `source`.
  * @param material index and absorption (1/mm) of the lens or TIR material at the run's wavelength
  * @param mirror the reflector's mirror
+ * @throws RangeError naming gapMm when the optic would cut into the package's encapsulant
  */
 export function opticScene(design: OpticDesign, source: OpticSource, material: { n: number; absorptionPerMm: number }, mirror: MirrorSpec): OpticScene {
   const { topMm } = sourceFootprint(source);
   const parts = opticParts(design, topMm, material, mirror, OUTSIDE, source.kind === 'package' ? source.pkg.outsideN : 1);
   if (source.kind === 'package') {
+    let dip = 0;
+    for (const f of design.surfaces) dip = Math.max(dip, packageIntrusionMm(source.pkg, f.r, f.z.map((v) => v + topMm)));
+    if (dip > 0) {
+      throw new RangeError(
+        `gapMm: the optic meets the package's encapsulant; raise the gap to at least ${(design.gapMm + dip + 0.05).toFixed(2)} mm, in [0, height)`
+      );
+    }
     const base = packageScene(source.pkg);
     return {
       scene: { ...base, media: [...base.media, ...parts.media], surfaces: [...base.surfaces, ...parts.surfaces] },

@@ -8,6 +8,7 @@ import { packageScene } from '../trace/package-scene';
 import { validateTracePackage, type TracePackage } from '../trace/package-spec';
 import { createTally } from '../trace/tally';
 import { recordEscapes, traceSceneChunk } from '../trace/trace-chunk';
+import { packageOutline } from './optic-source';
 import { formatRayFile } from './ray-file';
 
 /**
@@ -34,5 +35,6 @@ export function packageEscapingRays(pkg: TracePackage, rays: number, seed: numbe
 /** The package's escaping rays as ray-file text (see ray-file.ts). */
 export function packageRayFile(pkg: TracePackage, rays: number, seed: number, wavelengthNm: number, scenario: string): string {
   const { positionsDirections, count, launched } = packageEscapingRays(pkg, rays, seed);
-  return formatRayFile(positionsDirections, count, wavelengthNm, scenario, `${count} of ${launched} traced rays escaped the package`);
+  const plane = packageOutline(pkg).sourcePlaneMm;
+  return formatRayFile(positionsDirections, count, wavelengthNm, scenario, `${count} of ${launched} traced rays escaped the package`, plane);
 }

@@ -2,11 +2,12 @@
  * The ray file: a plain CSV of rays, our own documented format, so a package's escaping light can be
  * saved and any such list (traced or made elsewhere) can feed an optic.
  *
- *   # outcouple ray file v1; scenario: <name>; <note>
+ *   # outcouple ray file v1; scenario: <name>; source plane z_mm: <z>; <note>
  *   x_mm,y_mm,z_mm,dx,dy,dz,wavelength_nm,weight
  *   0.12,-0.3,0.15,0.1,0.2,0.9747,450,1
  *
- * Lines starting with '#' are comments (the first names the scenario); the header row is required;
+ * Lines starting with '#' are comments (the first names the scenario, and may give the height an optic's
+ * design frame starts at, "source plane z_mm: 0.15"); the header row is required;
  * the direction is normalised on reading (it must not be zero); weight > 0 (relative flux).
  */
 import { exportNumber } from '../export/number-text';
@@ -24,14 +25,24 @@ export interface RayList {
   wavelengthNm: number;
   /** The scenario named in the first comment line, or ''. */
   scenario: string;
+  /** The source plane the comment gives, mm, or null (then the highest start of the rays is used). */
+  sourcePlaneMm: number | null;
 }
 
 /**
  * Writes rays as a ray file.
  * @param positionsDirections 6 doubles per ray (x, y, z, dx, dy, dz), `count` rays
  */
-export function formatRayFile(positionsDirections: Float64Array, count: number, wavelengthNm: number, scenario: string, note = ''): string {
-  const lines = [`# outcouple ray file v1; scenario: ${scenario.replace(/[\r\n;]/g, ' ')}${note ? `; ${note.replace(/[\r\n]/g, ' ')}` : ''}`, RAY_FILE_HEADER];
+export function formatRayFile(
+  positionsDirections: Float64Array,
+  count: number,
+  wavelengthNm: number,
+  scenario: string,
+  note = '',
+  sourcePlaneMm: number | null = null
+): string {
+  const plane = sourcePlaneMm === null ? '' : `; source plane z_mm: ${exportNumber(sourcePlaneMm)}`;
+  const lines = [`# outcouple ray file v1; scenario: ${scenario.replace(/[\r\n;]/g, ' ')}${plane}${note ? `; ${note.replace(/[\r\n]/g, ' ')}` : ''}`, RAY_FILE_HEADER];
   const wl = exportNumber(wavelengthNm);
   for (let i = 0; i < count; i++) {
     const o = 6 * i;
@@ -51,6 +62,7 @@ export function formatRayFile(positionsDirections: Float64Array, count: number, 
 export function parseRayFile(text: string): RayList {
   const lines = text.split(/\r?\n/);
   let scenario = '';
+  let sourcePlaneMm: number | null = null;
   let headerSeen = false;
   const values: number[] = [];
   let wlSum = 0;
@@ -62,6 +74,12 @@ export function parseRayFile(text: string): RayList {
     if (line.startsWith('#')) {
       const m = /scenario:\s*([^;]*)/.exec(line);
       if (m && scenario === '') scenario = m[1].trim();
+      const plane = /source plane z_mm:\s*([^;\s]+)/.exec(line);
+      if (plane) {
+        const z = Number(plane[1]);
+        if (!Number.isFinite(z)) throw new RangeError(`ray file row ${row}, source plane z_mm: must be a finite number (got "${plane[1].slice(0, 20)}")`);
+        sourcePlaneMm = z;
+      }
       continue;
     }
     if (!headerSeen) {
@@ -87,5 +105,5 @@ export function parseRayFile(text: string): RayList {
   }
   if (!headerSeen) throw new RangeError(`ray file row 1: the header must be ${RAY_FILE_HEADER}`);
   if (values.length === 0) throw new RangeError('ray file: no rays after the header (at least 1 row)');
-  return { rays: Float64Array.from(values), count: values.length / 7, wavelengthNm: wlSum / wSum, scenario };
+  return { rays: Float64Array.from(values), count: values.length / 7, wavelengthNm: wlSum / wSum, scenario, sourcePlaneMm };
 }

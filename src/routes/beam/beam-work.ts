@@ -70,6 +70,22 @@ export function runInput(form: BeamForm, ctx: BeamContext, type: OpticKind): Opt
   };
 }
 
+/** The core's field names as the page's labels, so a refusal names the field the user sees. */
+const FIELD_LABEL: [RegExp, string][] = [
+  [/\bexitDiameterMm\b/g, 'Exit diameter'],
+  [/\bheightMm\b/g, 'Height'],
+  [/\bgapMm\b/g, 'Gap'],
+  [/\btargetBeamDeg\b/g, 'Target beam'],
+  [/\breflectance\b/g, 'Reflector reflectance'],
+  [/, or give a smaller splitAngleDeg/g, '']
+];
+
+export function inFieldTerms(message: string): string {
+  let m = message;
+  for (const [pattern, label] of FIELD_LABEL) m = m.replace(pattern, label);
+  return m;
+}
+
 /** Designs the three optics: each prepared, or the one-line reason it cannot be designed. */
 export function prepareAll(form: BeamForm, ctx: BeamContext): Record<OpticKind, PreparedOptic | string> {
   const out = {} as Record<OpticKind, PreparedOptic | string>;
@@ -77,7 +93,7 @@ export function prepareAll(form: BeamForm, ctx: BeamContext): Record<OpticKind, 
     try {
       out[type] = prepareOptic(runInput(form, ctx, type));
     } catch (e) {
-      out[type] = e instanceof Error ? e.message : String(e);
+      out[type] = inFieldTerms(e instanceof Error ? e.message : String(e));
     }
   }
   return out;

@@ -44,7 +44,8 @@ describe('ray file', () => {
       expect(Math.hypot(positionsDirections[o], positionsDirections[o + 1], positionsDirections[o + 2])).toBeLessThan(2.5 + 1e-6);
       expect(Math.hypot(positionsDirections[o + 3], positionsDirections[o + 4], positionsDirections[o + 5])).toBeCloseTo(1, 9);
     }
-    const list = parseRayFile(formatRayFile(positionsDirections, count, 450, scenario.name));
+    const list = parseRayFile(formatRayFile(positionsDirections, count, 450, scenario.name, '', pkg.chip.heightMm));
+    expect(list.sourcePlaneMm).toBe(0.15);
     const design = { type: 'lens' as const, exitDiameterMm: 20, heightMm: 12, material: 'pmma' };
     const fromFile = runOptic({ design, source: { kind: 'rays', list }, rays: 20_000, seed: 2 }).results;
     const direct = runOptic({ design, source: { kind: 'package', pkg, wavelengthNm: 450, scenario: scenario.name }, rays: 50_000, seed: 2 }).results;
