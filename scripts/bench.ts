@@ -3,7 +3,9 @@
  * cylinder), the dome again with polarisation tracked, a flip chip on sapphire under the dome, and a
  * mid-power reflector cup (2.6 mm floor, 3.0 mm top, 0.8 mm deep, white diffuse wall 0.93, silvered
  * floor 0.95, flip chip, flat fill), the same cup with a yellow garnet phosphor dispersed in its fill at
- * 16.8 wt% (12 µm; CCT ≈ 5000 K from a 450 nm chip, found by outcouple's load search), each traced on one thread and on all cores. Prints rays/s and events/s, rays per CPU
+ * 16.8 wt% (12 µm; CCT ≈ 5000 K from a 450 nm chip, found by outcouple's load search), each traced on one thread
+ * and on all cores; then the three beam optics (20 mm exit, 12 mm high, PMMA) over a 1 × 1 mm Lambertian source on
+ * one thread. Prints rays/s and events/s, rays per CPU
  * second (one thread), and the extraction with its standard error. The all-core runs use a thread pool
  * started and warmed up before timing; its start-up time is printed once.
  *
@@ -20,6 +22,7 @@ import type { TracePackage } from '../src/lib/trace/package-spec';
 import { summarize } from '../src/lib/trace/summary';
 import { traceSync } from '../src/lib/trace/trace';
 import { libraryPhosphor, withPhosphor } from '../src/lib/trace/white-light';
+import { prepareOptic, traceOpticScene } from '../src/lib/optic-trace/optic-run';
 
 const TARGET_DOME_RAYS_PER_S = 2.5e6;
 
@@ -118,6 +121,23 @@ async function main(): Promise<void> {
     }
   }
   await pool.close();
+  // Beam optics, 20 mm exit, 12 mm high, PMMA, over a 1 × 1 mm Lambertian source, one thread
+  console.log('\noptic over a 1 × 1 mm Lambertian source   Mrays/s  events/ray  out of the optic');
+  for (const type of ['reflector', 'lens', 'tir'] as const) {
+    const prepared = prepareOptic({
+      design: { type, exitDiameterMm: 20, heightMm: 12, gapMm: 0.2, material: 'pmma' },
+      source: { kind: 'lambertian', shape: 'rect', widthMm: 1 },
+      rays: rays,
+      seed: 1
+    });
+    traceOpticScene(prepared, 100_000, 99);
+    const t0 = performance.now();
+    const tally = traceOpticScene(prepared, rays, 1);
+    const seconds = (performance.now() - t0) / 1000;
+    console.log(
+      `optic trace, ${type.padEnd(26)} ${millions(rays / seconds)}  ${(tally.events / rays).toFixed(2).padStart(10)}  ${(tally.escaped ? Object.entries(tally.parts).filter(([k]) => k.startsWith('escaped:optic exit')).reduce((a, [, v]) => a + v, 0) / rays : 0).toFixed(4)}`
+    );
+  }
   console.log(`\nThread pool start-up (${threads} threads, not in the timings above): ${startupMs.toFixed(0)} ms`);
   const verdict = domeRate >= TARGET_DOME_RAYS_PER_S ? 'met' : 'NOT met';
   console.log(

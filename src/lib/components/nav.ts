@@ -28,6 +28,11 @@ export const NAV_PAGES: readonly NavPage[] = [
     label: 'White light',
     blurb: 'A phosphor in the encapsulant: colour, CCT, colour rendering, efficiency, and the load for a target CCT.'
   },
+  {
+    path: '/beam',
+    label: 'Beam optics',
+    blurb: 'A reflector, a lens or a TIR collimator over the package: efficiency, beam angle, cd/klm and the étendue limit.'
+  },
   { path: '/materials', label: 'Materials', blurb: 'The refractive index library, with sources and valid ranges.' },
   {
     path: '/variants',

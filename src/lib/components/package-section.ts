@@ -101,9 +101,14 @@ function extent(scene: SceneDescription): { r: number; top: number } {
     } else if (sh.kind === 'frustum') {
       r = Math.max(r, sh.r0, sh.r1);
       top = Math.max(top, sh.z1);
-    } else {
+    } else if (sh.kind === 'spheroid-cap') {
       r = Math.max(r, sh.radius);
       top = Math.max(top, sh.zCentre + sh.height);
+    } else {
+      for (let i = 0; i < sh.r.length; i++) {
+        r = Math.max(r, sh.r[i]);
+        top = Math.max(top, sh.z[i]);
+      }
     }
   }
   return { r, top };
@@ -128,6 +133,10 @@ function shapePath(sh: Shape, halfWidth: number): string | null {
       return `${polyline([[-sh.r0, sh.z0], [-sh.r1, sh.z1]])} ${polyline([[sh.r0, sh.z0], [sh.r1, sh.z1]])}`;
     case 'spheroid-cap':
       return polyline(capPoints(sh.radius, sh.height, sh.zCentre));
+    case 'revolution': {
+      const right = Array.from(sh.r, (r, i): [number, number] => [r, sh.z[i]]);
+      return `${polyline(right.map(([r, z]): [number, number] => [-r, z]))} ${polyline(right)}`;
+    }
   }
 }
 
@@ -181,6 +190,8 @@ function shapeText(sh: Shape): string {
       return `radius ${mm(sh.r0)} at z = ${mm(sh.z0)} to ${mm(sh.r1)} at z = ${mm(sh.z1)}`;
     case 'spheroid-cap':
       return `base radius ${mm(sh.radius)}, height ${mm(sh.height)}, on z = ${mm(sh.zCentre)}`;
+    case 'revolution':
+      return `profile of ${sh.r.length} points, radius up to ${mm(Math.max(...sh.r))}`;
   }
 }
 

@@ -39,7 +39,17 @@ import {
   SHAPE_DISC,
   SHAPE_FRUSTUM,
   SHAPE_RECT,
+  SHAPE_REVOLUTION,
   SHAPE_SPHEROID_CAP,
+  EMIT_LAMBERTIAN_DISC,
+  EMIT_LAMBERTIAN_RECT,
+  EMIT_PLANE,
+  EMIT_RAYS,
+  EMIT_RAY_STRIDE,
+  EMIT_VOLUME,
+  DIRECTION_DOWN,
+  DIRECTION_ISOTROPIC,
+  DIRECTION_LAMBERTIAN_DOWN,
   SIDE_BEHIND,
   SIDE_FRONT,
   SURFACE_STRIDE,
@@ -54,13 +64,9 @@ import {
   S_TIR_BEHIND,
   S_TIR_FRONT
 } from './scene-layout';
+import { buildRevolutionProfile, type RevolutionProfile } from '../optic-design/revolution-intersect';
 import { buildSpectralTables, type SpectralTables } from './phosphor-tables';
 import type { LegacyEscape, ScenePhosphor, SceneDescription, SceneSurface, Shape } from './scene';
-
-/** Emitter direction kinds (SceneEmitter.direction). */
-export const EMIT_ISOTROPIC = 0;
-export const EMIT_DOWN = 1;
-export const EMIT_LAMBERTIAN_DOWN = 2;
 
 /** Which count of the older fixed ledger (Tally fields) a bin also adds to. */
 export type LedgerGroup = 'escaped' | 'absorbedChip' | 'absorbedEncapsulant' | 'absorbedBase' | 'lost';
@@ -75,9 +81,20 @@ export interface CompiledScene {
   outside: number;
   emitterMedium: number;
   emitterVolume: boolean;
+  /** EMIT_* (scene-layout.ts). */
+  emitterKind: number;
   emitterZ: number;
-  /** EMIT_ISOTROPIC, EMIT_DOWN or EMIT_LAMBERTIAN_DOWN. */
+  /** DIRECTION_ISOTROPIC, DIRECTION_DOWN or DIRECTION_LAMBERTIAN_DOWN (scene-layout.ts), for a chip emitter. */
   emitterDirection: number;
+  /** Lambertian source: half width (disc radius) and half length, mm. */
+  emitterHalfWidth: number;
+  emitterHalfLength: number;
+  /** 'rays' emitter: EMIT_RAY_STRIDE doubles per ray, the last the cumulative weight (the final one = 1). */
+  emitterRays: Float64Array;
+  /** Surface a launched ray counts as last met (NONE for a chip: it meets the chip's faces). */
+  emitterSurface: number;
+  /** Prepared profiles of the revolution surfaces, by the index packed in their records. */
+  profiles: RevolutionProfile[];
   track: boolean;
   /** Spectral rays and phosphor tables when some medium holds a phosphor; null otherwise (no wavelength is drawn). */
   spectral: SpectralTables | null;
@@ -97,7 +114,7 @@ export interface CompiledScene {
  * Writes a shape's kind and parameters into a surface record at offset o (layouts in scene-layout.ts).
  * @returns out
  */
-export function packShape(sh: Shape, out: Float64Array, o: number): Float64Array {
+export function packShape(sh: Shape, out: Float64Array, o: number, profileIndex = 0, surfaceIndex = 0): Float64Array {
   const p = o + S_P;
   switch (sh.kind) {
     case 'rect':
@@ -119,6 +136,10 @@ export function packShape(sh: Shape, out: Float64Array, o: number): Float64Array
     case 'spheroid-cap':
       out[o + S_SHAPE] = SHAPE_SPHEROID_CAP;
       out.set([sh.radius, sh.height, sh.zCentre, 1 / (sh.radius * sh.radius), 1 / (sh.height * sh.height)], p);
+      break;
+    case 'revolution':
+      out[o + S_SHAPE] = SHAPE_REVOLUTION;
+      out.set([profileIndex, surfaceIndex], p);
       break;
   }
   return out;
@@ -198,9 +219,13 @@ export function compileScene(scene: SceneDescription): CompiledScene {
   const ns = scene.surfaces.length;
   const surfaces = new Float64Array(ns * SURFACE_STRIDE);
   const lists: number[][] = scene.media.map(() => []);
+  const profiles: RevolutionProfile[] = [];
   scene.surfaces.forEach((s, i) => {
     const o = i * SURFACE_STRIDE;
-    packShape(s.shape, surfaces, o);
+    if (s.shape.kind === 'revolution') {
+      profiles.push(buildRevolutionProfile([{ name: s.name, r: s.shape.r, z: s.shape.z }]));
+    }
+    packShape(s.shape, surfaces, o, profiles.length - 1, i);
     const front = mediumOf(s.front, `surface '${s.name}'`);
     const behind = mediumOf(s.behind, `surface '${s.name}'`);
     surfaces[o + S_FRONT] = front;
@@ -270,19 +295,55 @@ export function compileScene(scene: SceneDescription): CompiledScene {
     flat.push(...list);
   });
 
-  const emitterMedium = mediumOf(scene.emitter.medium, 'emitter');
-  if (!scene.media[emitterMedium].box) throw new Error(`scene: the emitter's medium '${scene.emitter.medium}' must be a box`);
+  const em = scene.emitter;
+  const surfaceOf = (name: string): number => {
+    const i = surfaceIndex.get(name);
+    if (i === undefined) throw new Error(`scene: the emitter names unknown surface '${name}'`);
+    return i;
+  };
+  const emitterMedium = mediumOf(em.medium, 'emitter');
+  const boxEmitter = em.mode === 'plane' || em.mode === 'volume';
+  if (boxEmitter && !scene.media[emitterMedium].box) throw new Error(`scene: the emitter's medium '${em.medium}' must be a box`);
+  if (em.mode === 'lambertian' && !em.source) throw new Error("scene: a 'lambertian' emitter needs its source");
+  if (em.mode === 'rays' && !(em.rays && em.rays.length >= EMIT_RAY_STRIDE)) throw new Error("scene: a 'rays' emitter needs at least one ray");
+  const emitterKind =
+    em.mode === 'plane'
+      ? EMIT_PLANE
+      : em.mode === 'volume'
+        ? EMIT_VOLUME
+        : em.mode === 'rays'
+          ? EMIT_RAYS
+          : em.source?.shape === 'disc'
+            ? EMIT_LAMBERTIAN_DISC
+            : EMIT_LAMBERTIAN_RECT;
+  // The ray table with cumulative weights, normalised so the last is 1 (drawn by bisection)
+  let emitterRays = new Float64Array(0);
+  if (em.mode === 'rays' && em.rays) {
+    emitterRays = Float64Array.from(em.rays);
+    let sum = 0;
+    for (let i = EMIT_RAY_STRIDE - 1; i < emitterRays.length; i += EMIT_RAY_STRIDE) {
+      sum += emitterRays[i];
+      emitterRays[i] = sum;
+    }
+    for (let i = EMIT_RAY_STRIDE - 1; i < emitterRays.length; i += EMIT_RAY_STRIDE) emitterRays[i] /= sum;
+  }
   if (phosphors.length && !scene.chipSpectrum) throw new Error('scene: a phosphor medium needs the chip spectrum');
-  const direction = scene.emitter.direction ?? 'isotropic';
+  const direction = em.direction ?? 'isotropic';
   return {
     media,
     surfaces,
     bounds: Int32Array.from(flat),
     outside,
     emitterMedium,
-    emitterVolume: scene.emitter.mode === 'volume',
-    emitterZ: scene.emitter.z,
-    emitterDirection: direction === 'down' ? EMIT_DOWN : direction === 'lambertian-down' ? EMIT_LAMBERTIAN_DOWN : EMIT_ISOTROPIC,
+    emitterVolume: em.mode === 'volume',
+    emitterKind,
+    emitterZ: em.z,
+    emitterDirection: direction === 'down' ? DIRECTION_DOWN : direction === 'lambertian-down' ? DIRECTION_LAMBERTIAN_DOWN : DIRECTION_ISOTROPIC,
+    emitterHalfWidth: em.source ? em.source.widthMm / 2 : 0,
+    emitterHalfLength: em.source ? (em.source.shape === 'disc' ? em.source.widthMm : em.source.lengthMm) / 2 : 0,
+    emitterRays,
+    emitterSurface: em.surface === undefined ? NONE : surfaceOf(em.surface),
+    profiles,
     spectral: phosphors.length && scene.chipSpectrum ? buildSpectralTables(scene.chipSpectrum, phosphors) : null,
     phosphorBins,
     track: scene.polarization === 'track',

@@ -66,6 +66,15 @@ function shapeCorner(sh: Shape): [number, number, number] {
       return [Math.max(sh.r0, sh.r1), 0, Math.max(Math.abs(sh.z0), Math.abs(sh.z1))];
     case 'spheroid-cap':
       return [sh.radius, 0, Math.max(Math.abs(sh.zCentre), Math.abs(sh.zCentre + sh.height))];
+    case 'revolution': {
+      let r = 0;
+      let z = 0;
+      for (let i = 0; i < sh.r.length; i++) {
+        r = Math.max(r, Math.abs(sh.r[i]));
+        z = Math.max(z, Math.abs(sh.z[i]));
+      }
+      return [r, 0, z];
+    }
   }
 }
 

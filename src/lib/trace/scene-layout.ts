@@ -10,7 +10,7 @@ export const SHAPE_DISC = 1;
 export const SHAPE_CYLINDER = 2;
 export const SHAPE_FRUSTUM = 3;
 export const SHAPE_SPHEROID_CAP = 4;
-/** Reserved: surface of revolution from a sampled profile (scene.ts); nothing compiles to it yet. */
+/** Surface of revolution from a sampled profile (scene.ts, revolution-shape.ts). */
 export const SHAPE_REVOLUTION = 5;
 
 // Behaviour kinds
@@ -78,7 +78,7 @@ export const SURFACE_STRIDE = 19;
  *   cylinder:      radius, z0, z1
  *   frustum:       r0, z0, r1, z1, slope (r1 − r0)/(z1 − z0)
  *   spheroid cap:  R, h, zCentre, 1/R², 1/h²
- *   revolution (reserved): sample count, offset into the profile table
+ *   revolution:    index into the compiled scene's `profiles`, its surface index (slot for its last normal)
  * Behaviour parameters (offsets from S_B):
  *   textured:      scattered fraction s
  *   mirror:        R (or −1 for a metal), metal n, metal k, √R (for the tracked mirror)
@@ -104,3 +104,20 @@ export const COUNTERS = 4;
 // Fixed ledger bins, before the scene's own
 export const BIN_EVENT_CAP = 0;
 export const BIN_GEOMETRY_ERROR = 1;
+
+// Emitter kinds (CompiledScene.emitterKind)
+export const EMIT_PLANE = 0;
+export const EMIT_VOLUME = 1;
+export const EMIT_LAMBERTIAN_RECT = 2;
+export const EMIT_LAMBERTIAN_DISC = 3;
+export const EMIT_RAYS = 4;
+/** Doubles per ray of an emitter ray table: x, y, z, dx, dy, dz, cumulative weight. */
+export const EMIT_RAY_STRIDE = 7;
+
+// Directions of the rays a chip emitter sends (CompiledScene.emitterDirection, SceneEmitter.direction)
+export const DIRECTION_ISOTROPIC = 0;
+export const DIRECTION_DOWN = 1;
+export const DIRECTION_LAMBERTIAN_DOWN = 2;
+
+/** Doubles per recorded escape (recordEscapes): x, y, z, dx, dy, dz, wavelength (nm; NaN when the rays carry none). */
+export const ESCAPE_RECORD = 7;

@@ -60,14 +60,19 @@ export interface SpheroidCapShape {
   zCentre: number;
 }
 
-/*
- * Reserved for the beam-optics bodies: a surface of revolution from a sampled profile r(z) (points
- * (z_i, r_i), z increasing, linear between them), normal away from the axis. Packed as shape kind
- * SHAPE_REVOLUTION with the sample count and an offset into a per-scene profile table. It is not a
- * member of `Shape` until its intersection (per-segment cone frustums, nearest valid root) exists.
+/**
+ * Surface of revolution about the z axis from a sampled meridian polyline (r_i, z_i), linear between
+ * points (each segment a cone frustum, a flat annulus or a cylinder). The normal of segment i is
+ * (Δz, −Δr)/|Δ| in the (r, z) plane: walking along the polyline with r to the right and z up, the
+ * front is on the right (the optic-design profile convention). Intersection: revolution-shape.ts.
  */
+export interface RevolutionShape {
+  kind: 'revolution';
+  r: Float64Array;
+  z: Float64Array;
+}
 
-export type Shape = RectShape | DiscShape | CylinderShape | FrustumShape | SpheroidCapShape;
+export type Shape = RectShape | DiscShape | CylinderShape | FrustumShape | SpheroidCapShape | RevolutionShape;
 
 /** A specular mirror: fixed reflectance R, or a metal by its n + ik (R at the angle from the medium in front). */
 export type MirrorSpec = { kind: 'reflectance'; reflectance: number } | { kind: 'metal'; n: number; k: number };
@@ -140,17 +145,28 @@ export interface SceneSurface {
 }
 
 export interface SceneEmitter {
-  /** Medium the rays start in (a box medium). */
+  /** Medium the rays start in (a box medium for 'plane' and 'volume'). */
   medium: string;
-  /** 'plane': uniform over the box's footprint at height z; 'volume': uniform in the box. */
-  mode: 'plane' | 'volume';
   /**
-   * Directions: 'isotropic' (default); 'down': a collimated beam along −z; 'lambertian-down': a
-   * diffuse (cosine-weighted) beam into the lower half space — the two incidences of slab references.
+   * 'plane': uniform over the box's footprint at height z; 'volume': uniform in the box (both send the
+   * directions of `direction`); 'lambertian': cosine-weighted about +z from a flat source at height z
+   * (`source`); 'rays': each ray drawn from `rays` with probability ∝ its weight.
+   */
+  mode: 'plane' | 'volume' | 'lambertian' | 'rays';
+  /**
+   * Directions of a chip emitter ('plane', 'volume'): 'isotropic' (default); 'down': a collimated beam
+   * along −z; 'lambertian-down': a diffuse (cosine-weighted) beam into the lower half space — the two
+   * incidences of slab references.
    */
   direction?: 'isotropic' | 'down' | 'lambertian-down';
-  /** Emitting plane height, mm (used in 'plane' mode). */
+  /** Emitting plane height, mm (used in 'plane' and 'lambertian' mode). */
   z: number;
+  /** 'lambertian': a disc of diameter w or a w × l rectangle centred on the axis, mm. */
+  source?: { shape: 'disc' | 'rect'; widthMm: number; lengthMm: number };
+  /** 'rays': stride 7 per ray: x, y, z (mm), unit direction dx, dy, dz, weight (> 0). */
+  rays?: Float64Array;
+  /** 'lambertian', 'rays': the surface a ray's escape is credited to until it meets another (the source's own). */
+  surface?: string;
 }
 
 export interface SceneDescription {

@@ -15,11 +15,12 @@
  * Sources: T. L. Kay, J. T. Kajiya, SIGGRAPH '86 (planes, slabs); W. H. Press et al., Numerical
  * Recipes, 3rd ed., §5.6 (stable quadratic roots).
  */
+import { intersectRevolutionShape, revolutionNormal } from './revolution-shape';
 import * as layout from './scene-layout';
 
 // The layout's constants as module constants: under tsx (command line, bench) an imported binding is a
 // getter, which the optimiser does not always inline in a large function (measured: 3× slower loop)
-const { SHAPE_CYLINDER, SHAPE_DISC, SHAPE_FRUSTUM, SHAPE_RECT, SHAPE_SPHEROID_CAP, SIDE_FRONT, S_P, S_SHAPE } = layout;
+const { SHAPE_CYLINDER, SHAPE_DISC, SHAPE_FRUSTUM, SHAPE_RECT, SHAPE_REVOLUTION, SHAPE_SPHEROID_CAP, SIDE_FRONT, S_P, S_SHAPE } = layout;
 
 /** Rect: axis, at, normalSign, uMin, uMax, vMin, vMax from offset p. */
 export function intersectRect(s: Float64Array, p: number, side: number, ray: Float64Array, hit: Float64Array): boolean {
@@ -156,6 +157,8 @@ export function intersectSurface(s: Float64Array, o: number, side: number, ray: 
       return intersectFrustum(s, p, side, ray, hit);
     case SHAPE_SPHEROID_CAP:
       return intersectSpheroidCap(s, p, side, ray, hit);
+    case SHAPE_REVOLUTION:
+      return intersectRevolutionShape(s, p, side, ray, hit);
     default:
       return false;
   }
@@ -209,6 +212,9 @@ function curvedNormal(s: Float64Array, o: number, side: number, ray: Float64Arra
       normal[2] = gz * inv;
       return;
     }
+    case SHAPE_REVOLUTION:
+      revolutionNormal(s, p, side, normal);
+      return;
     default: {
       // Spheroid: outward ∇(x²/R² + y²/R² + (z − zc)²/h²) ∝ (x/R², y/R², (z − zc)/h²)
       const gx = ray[0] * s[p + 3];

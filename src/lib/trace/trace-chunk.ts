@@ -46,14 +46,16 @@
 import { fresnelRealAt, MIRROR_AMPLITUDES_LENGTH, mirrorAmplitudesAt } from '../optics/fresnel';
 import { reflectDirection, refractDirectionAt } from '../optics/snell';
 import { boxExit } from './box-exit';
-import { compileScene, EMIT_DOWN, EMIT_ISOTROPIC, type CompiledScene } from './compile-scene';
-import { configureSpectral, ENDED, isPhosphorMedium, launchWavelength, phosphorFlight, REDIRECTED, spectralEscape } from './medium-events';
+import { compileScene, type CompiledScene } from './compile-scene';
+import { configureSpectral, ENDED, isPhosphorMedium, launchWavelength, photon, phosphorFlight, REDIRECTED, spectralEscape } from './medium-events';
 import { createSpectralTally } from './spectral-tally';
 import { lambertianDirection } from './lambertian';
 import { DEFAULT_MAX_EVENTS, type TracePackage } from './package-spec';
 import { packageScene } from './package-scene';
 import { TRACK_TIR, TRACK_TRANSMITTED, launchPolarization, trackedInterface, trackedMirror } from './polarization';
 import { seedChunk, uniformsInto } from './rng';
+import { useRevolutionProfiles } from './revolution-shape';
+import { launchSourceRay } from './source-launch';
 import * as layout from './scene-layout';
 import { intersectSurface, surfaceNormal } from './shape-intersect';
 import { POLAR_BINS, type Tally } from './tally';
@@ -73,6 +75,10 @@ const {
   COUNTER_EVENTS,
   COUNTER_TIR_CHIP,
   COUNTER_TIR_OUTER,
+  DIRECTION_DOWN,
+  DIRECTION_ISOTROPIC,
+  EMIT_LAMBERTIAN_RECT,
+  ESCAPE_RECORD,
   MEDIUM_STRIDE,
   M_ABSORPTION,
   M_BIN,
@@ -140,10 +146,19 @@ let absorbing = false;
 let track = false;
 // Spectral rays (a phosphor in the scene: medium-events.ts) and the emitter's direction kind
 let spectral = false;
-let emitterDirection = EMIT_ISOTROPIC;
+let emitterDirection = DIRECTION_ISOTROPIC;
 const downAxis = new Float64Array([0, 0, -1]);
 // The emitting plane's height, mm (an array, so the double is not boxed)
 const emitterZ = new Float64Array(1);
+// A source that is not a chip (source-launch.ts): kind, [z, half width, half length], ray table
+let sourceKind = 0;
+const sourceParams = new Float64Array(3);
+let sourceRays: Float64Array = new Float64Array(0);
+let sourceSurface = NONE;
+
+// Escaping rays recorded for a ray file (recordEscapes): ESCAPE_RECORD doubles each, up to the buffer's length
+let escapeLog: Float64Array = new Float64Array(0);
+let escapesLogged = 0;
 
 // The current ray's medium and the last surface it met
 let medium = 0;
@@ -165,10 +180,34 @@ function configure(scene: CompiledScene, tally?: Tally): void {
   track = scene.track;
   emitterDirection = scene.emitterDirection;
   spectral = scene.spectral !== null && configureSpectral(scene, tally ? (tally.spectral ??= createSpectralTally()) : createSpectralTally());
+  sourceKind = scene.emitterKind;
+  sourceParams[0] = scene.emitterZ;
+  sourceParams[1] = scene.emitterHalfWidth;
+  sourceParams[2] = scene.emitterHalfLength;
+  sourceRays = scene.emitterRays;
+  sourceSurface = scene.emitterSurface;
+  useRevolutionProfiles(scene.profiles, scene.surfaceNames.length);
 }
 
-/** Starts a ray in the emitting medium: position, isotropic direction, polarisation, optical depth. */
+/** Starts a ray in the emitting medium (or from a source, see source-launch.ts): position, direction, polarisation, optical depth. */
 function launch(): void {
+  if (sourceKind >= EMIT_LAMBERTIAN_RECT) launchSourceRay(ray, sourceKind, sourceParams, sourceRays);
+  else launchFromChip();
+  if (track) {
+    uniformsInto(trackArgs, 1);
+    launchPolarization(direction, trackArgs);
+  }
+  // Optical depth to absorption, τ ~ Exp(1) by inverse transform (1 − u ∈ (0, 1]); none if nothing absorbs
+  if (absorbing) {
+    uniformsInto(u, 1);
+    ray[6] = -Math.log(1 - u[0]);
+  } else ray[6] = Infinity;
+  medium = emitterMedium;
+  lastSurface = sourceSurface;
+}
+
+/** Position and direction (isotropic, or a beam down for slab references) of a ray from the emitting chip layer. */
+function launchFromChip(): void {
   const o = emitterOffset;
   // Position on the emitting plane or in the volume of the emitting box
   uniformsInto(u, 2);
@@ -183,7 +222,7 @@ function launch(): void {
   }
   // Isotropic direction without trigonometry (Marsaglia 1972): (u, v) uniform in the unit disc,
   // s = u² + v²; then (2u√(1 − s), 2v√(1 − s), 1 − 2s) is uniform on the sphere
-  if (emitterDirection === EMIT_ISOTROPIC) {
+  if (emitterDirection === DIRECTION_ISOTROPIC) {
     let a = 0;
     let b = 0;
     let s = 1;
@@ -197,7 +236,7 @@ function launch(): void {
     ray[3] = k * a;
     ray[4] = k * b;
     ray[5] = 1 - 2 * s;
-  } else if (emitterDirection === EMIT_DOWN) {
+  } else if (emitterDirection === DIRECTION_DOWN) {
     ray[3] = 0;
     ray[4] = 0;
     ray[5] = -1;
@@ -205,17 +244,6 @@ function launch(): void {
     uniformsInto(u, 2);
     lambertianDirection(direction, downAxis, u);
   }
-  if (track) {
-    uniformsInto(trackArgs, 1);
-    launchPolarization(direction, trackArgs);
-  }
-  // Optical depth to absorption, τ ~ Exp(1) by inverse transform (1 − u ∈ (0, 1]); none if nothing absorbs
-  if (absorbing) {
-    uniformsInto(u, 1);
-    ray[6] = -Math.log(1 - u[0]);
-  } else ray[6] = Infinity;
-  medium = emitterMedium;
-  lastSurface = NONE;
 }
 
 /**
@@ -459,7 +487,27 @@ function escape(histogram: Float64Array): void {
   bins[bin]++;
   histogram[polarBin()]++;
   if (spectral) spectralEscape(ray[5]);
+  if ((escapesLogged + 1) * ESCAPE_RECORD <= escapeLog.length) logEscape();
   if (ray[5] < 0) counters[COUNTER_ESCAPED_BELOW]++;
+}
+
+/** Copies the escaping ray's position, direction and wavelength into the recording buffer. */
+function logEscape(): void {
+  const o = escapesLogged * ESCAPE_RECORD;
+  for (let k = 0; k < 6; k++) escapeLog[o + k] = ray[k];
+  escapeLog[o + 6] = spectral ? photon[0] : NaN;
+  escapesLogged++;
+}
+
+/**
+ * Records the position, direction and wavelength of the next escaping rays (ESCAPE_RECORD doubles each)
+ * into `buffer` until it is full, across the chunks traced after this call; an empty buffer stops recording.
+ * @returns a function giving the number of rays recorded so far
+ */
+export function recordEscapes(buffer: Float64Array): () => number {
+  escapeLog = buffer;
+  escapesLogged = 0;
+  return () => escapesLogged;
 }
 
 /**
