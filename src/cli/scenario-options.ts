@@ -32,9 +32,11 @@ export const SCENARIO_OPTION_HELP = `Package (defaults: the app's demo scenario,
   --body flat|cup                     flat base, or a reflector cup (the chip stands on its floor)
   --cup-floor-radius R --cup-top-radius R --cup-depth D   cup size, mm (defaults 1.3, 1.5, 0.8)
   --wall specular|diffuse --wall-reflectance R            cup wall finish and reflectance (diffuse, 0.93)
-  --shape flat|dome|none|cylinder     encapsulant shape; in a cup: flat fills it to the rim, dome adds a
-                                      dome on the rim plane, none leaves it empty (--body cup alone: flat)
-  --radius R --height H               encapsulant radius and height, mm (a dome with H = R is a hemisphere)
+  --shape flat|dome|none|cylinder|box encapsulant shape; in a cup: flat fills it to the rim, dome adds a
+                                      dome on the rim plane, none leaves it empty (--body cup alone: flat);
+                                      box: a square block (--radius its half side)
+  --radius R --height H               encapsulant radius (a box's half side) and height, mm (a dome with
+                                      H = R is a hemisphere)
   --n-enc N | --enc-material M        encapsulant: typed index or library material
   --enc-absorption A                  encapsulant bulk absorption, 1/mm
   --base-reflectance R | --base-material METAL   base (the cup floor): reflectance 0 to 1, or a metal

@@ -114,11 +114,11 @@ export function domeGap(pkg: TracePackage, closed: ClosedFormFacts, trace: Trace
       key: 'not-dome',
       text: 'There is no encapsulant: the trace is of the bare chip, while the closed-form dome value assumes a dome.'
     });
-  } else if (enc.shape === 'cylinder') {
+  } else if (enc.shape === 'cylinder' || enc.shape === 'box') {
     reasons.push({
       key: 'not-dome',
       text:
-        "The encapsulant is a flat-topped cylinder, not a dome: its flat top has its own escape cone and traps the rest " +
+        `The encapsulant is a ${enc.shape === 'box' ? 'square box' : 'flat-topped cylinder'}, not a dome: its flat faces have their own escape cones and trap the rest ` +
         'by total internal reflection, which the closed form (a spherical dome) does not have.'
     });
   } else {

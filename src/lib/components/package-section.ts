@@ -140,9 +140,15 @@ function shapePath(sh: Shape, halfWidth: number): string | null {
   }
 }
 
-/** The region a dome, cylinder or cup wall closes over the plane it stands on; null for flat shapes. */
+/**
+ * The region a dome, cylinder, cup wall or block top closes over the base plane it stands on (an upward
+ * rectangle: a block from z = 0 to its top); null for other flat shapes.
+ */
 function enclosedRegion(sh: Shape): string | null {
   switch (sh.kind) {
+    case 'rect':
+      if (sh.axis !== 2 || sh.normalSign !== 1) return null;
+      return polyline([[sh.uMin, 0], [sh.uMax, 0], [sh.uMax, sh.at], [sh.uMin, sh.at]], true);
     case 'spheroid-cap':
       return polyline(capPoints(sh.radius, sh.height, sh.zCentre), true);
     case 'cylinder':

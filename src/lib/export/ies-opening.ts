@@ -76,7 +76,7 @@ export function iesOpeningMetres(opening: IesOpening): [number, number, number] 
  * disc of the rim's diameter (a cylinder of the dome's height with a dome).
  */
 export function packageOpening(
-  encapsulant: { shape: 'none' | 'dome' | 'cylinder' | 'flat'; radiusMm: number; heightMm: number },
+  encapsulant: { shape: 'none' | 'dome' | 'cylinder' | 'box' | 'flat'; radiusMm: number; heightMm: number },
   chip: { widthMm: number; lengthMm: number; heightMm: number },
   body?: { kind: 'flat' } | { kind: 'cup'; topRadiusMm: number; fill?: 'flat' | 'dome' | 'none' }
 ): IesOpening {
@@ -89,5 +89,6 @@ export function packageOpening(
     return { shape: 'box', widthMm: chip.widthMm, lengthMm: chip.lengthMm, heightMm: chip.heightMm };
   }
   const d = 2 * encapsulant.radiusMm;
+  if (encapsulant.shape === 'box') return { shape: 'box', widthMm: d, lengthMm: d, heightMm: encapsulant.heightMm };
   return { shape: 'cylinder', widthMm: d, lengthMm: d, heightMm: encapsulant.heightMm };
 }

@@ -37,13 +37,16 @@ export function packageOutline(pkg: TracePackage): { sourcePlaneMm: number; topM
   if (pkg.encapsulant.shape === 'none') {
     return { sourcePlaneMm: pkg.chip.heightMm, topMm: pkg.chip.heightMm, radiusMm: Math.hypot(pkg.chip.widthMm, pkg.chip.lengthMm) / 2 };
   }
-  return { sourcePlaneMm: pkg.chip.heightMm, topMm: pkg.encapsulant.heightMm, radiusMm: pkg.encapsulant.radiusMm };
+  // a square box's outline circle passes through its corners
+  const r = pkg.encapsulant.shape === 'box' ? pkg.encapsulant.radiusMm * Math.SQRT2 : pkg.encapsulant.radiusMm;
+  return { sourcePlaneMm: pkg.chip.heightMm, topMm: pkg.encapsulant.heightMm, radiusMm: r };
 }
 
 /**
  * How far the optic's profile points dip into the package's envelope (the dome or cylinder of the flat body,
  * the cup's dome above its rim), mm: 0 when the optic clears it. The envelope of a dome is the spheroid
- * (r/R)² + (z/h)² = 1; of a cylinder the box r ≤ R, z ≤ h; points are in scene heights.
+ * (r/R)² + (z/h)² = 1; of a cylinder r ≤ R, z ≤ h; of a square box (half side R) r ≤ R√2 at its corners, z ≤ h;
+ * points are in scene heights.
  */
 export function packageIntrusionMm(pkg: TracePackage, r: ArrayLike<number>, z: ArrayLike<number>): number {
   const body = pkg.body;
@@ -56,7 +59,7 @@ export function packageIntrusionMm(pkg: TracePackage, r: ArrayLike<number>, z: A
     if (shape === 'dome' && rr < enc.radiusMm) {
       const zTop = base + enc.heightMm * Math.sqrt(1 - (rr / enc.radiusMm) ** 2);
       worst = Math.max(worst, zTop - z[i]);
-    } else if (shape === 'cylinder' && rr <= enc.radiusMm) {
+    } else if ((shape === 'cylinder' && rr <= enc.radiusMm) || (shape === 'box' && rr <= enc.radiusMm * Math.SQRT2)) {
       worst = Math.max(worst, enc.heightMm - z[i]);
     }
   }
@@ -72,7 +75,8 @@ export function packageIntrusionMm(pkg: TracePackage, r: ArrayLike<number>, z: A
  */
 export function packageEtendueAreaMm2(pkg: TracePackage): number {
   const { radiusMm } = packageOutline(pkg);
-  const outline = Math.PI * radiusMm * radiusMm;
+  // a square box's own face area (2R)², not its outline circle's
+  const outline = pkg.encapsulant.shape === 'box' && pkg.body?.kind !== 'cup' ? 2 * radiusMm * radiusMm : Math.PI * radiusMm * radiusMm;
   if (pkg.body?.kind === 'cup') return outline;
   const c = pkg.chip;
   const chipFaces = c.widthMm * c.lengthMm + 2 * c.heightMm * (c.widthMm + c.lengthMm);

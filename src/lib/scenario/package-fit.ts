@@ -24,7 +24,7 @@ export interface FitChip {
 }
 
 export interface FitEncapsulant {
-  shape: 'none' | 'dome' | 'cylinder' | 'flat';
+  shape: 'none' | 'dome' | 'cylinder' | 'box' | 'flat';
   radiusMm: number;
   heightMm: number;
 }
@@ -74,13 +74,15 @@ function atMost(x: number): string {
 
 /**
  * The smallest radius (exclusive) of an encapsulant of height h that holds the chip: for a dome
- * R > ρ/√(1 − H²/h²) (corner (ρ, H) inside the spheroid), for a cylinder R > ρ; ρ the half-diagonal.
+ * R > ρ/√(1 − H²/h²) (corner (ρ, H) inside the spheroid), for a cylinder R > ρ; ρ the half-diagonal;
+ * for a box (R its half side) R > max(w, l)/2.
  * Infinity when h ≤ H (nothing holds the chip).
  */
 export function minEncapsulantRadiusMm(chip: FitChip, enc: FitEncapsulant): number {
   const rho = Math.hypot(chip.widthMm / 2, chip.lengthMm / 2);
   if (!(enc.heightMm > chip.heightMm)) return Infinity;
   if (enc.shape === 'cylinder') return rho;
+  if (enc.shape === 'box') return Math.max(chip.widthMm, chip.lengthMm) / 2;
   return rho / Math.sqrt(1 - (chip.heightMm * chip.heightMm) / (enc.heightMm * enc.heightMm));
 }
 
@@ -119,7 +121,7 @@ function chipProblems(chip: FitChip): FitProblem[] {
 function cupProblems(chip: FitChip, enc: FitEncapsulant, cup: Extract<FitBody, { kind: 'cup' }>): FitProblem[] {
   const max = `${LIMITS.sizeMm.max} mm`;
   const problems: FitProblem[] = [];
-  if (enc.shape === 'cylinder') {
+  if (enc.shape === 'cylinder' || enc.shape === 'box') {
     problems.push({ path: 'encapsulant.shape', message: "Encapsulant shape in a cup must be 'flat' (filled to the rim), 'dome' (a dome on the rim) or 'none' (empty)." });
   }
   if (!(cup.topRadiusMm >= cup.floorRadiusMm)) {
@@ -152,7 +154,7 @@ export function packageFitProblems(chip: FitChip, enc: FitEncapsulant, body: Fit
   }
   if (body.kind === 'cup') return [...problems, ...cupProblems(chip, enc, body)];
   if (enc.shape === 'flat') {
-    problems.push({ path: 'encapsulant.shape', message: "Encapsulant shape 'flat' fills a cup: choose the cup body, or shape 'none', 'dome' or 'cylinder'." });
+    problems.push({ path: 'encapsulant.shape', message: "Encapsulant shape 'flat' fills a cup: choose the cup body, or shape 'none', 'dome', 'cylinder' or 'box'." });
     return problems;
   }
   const H = chip.heightMm;
@@ -164,7 +166,7 @@ export function packageFitProblems(chip: FitChip, enc: FitEncapsulant, body: Fit
   }
   const minR = minEncapsulantRadiusMm(chip, enc);
   if (!(enc.radiusMm > minR)) {
-    const why = enc.shape === 'dome' ? "so the chip's corners are inside the dome" : "the chip's half-diagonal";
+    const why = enc.shape === 'dome' ? "so the chip's corners are inside the dome" : enc.shape === 'box' ? "half the chip's longer side" : "the chip's half-diagonal";
     problems.push({
       path: 'encapsulant.radiusMm',
       message:

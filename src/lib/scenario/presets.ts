@@ -5,8 +5,8 @@
  * - The demo: a single-box chip on a silvered flat base under a hemispherical silicone dome.
  * - A mid-power cup: a reflector cup 2.6 mm across at the floor, 3.0 mm at the rim, 0.8 mm deep, with a
  *   white diffuse wall (R 0.93) and a silvered floor (R 0.95), a flip chip on sapphire, filled flat.
- * - A chip-scale package: the flip chip in a thin encapsulant layer and no cup. The scene model has no
- *   box-shaped fill, so the thin layer is a cylinder just wider than the chip's half-diagonal.
+ * - A chip-scale package: the flip chip in a thin square block of encapsulant (0.1 mm beyond each side,
+ *   0.3 mm high) on a white diffuse base, no cup.
  *
  * Indices come from the library at the scenario's wavelength: GaN (the emitting film) and sapphire,
  * ordinary ray (the substrate, flipped up).
@@ -54,7 +54,7 @@ function chipScale(): Scenario {
   s.base = { kind: 'reflectance', reflectance: 0.8 };
   s.baseFinish = 'diffuse';
   s.body = { kind: 'flat' };
-  s.encapsulant = { ...s.encapsulant, shape: 'cylinder', radiusMm: 0.8, heightMm: 0.3 };
+  s.encapsulant = { ...s.encapsulant, shape: 'box', radiusMm: 0.6, heightMm: 0.3 };
   return s;
 }
 
@@ -63,6 +63,6 @@ export function packagePresets(): PackagePreset[] {
   return [
     { id: 'demo-dome', label: 'Dome demo: single-box chip under a silicone dome', scenario: demoScenario() },
     { id: 'mid-power-cup', label: 'Mid-power cup: flip chip, diffuse wall, flat fill', scenario: midPowerCup() },
-    { id: 'chip-scale', label: 'Chip-scale: flip chip in a thin cylinder, no cup', scenario: chipScale() }
+    { id: 'chip-scale', label: 'Chip-scale: flip chip in a thin square block, no cup', scenario: chipScale() }
   ];
 }

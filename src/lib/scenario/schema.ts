@@ -196,8 +196,11 @@ const bodySchema = z.discriminatedUnion(
 const encapsulantSchema = z
   .object({
     medium: encapsulantMedium('Encapsulant'),
-    /** Flat body: none, dome or cylinder. Cup: 'flat' fills it to the rim, 'dome' adds a dome on the rim plane, 'none' leaves it empty. */
-    shape: z.enum(['none', 'dome', 'cylinder', 'flat'], { error: "Encapsulant shape must be 'none', 'dome', 'cylinder' or 'flat'." }),
+    /**
+     * Flat body: none, dome, cylinder or box (a square block, radiusMm its half side). Cup: 'flat' fills it to the
+     * rim, 'dome' adds a dome on the rim plane, 'none' leaves it empty.
+     */
+    shape: z.enum(['none', 'dome', 'cylinder', 'box', 'flat'], { error: "Encapsulant shape must be 'none', 'dome', 'cylinder', 'box' or 'flat'." }),
     radiusMm: num('Encapsulant radius', LIMITS.sizeMm),
     heightMm: num('Encapsulant height', LIMITS.sizeMm),
     absorptionPerMm: num('Encapsulant absorption', LIMITS.absorptionPerMm)

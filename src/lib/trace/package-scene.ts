@@ -4,7 +4,8 @@
  * once, by validateTracePackage, before a package gets here.
  *
  * The flat body: the chip stands on an endless base plane z = 0 (a specular or diffuse reflector)
- * under a dome (spheroid cap), a cylinder (wall and flat top disc) or nothing (the chip in the outside
+ * under a dome (spheroid cap), a cylinder (wall and flat top disc), a square box (four side rectangles
+ * and a top) or nothing (the chip in the outside
  * medium; the base then borders nothing the rays can reach again, as escape is final).
  * The cup body: see body-cup.ts; its floor is the base.
  * The chip: one box, or layers (body-chip.ts); its bottom is the base beneath it, or its own mirror.
@@ -22,6 +23,31 @@ import type { Behaviour, SceneDescription, SceneMedium, SceneSurface } from './s
 
 const OUTSIDE = 'outside';
 const ENCAPSULANT = 'encapsulant';
+
+/** A square encapsulant block |x|, |y| ≤ s, 0 ≤ z ≤ h: four sides and the top, the outside in front. */
+function encapsulantBoxSurfaces(s: number, h: number): SceneSurface[] {
+  const side = (name: string, axis: 0 | 1, sign: 1 | -1): SceneSurface => ({
+    name,
+    shape: { kind: 'rect', axis, at: sign * s, normalSign: sign, uMin: -s, uMax: s, vMin: 0, vMax: h },
+    front: OUTSIDE,
+    behind: ENCAPSULANT,
+    behaviour: { kind: 'fresnel' },
+    escapedBin: 'box sides'
+  });
+  return [
+    {
+      name: 'box top',
+      shape: { kind: 'rect', axis: 2, at: h, normalSign: 1, uMin: -s, uMax: s, vMin: -s, vMax: s },
+      front: OUTSIDE,
+      behind: ENCAPSULANT,
+      behaviour: { kind: 'fresnel' }
+    },
+    side('box +x', 0, 1),
+    side('box −x', 0, -1),
+    side('box +y', 1, 1),
+    side('box −y', 1, -1)
+  ];
+}
 
 /** The scene of a package (trusted input: check it first with validateTracePackage). */
 export function packageScene(pkg: TracePackage): SceneDescription {
@@ -83,6 +109,8 @@ export function packageScene(pkg: TracePackage): SceneDescription {
         behaviour: { kind: 'fresnel' },
         legacyEscape: 'escapedDome'
       });
+    } else if (enc.shape === 'box') {
+      surfaces.push(...encapsulantBoxSurfaces(enc.radiusMm, enc.heightMm));
     } else {
       surfaces.push(
         {

@@ -76,12 +76,15 @@ export type TraceBase =
   | { kind: 'reflectance'; reflectance: number }
   | { kind: 'metal'; n: number; k: number };
 
-export type EncapsulantShape = 'none' | 'dome' | 'cylinder';
+export type EncapsulantShape = 'none' | 'dome' | 'cylinder' | 'box';
 
 export interface TraceEncapsulant {
-  /** 'dome': upper half of the spheroid x²/R² + y²/R² + z²/h² = 1; 'cylinder': radius R, height h, flat top. */
+  /**
+   * 'dome': upper half of the spheroid x²/R² + y²/R² + z²/h² = 1; 'cylinder': radius R, height h, flat top;
+   * 'box': a square block |x|, |y| ≤ R (R the half side), height h, flat top (a chip-scale package).
+   */
   shape: EncapsulantShape;
-  /** R, mm (ignored for 'none'). */
+  /** R, mm: the radius, or a box's half side (ignored for 'none'). */
   radiusMm: number;
   /** h, mm (ignored for 'none'); h = R makes a hemisphere. */
   heightMm: number;
@@ -242,7 +245,7 @@ export function validateTracePackage(p: TracePackage): void {
     requireChoice('body.kind', p.body.kind, ['flat', 'cup']);
     if (p.body.kind === 'cup') return validateCup(p, p.body);
   }
-  requireChoice('encapsulant.shape', enc.shape, ['none', 'dome', 'cylinder']);
+  requireChoice('encapsulant.shape', enc.shape, ['none', 'dome', 'cylinder', 'box']);
   if (enc.shape === 'none') return;
   requireRange('encapsulant.radiusMm', enc.radiusMm, L.sizeMm.min, L.sizeMm.max);
   requireRange('encapsulant.heightMm', enc.heightMm, L.sizeMm.min, L.sizeMm.max);

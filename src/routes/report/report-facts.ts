@@ -32,7 +32,9 @@ export function scenarioRows(s: Scenario, r: ResolvedScenario): FactRow[] {
   else {
     rows.push(
       ['Encapsulant', `${r.encapsulant.label}, n ${fmtNumber(r.encapsulant.n, 4)}, absorption ${fmtPlain(enc.absorptionPerMm)} /mm`],
-      ['Encapsulant shape', `${enc.shape === 'dome' ? 'dome' : 'cylinder'}, radius ${fmtPlain(enc.radiusMm)} mm, height ${fmtPlain(enc.heightMm)} mm`]
+      ['Encapsulant shape', enc.shape === 'box'
+        ? `square box, ${fmtPlain(2 * enc.radiusMm)} × ${fmtPlain(2 * enc.radiusMm)} mm, height ${fmtPlain(enc.heightMm)} mm`
+        : `${enc.shape === 'dome' ? 'dome' : 'cylinder'}, radius ${fmtPlain(enc.radiusMm)} mm, height ${fmtPlain(enc.heightMm)} mm`]
     );
   }
   rows.push(['Outside medium', `${r.outside.label}, n ${fmtNumber(r.outside.n, 4)}`]);

@@ -33,6 +33,14 @@ describe('packageFitProblems(chip, encapsulant)', () => {
     expect(packageFitProblems(chip, { shape: 'cylinder', radiusMm: 2, heightMm: 0.15 })[0].path).toBe('encapsulant.heightMm');
     expect(packageFitProblems(chip, { shape: 'none', radiusMm: 0.001, heightMm: 0.001 })).toEqual([]);
   });
+
+  it("a square box (R its half side) must reach past half the chip's longer side and rise above the chip", () => {
+    const long = { ...chip, lengthMm: 1.4 };
+    expect(minEncapsulantRadiusMm(long, { shape: 'box', radiusMm: 1, heightMm: 1 })).toBe(0.7);
+    expect(packageFitProblems(long, { shape: 'box', radiusMm: 0.7, heightMm: 1 })[0].message).toMatch(/half the chip's longer side \(0\.7\d* mm\)/);
+    expect(packageFitProblems(long, { shape: 'box', radiusMm: 0.71, heightMm: 1 })).toEqual([]);
+    expect(packageFitProblems(long, { shape: 'box', radiusMm: 1, heightMm: 0.1 })[0].path).toBe('encapsulant.heightMm');
+  });
 });
 
 describe('packageFitProblems with a cup, layers and a base finish', () => {
@@ -62,6 +70,7 @@ describe('packageFitProblems with a cup, layers and a base finish', () => {
     expect(packageFitProblems(chip, { shape: 'dome', radiusMm: 1.6, heightMm: 1 }, cup)[0].message).toMatch(/top radius \(1\.5 mm\)/);
     expect(packageFitProblems(chip, flatFill, { ...cup, topRadiusMm: 1.2 })[0].path).toBe('body.topRadiusMm');
     expect(packageFitProblems(chip, { ...flatFill, shape: 'cylinder' }, cup)[0].path).toBe('encapsulant.shape');
+    expect(packageFitProblems(chip, { ...flatFill, shape: 'box' }, cup)[0].path).toBe('encapsulant.shape');
     expect(packageFitProblems(chip, flatFill)[0].path).toBe('encapsulant.shape');
   });
 

@@ -13,6 +13,11 @@ const packages: [string, TracePackage][] = [
   ['cup with a dome on the rim', { ...cup, body: { ...(cup.body as object), fill: 'dome' } as TracePackage['body'] }],
   ['empty cup, tracked polarisation', { ...cup, polarization: 'track', body: { ...(cup.body as object), fill: 'none' } as TracePackage['body'] }],
   ['thin-film chip, textured top, diffuse base, dome', { ...domePackage(), chip: { ...thinFilmChip(), topScatter: 0.5 }, baseFinish: 'diffuse' }],
+  ['chip-scale: flip chip in a square box, diffuse base', {
+    ...withEncapsulant(domePackage(), { shape: 'box', radiusMm: 0.6, heightMm: 0.3, n: 1.41, absorptionPerMm: 0.001 }),
+    chip: flipChipOnSapphire(),
+    baseFinish: 'diffuse'
+  }],
   ['flip chip, bare, metal mirror, volume emission', {
     ...withEncapsulant(domePackage(), NO_ENCAPSULANT),
     chip: { ...flipChipOnSapphire({ mirror: { kind: 'metal', n: 0.04382, k: 3.6101 } }), emission: 'volume' }
@@ -27,6 +32,18 @@ describe('packageScene(pkg) traced', () => {
     expect(t.escaped + t.absorbedChip + t.absorbedEncapsulant + t.absorbedBase + t.lost).toBe(4000);
     expect(t.geometryErrors).toBe(0);
     expect(t.polarHistogram.reduce((a, b) => a + b, 0)).toBe(t.escaped);
+  });
+
+  it('a square box of the outside index is invisible: extraction equals the bare chip within 4σ (Fresnel R = 0 between equal indices; Born & Wolf §1.5.2)', () => {
+    const rays = 40_000;
+    const bare = traceChunk(withEncapsulant(domePackage(), NO_ENCAPSULANT), 0, rays, 11, createTally());
+    const boxed = traceChunk(withEncapsulant(domePackage(), { shape: 'box', radiusMm: 0.8, heightMm: 0.5, n: 1, absorptionPerMm: 0 }), 0, rays, 12, createTally());
+    const p = bare.escaped / rays;
+    const q = boxed.escaped / rays;
+    const sigma = Math.sqrt((p * (1 - p) + q * (1 - q)) / rays);
+    expect(Math.abs(p - q)).toBeLessThan(4 * sigma);
+    // the box's escapes are credited to its own faces
+    expect(Object.keys(boxed.parts).filter((b) => b.startsWith('escaped:')).sort()).toEqual(['escaped:box sides', 'escaped:box top']);
   });
 
   it('a textured top with s = 0 gives the flat chip bit for bit (no random number drawn)', () => {
