@@ -9,6 +9,8 @@ const panel = (page: Page) => page.getByRole('complementary', { name: 'Scenario'
 const drawing = (page: Page) => page.getByRole('img', { name: /^Cross-section of/ });
 
 async function choosePreset(page: Page, label: RegExp) {
+  // a choice made before the page has hydrated would reach no handler
+  await page.locator('html[data-ready="true"]').waitFor({ state: 'attached' });
   const select = panel(page).getByLabel('Start from a preset');
   const option = await select.locator('option', { hasText: label }).getAttribute('value');
   await select.selectOption(option!);
