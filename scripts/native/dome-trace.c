@@ -92,7 +92,7 @@ static inline int interface_event(double d[3], double nx, double ny, double nz, 
   if (cosi < 0) cosi = 0; /* a roundoff graze from the wrong side counts as grazing */
   if (cosi > 1) cosi = 1;
   const double eta = n1 / n2;
-  /* Snell's law: sin t = (n1/n2) sin i (Hecht, Optics, 5th ed., eq. 4.4) */
+  /* Snell's law: sin t = (n1/n2) sin i (Hecht, Optics, 5th ed., §4.4) */
   const double sin2t = eta * eta * (1 - cosi * cosi);
   int reflect;
   double cost = 0;
@@ -100,7 +100,7 @@ static inline int interface_event(double d[3], double nx, double ny, double nz, 
     reflect = 1; /* total internal reflection (Hecht, §4.7) */
   } else {
     cost = sqrt(1 - sin2t);
-    /* Fresnel amplitude coefficients, s and p (Born & Wolf, Principles of Optics, 7th ed., §1.5.2, eq. 21) */
+    /* Fresnel amplitude coefficients, s and p (Born & Wolf, Principles of Optics, 7th ed., §1.5.2) */
     const double rs = (n1 * cosi - n2 * cost) / (n1 * cosi + n2 * cost);
     const double rp = (n2 * cosi - n1 * cost) / (n2 * cosi + n1 * cost);
     /* Unpolarised light: R = (Rs + Rp)/2; reflect with probability R (Pharr et al., PBR 3rd ed., §14.1) */
