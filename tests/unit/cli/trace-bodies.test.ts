@@ -70,7 +70,7 @@ describe('outcouple trace with package bodies', () => {
     [['--top-texture', '-0.1'], '--top-texture: Textured top fraction must be between 0 and 1.'],
     [['--chip-mirror', '1.2'], '--chip-mirror: Chip mirror reflectance must be between 0 and 1.'],
     [['--wall', 'diffuse'], '--wall needs --body cup (a reflector cup)'],
-    [['--shape', 'flat'], "--shape: Encapsulant shape 'flat' fills a cup: choose the cup body, or shape 'none', 'dome' or 'cylinder'."],
+    [['--shape', 'flat'], "--shape: Encapsulant shape 'flat' fills a cup: choose the cup body, or shape 'none', 'dome', 'cylinder' or 'box'."],
     [['--base', 'diffuse', '--base-material', 'ag'], '--base: Base finish can be diffuse only for a base given by its reflectance (0 to 1), not for a metal.']
   ])('refuses %j in one line naming the option and range, exit 2', (args, message) => {
     const run = runCli(['trace', ...args, '--rays', '1000']);

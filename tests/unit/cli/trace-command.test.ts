@@ -96,7 +96,7 @@ describe('outcouple trace', () => {
 
   it.each([
     [['trace', '--rays', '10'], /^outcouple trace: --rays: Rays must be a whole number between 1000 and 20000000 rays\.$/m],
-    [['trace', '--shape', 'cone'], /^outcouple trace: --shape: Encapsulant shape must be 'none', 'dome', 'cylinder' or 'flat'\.$/m],
+    [['trace', '--shape', 'cone'], /^outcouple trace: --shape: Encapsulant shape must be 'none', 'dome', 'cylinder', 'box' or 'flat'\.$/m],
     [['trace', '--n-out', '7'], /^outcouple trace: --n-out: Outside medium index n must be between 1 and 6\.$/m],
     [['trace', '--chip', '5x1'], /^outcouple trace: --chip: Encapsulant radius must be more than 2\.56 mm/m],
     [['trace', '--radius', '0.4', '--height', '0.4', '--rays', '1000'], /fit|radius/i],

@@ -49,10 +49,10 @@ describe('packageSection(scene)', () => {
     expect(s.strokes.find((x) => x.surface === 'wall')!.title).toBe('wall: radius 1.3 mm at z = 0 mm to 1.5 mm at z = 0.8 mm; diffuse (Lambertian) reflector, R = 0.93');
   });
 
-  it('the chip-scale package: a thin cylinder fill of radius 0.8 mm and height 0.3 mm on a diffuse base', () => {
+  it('the chip-scale package: a square block 1.2 mm wide and 0.3 mm high on a diffuse base', () => {
     const s = packageSection(csp);
     const fill = s.regions.find((r) => r.role === 'encapsulant')!;
-    expect(numbers(fill.d)).toEqual([-0.8, 0, 0.8, 0, 0.8, -0.3, -0.8, -0.3]);
+    expect(numbers(fill.d)).toEqual([-0.6, 0, 0.6, 0, 0.6, -0.3, -0.6, -0.3]);
     expect(s.strokes.find((x) => x.surface === 'base')!.style).toBe('diffuse');
   });
 
