@@ -14,6 +14,9 @@ export type OpticKind = 'reflector' | 'lens' | 'tir';
 export const OPTIC_KINDS: readonly OpticKind[] = ['reflector', 'lens', 'tir'];
 export const OPTIC_LABEL: Record<OpticKind, string> = { reflector: 'Metal reflector', lens: 'Lens', tir: 'TIR collimator' };
 
+/** The page's ray counts per optic (the three optics are traced together: three times this many rays). */
+export const RAY_CHOICES = [100_000, 250_000, 1_000_000, 2_000_000] as const;
+
 export interface BeamForm {
   picked: OpticKind;
   exitDiameterMm: number;
@@ -85,6 +88,25 @@ export function inFieldTerms(message: string): string {
   let m = message;
   for (const [pattern, label] of FIELD_LABEL) m = m.replace(pattern, label);
   return m;
+}
+
+/** The page's fields a design refusal can name (inFieldTerms's labels). */
+export const BEAM_FIELDS = ['Exit diameter', 'Height', 'Gap', 'Target beam', 'Reflector reflectance'] as const;
+export type BeamField = (typeof BEAM_FIELDS)[number];
+
+/**
+ * Where each optic that cannot be designed says why: its one-line reason beside the field it names
+ * ("TIR collimator: Height: … fits heights in (7.24, 11.5) mm"), the others traced as usual.
+ */
+export function fieldNotes(prepared: Record<OpticKind, PreparedOptic | string>): Partial<Record<BeamField, string>> {
+  const notes: Partial<Record<BeamField, string>> = {};
+  for (const k of OPTIC_KINDS) {
+    const p = prepared[k];
+    if (typeof p !== 'string') continue;
+    const field = BEAM_FIELDS.find((f) => p.startsWith(f));
+    if (field) notes[field] = [notes[field], `${OPTIC_LABEL[k]}: ${p}`].filter(Boolean).join(' ');
+  }
+  return notes;
 }
 
 /** Designs the three optics: each prepared, or the one-line reason it cannot be designed. */
