@@ -13,6 +13,8 @@ test('three optics traced side by side, drawn, and bad input refused beside the 
   const table = page.getByTestId('beam-results');
   await expect(table).toBeVisible({ timeout: 45_000 });
   await expect(table).toContainText('cd/klm');
+  // traced on the worker pool, its speed stated
+  await expect(page.getByText(/traced in [\d.]+ s on \d+ workers? \([\d.]+ million rays\/s\)/)).toBeVisible();
   await expect(page.locator('svg.section polyline').first()).toBeVisible();
   await expect(page.locator('svg.section polyline')).toHaveCount(50 + 2 * 5);
 
@@ -21,8 +23,25 @@ test('three optics traced side by side, drawn, and bad input refused beside the 
   await expect(page.locator('#beam-reflectance-error')).toContainText('Reflector reflectance');
   await expect(table).toBeVisible();
 
-  // a 3° target beam from this source is below the étendue limit
+  // a 3° target beam from this source is below the étendue limit: refused beside its field in one line
   await page.getByLabel('Target beam (full angle)').fill('3');
-  await expect(page.getByTestId('target-note')).toContainText('the limit is 6.47°');
+  await expect(page.locator('#beam-target-error')).toContainText('no optic of this size can make a 3° beam from this source; the limit is 6.47°');
+  // … and sizing the exit for it gives an exit the étendue allows: 2·√(1/π)/sin 1.5° = 43.1 mm, +15 %
+  await page.getByRole('button', { name: 'Size the exit for this beam' }).click();
+  await expect(page.getByTestId('target-note')).toContainText('at least 43.1 mm');
+  await expect(page.getByLabel('Exit diameter')).toHaveValue('49.6');
+  await page.reload(); // the design form is the page's own: back to its defaults
+  await expect(table).toBeVisible({ timeout: 45_000 });
+
+  // an optic smaller than the source: every design refuses, one line beside the field, the table stays
+  await page.getByLabel('Exit diameter').fill('1');
+  await expect(page.locator('#beam-exit-error')).toHaveText(/^Exit diameter must exceed the source's diameter 1.41 mm: the optic is smaller than the source/);
+  await expect(table).toBeVisible();
+  await page.getByLabel('Exit diameter').fill('20');
+
+  // a height the TIR collimator cannot hold: it says why beside the Height field, the other optics are traced
+  await page.getByLabel('Height', { exact: true }).fill('3');
+  await expect(page.locator('#beam-height-hint')).toContainText('TIR collimator: Height: a TIR collimator 20 mm wide');
+  await expect(page.getByText(/traced in [\d.]+ s on \d+ worker/)).toBeVisible({ timeout: 45_000 });
   await expect(page.locator('main')).not.toContainText('NaN');
 });
