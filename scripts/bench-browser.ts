@@ -11,7 +11,7 @@
  *
  *   npx tsx scripts/bench-browser.ts [--rounds 5]        # E2E_PORT=4393 for another port
  */
-import { existsSync, readdirSync } from 'node:fs';
+import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import { chromium } from '@playwright/test';
 import { prepareOptic } from '../src/lib/optic-trace/optic-run';
 import { chunkPlan, dealSceneUnits } from '../src/lib/trace/chunk-plan';
@@ -42,6 +42,32 @@ function plain(value: unknown): unknown {
   return value;
 }
 
+/**
+ * CPU seconds used so far by the browser and every process under it (Linux /proc; the workers are
+ * threads of the renderer): on a shared machine rays per CPU second is the steadier figure.
+ */
+function browserCpuSeconds(rootPid: number): number {
+  const tick = 100; // USER_HZ on Linux
+  const stats = readdirSync('/proc')
+    .filter((d) => /^\d+$/.test(d))
+    .map((d) => {
+      try {
+        const f = readFileSync(`/proc/${d}/stat`, 'utf8');
+        const rest = f.slice(f.lastIndexOf(')') + 2).split(' ');
+        return { pid: Number(d), ppid: Number(rest[1]), cpu: (Number(rest[11]) + Number(rest[12])) / tick };
+      } catch {
+        return null;
+      }
+    })
+    .filter((x): x is { pid: number; ppid: number; cpu: number } => x !== null);
+  const inTree = new Set([rootPid]);
+  for (let grew = true; grew; ) {
+    grew = false;
+    for (const s of stats) if (!inTree.has(s.pid) && inTree.has(s.ppid)) (inTree.add(s.pid), (grew = true));
+  }
+  return stats.filter((s) => inTree.has(s.pid)).reduce((a, s) => a + s.cpu, 0);
+}
+
 interface PoolRun {
   scenes: unknown[];
   rays: number;
@@ -51,7 +77,9 @@ interface PoolRun {
 
 async function main() {
   const executablePath = process.env.CHROMIUM_PATH ?? (existsSync('/usr/bin/chromium') ? '/usr/bin/chromium' : undefined);
-  const browser = await chromium.launch({ executablePath, args: ['--no-sandbox', '--disable-gpu'] });
+  const server = await chromium.launchServer({ executablePath, args: ['--no-sandbox', '--disable-gpu'] });
+  const rootPid = server.process().pid ?? 0;
+  const browser = await chromium.connect(server.wsEndpoint());
   const page = await browser.newPage();
   // tsx keeps function names through a helper the page lacks
   await page.addInitScript({ content: 'globalThis.__name = (f) => f;' });
@@ -73,7 +101,9 @@ async function main() {
         worker: `${base}/_app/immutable/workers/${workerFile}`
       };
       const times: number[] = [];
+      const cpus: number[] = [];
       for (let r = 0; r < rounds; r++) {
+        const cpu0 = browserCpuSeconds(rootPid);
         times.push(
           await page.evaluate(
             async ({ run, maxEvents }) => {
@@ -106,13 +136,15 @@ async function main() {
             { run, maxEvents: DEFAULT_MAX_EVENTS }
           )
         );
+        cpus.push(browserCpuSeconds(rootPid) - cpu0);
       }
       const total = rays * scenes.length;
       const lo = Math.min(...times);
       const hi = Math.max(...times);
       console.log(
         `pool  ${label.padEnd(28)} ${workers} worker${workers > 1 ? 's' : ' '}  ${lo.toFixed(2)}–${hi.toFixed(2)} s  ` +
-          `${(total / hi / 1e6).toFixed(2)}–${(total / lo / 1e6).toFixed(2)} M rays/s`
+          `${(total / hi / 1e6).toFixed(2)}–${(total / lo / 1e6).toFixed(2)} M rays/s  ` +
+          `${(total / Math.max(...cpus) / 1e6).toFixed(2)}–${(total / Math.min(...cpus) / 1e6).toFixed(2)} M rays per CPU s`
       );
     }
   }
@@ -130,6 +162,7 @@ async function main() {
   const hi = Math.max(...pageTimes);
   console.log(`page  /beam, three optics × 250 k (as shown)     ${lo.toFixed(2)}–${hi.toFixed(2)} s  ${(750_000 / hi / 1e6).toFixed(2)}–${(750_000 / lo / 1e6).toFixed(2)} M rays/s`);
   await browser.close();
+  await server.close();
 }
 
 main().catch((e) => {
