@@ -6,8 +6,10 @@
  *    (navigator.hardwareConcurrency of them, and one), units dealt as the page's pool deals them; the
  *    time from creating the workers to the last tally: 1 M rays of the TIR collimator over a 1 × 1 mm
  *    Lambertian square, then the three optics × 250 k.
+ *    Cold: fresh workers each round; warm: the workers kept between rounds, as the page keeps its scene
+ *    workers. CPU seconds are the browser's process tree (/proc), the steadier figure on a shared machine.
  * 2. Page: /beam opened fresh, the three optics × 250 k as the page runs them (design, queue, workers,
- *    results), read from the page's own "traced in … s" line.
+ *    results), read from the page's own "traced in … s" line: the first run, and a run after an edit.
  *
  *   npx tsx scripts/bench-browser.ts [--rounds 5]        # E2E_PORT=4393 for another port
  */
@@ -73,6 +75,8 @@ interface PoolRun {
   rays: number;
   units: number[][];
   worker: string;
+  /** Keep the workers between rounds (the first round warms them and is not counted). */
+  warm: boolean;
 }
 
 async function main() {
@@ -92,9 +96,15 @@ async function main() {
     ['three optics × 250 k rays', [scene('reflector'), scene('lens'), scene('tir')], 250_000]
   ];
   for (const [label, scenes, rays] of cases) {
-    for (const workers of [cores, 1]) {
+    for (const [workers, warm] of [[cores, false], [1, false], [cores, true]] as const) {
       const plan = chunkPlan(rays);
+      await page.evaluate(() => {
+        const g = globalThis as unknown as { kept?: Worker[] };
+        g.kept?.forEach((w) => w.terminate());
+        g.kept = [];
+      });
       const run: PoolRun = {
+        warm,
         scenes: scenes.map(plain),
         rays,
         units: Array.from({ length: workers }, (_, w) => Array.from(dealSceneUnits(plan, scenes.length, w, workers))),
@@ -102,7 +112,7 @@ async function main() {
       };
       const times: number[] = [];
       const cpus: number[] = [];
-      for (let r = 0; r < rounds; r++) {
+      for (let r = warm ? -1 : 0; r < rounds; r++) {
         const cpu0 = browserCpuSeconds(rootPid);
         times.push(
           await page.evaluate(
@@ -122,9 +132,13 @@ async function main() {
                 run.units.map(
                   (units, id) =>
                     new Promise<void>((resolve, reject) => {
-                      const w = new Worker(run.worker, { type: 'module' });
+                      // warm: the workers of the last round of this case, kept (as the page keeps its scene workers)
+                      const kept = (globalThis as unknown as { kept?: Worker[] }).kept ?? [];
+                      const w = run.warm && kept[id] ? kept[id] : new Worker(run.worker, { type: 'module' });
+                      kept[id] = w;
+                      (globalThis as unknown as { kept?: Worker[] }).kept = kept;
                       w.onmessage = (e) => {
-                        if (e.data.type === 'scenes-done') (w.terminate(), resolve());
+                        if (e.data.type === 'scenes-done') (run.warm || w.terminate(), resolve());
                         if (e.data.type === 'error') reject(new Error(e.data.message));
                       };
                       w.postMessage({ type: 'run-scenes', id, scenes, rays: run.rays, seed: 1, maxEvents, units: Int32Array.from(units) });
@@ -137,12 +151,13 @@ async function main() {
           )
         );
         cpus.push(browserCpuSeconds(rootPid) - cpu0);
+        if (r < 0) (times.pop(), cpus.pop()); // the warming round
       }
       const total = rays * scenes.length;
       const lo = Math.min(...times);
       const hi = Math.max(...times);
       console.log(
-        `pool  ${label.padEnd(28)} ${workers} worker${workers > 1 ? 's' : ' '}  ${lo.toFixed(2)}–${hi.toFixed(2)} s  ` +
+        `pool  ${label.padEnd(28)} ${workers} worker${workers > 1 ? 's' : ' '}${warm ? ', warm' : ', cold'}  ${lo.toFixed(2)}–${hi.toFixed(2)} s  ` +
           `${(total / hi / 1e6).toFixed(2)}–${(total / lo / 1e6).toFixed(2)} M rays/s  ` +
           `${(total / Math.max(...cpus) / 1e6).toFixed(2)}–${(total / Math.min(...cpus) / 1e6).toFixed(2)} M rays per CPU s`
       );
@@ -150,17 +165,28 @@ async function main() {
   }
 
   const pageTimes: number[] = [];
+  const warmTimes: number[] = [];
   for (let r = 0; r < rounds; r++) {
     const fresh = await browser.newPage();
     await fresh.goto(`${base}/beam`);
     const line = fresh.getByText(/traced in [\d.]+ s on \d+ worker/);
     await line.waitFor({ timeout: 60_000 });
     pageTimes.push(Number(/traced in ([\d.]+) s/.exec((await line.textContent()) ?? '')?.[1]));
+    // a second run on the kept workers: 100 000 rays, then back to 250 000
+    for (const rays of ['100000', '250000']) {
+      await fresh.getByLabel('Rays per optic').selectOption(rays);
+      await fresh.getByText(/tracing, \d+ %/).waitFor({ timeout: 10_000 }).catch(() => {});
+      await line.waitFor({ timeout: 60_000 });
+    }
+    warmTimes.push(Number(/traced in ([\d.]+) s/.exec((await line.textContent()) ?? '')?.[1]));
     await fresh.close();
   }
   const lo = Math.min(...pageTimes);
   const hi = Math.max(...pageTimes);
-  console.log(`page  /beam, three optics × 250 k (as shown)     ${lo.toFixed(2)}–${hi.toFixed(2)} s  ${(750_000 / hi / 1e6).toFixed(2)}–${(750_000 / lo / 1e6).toFixed(2)} M rays/s`);
+  console.log(`page  /beam, three optics × 250 k, first run      ${lo.toFixed(2)}–${hi.toFixed(2)} s  ${(750_000 / hi / 1e6).toFixed(2)}–${(750_000 / lo / 1e6).toFixed(2)} M rays/s`);
+  const wlo = Math.min(...warmTimes);
+  const whi = Math.max(...warmTimes);
+  console.log(`page  /beam, three optics × 250 k, after an edit   ${wlo.toFixed(2)}–${whi.toFixed(2)} s  ${(750_000 / whi / 1e6).toFixed(2)}–${(750_000 / wlo / 1e6).toFixed(2)} M rays/s`);
   await browser.close();
   await server.close();
 }

@@ -6,9 +6,10 @@
  * with a message naming the failure, and the partial result is discarded. A worker that dies silently
  * (no error event, no message for STALL_MS) is treated as a failure too, so a run never hangs.
  *
- * Two kinds of run: startTrace traces one package (one contiguous chunk range per worker);
- * startSceneTrace traces several compiled scenes on one chunk plan (the beam page's optics), the
- * (scene, chunk) units dealt out in turn so every worker gets a share of each scene's cost.
+ * Two kinds of run: startTrace traces one package (one contiguous chunk range per worker, fresh
+ * workers ended after the run); startSceneTrace traces several compiled scenes on one chunk plan (the
+ * beam page's optics), the (scene, chunk) units dealt out in turn so every worker gets a share of each
+ * scene's cost, on workers kept warm between runs (see `warm` below).
  */
 import { chunkPlan, dealSceneUnits } from './chunk-plan';
 import type { CompiledScene } from './compile-scene';
@@ -37,19 +38,51 @@ function workerCount(units: number, asked?: number): number {
 }
 
 /**
+ * Workers kept between scene runs (startSceneTrace): a fresh worker loads and compiles the tracer
+ * again, a few hundred milliseconds of a one-second run, so scene runs hand their workers back here
+ * when they finish or are cancelled (a cancelled worker stops after its current chunk; replies of an
+ * old job carry its id and are ignored). They end after WARM_IDLE_MS without a run, or on a failure.
+ */
+const warm: Worker[] = [];
+const WARM_IDLE_MS = 60_000;
+let idleTimer: ReturnType<typeof setTimeout> | null = null;
+/** Job ids are unique in the tab, so a kept worker's late reply to an old job is never taken for a new one's. */
+let nextJobId = 0;
+
+function newWorker(): Worker {
+  return new Worker(new URL('./trace-worker.ts', import.meta.url), { type: 'module' });
+}
+
+function releaseWarm(workers: Worker[]): void {
+  for (const w of workers) {
+    w.onmessage = null;
+    w.onerror = null;
+    w.onmessageerror = null;
+    warm.push(w);
+  }
+  if (idleTimer !== null) clearTimeout(idleTimer);
+  idleTimer = setTimeout(() => warm.splice(0).forEach((w) => w.terminate()), WARM_IDLE_MS);
+}
+
+/**
  * Runs one request per worker and settles when every worker has answered 'done' or 'scenes-done'.
- * @param request the request of worker w
+ * @param request the request of worker w, under job id `id`
  * @param take adds one worker's final reply into the result
+ * @param keep hand the workers back to the warm set when done or cancelled (scene runs), else terminate them
  */
 function runOnWorkers<T>(
   count: number,
   raysTotal: number,
-  request: (w: number) => TraceRequest,
+  request: (w: number, id: number) => TraceRequest,
   take: (reply: Extract<TraceReply, { type: 'done' | 'scenes-done' }>) => number,
   result: T,
-  onProgress?: (raysDone: number, raysTotal: number) => void
+  onProgress: ((raysDone: number, raysTotal: number) => void) | undefined,
+  keep: boolean
 ): TraceJob<T> {
-  const pool: Worker[] = [];
+  const pool: Worker[] = keep ? warm.splice(0, count) : [];
+  while (pool.length < count) pool.push(newWorker());
+  const base = nextJobId;
+  nextJobId += count;
   const progress = new Float64Array(count);
   let finished = 0;
   let lastReport = 0;
@@ -58,28 +91,33 @@ function runOnWorkers<T>(
 
   let lastHeard = Date.now();
   const watchdog = setInterval(() => {
-    if (Date.now() - lastHeard > STALL_MS) stop(new Error(`trace worker failed: no progress for ${STALL_MS / 1000} s (the worker stopped)`));
+    if (Date.now() - lastHeard > STALL_MS) stop(new Error(`trace worker failed: no progress for ${STALL_MS / 1000} s (the worker stopped)`), false);
   }, 1000);
-  const stop = (error: Error | null) => {
+  let stopped = false;
+  /** Ends the job: reject with `error` (null: resolved already); `reuse` keeps sound workers warm. */
+  const stop = (error: Error | null, reuse: boolean) => {
+    if (stopped) return;
+    stopped = true;
     clearInterval(watchdog);
-    // 'cancel' first: harmless before terminate, and it stops a worker that outlives terminate()
-    pool.forEach((w, id) => (w.postMessage({ type: 'cancel', id } satisfies TraceRequest), w.terminate()));
-    pool.length = 0;
+    // 'cancel' first: harmless before terminate, and it stops a worker that outlives terminate() or is kept
+    if (finished < count) pool.forEach((w, i) => w.postMessage({ type: 'cancel', id: base + i } satisfies TraceRequest));
+    if (keep && reuse) releaseWarm(pool);
+    else pool.forEach((w) => w.terminate());
     if (error) settle.reject(error);
   };
-  for (let w = 0; w < count; w++) {
-    const worker = new Worker(new URL('./trace-worker.ts', import.meta.url), { type: 'module' });
-    pool.push(worker);
+  pool.forEach((worker, w) => {
+    const id = base + w;
     worker.onmessage = (event: MessageEvent<TraceReply>) => {
-      lastHeard = Date.now();
       const reply = event.data;
-      if (reply.type === 'error') return stop(new Error(`trace worker failed: ${reply.message}`));
+      if (reply.id !== id || stopped) return; // a kept worker's late reply to an earlier job
+      lastHeard = Date.now();
+      if (reply.type === 'error') return stop(new Error(`trace worker failed: ${reply.message}`), false);
       if (reply.type === 'progress') progress[w] = reply.raysDone;
       else {
         try {
           progress[w] = take(reply);
         } catch (error) {
-          return stop(error instanceof Error ? error : new Error(String(error)));
+          return stop(error instanceof Error ? error : new Error(String(error)), false);
         }
         finished++;
       }
@@ -89,21 +127,21 @@ function runOnWorkers<T>(
         onProgress(progress.reduce((a, b) => a + b, 0), raysTotal);
       }
       if (finished === count) {
-        stop(null);
+        stop(null, true);
         settle.resolve(result);
       }
     };
-    worker.onmessageerror = () => stop(new Error('trace worker failed: a message could not be read'));
+    worker.onmessageerror = () => stop(new Error('trace worker failed: a message could not be read'), false);
     worker.onerror = (event: ErrorEvent) => {
       event.preventDefault();
-      stop(new Error(`trace worker failed: ${event.message || 'the worker script could not run'}`));
+      stop(new Error(`trace worker failed: ${event.message || 'the worker script could not run'}`), false);
     };
-    worker.postMessage(request(w));
-  }
+    worker.postMessage(request(w, id));
+  });
   return {
     result: promise,
     workers: count,
-    cancel: () => stop(Object.assign(new Error('trace cancelled'), { name: 'AbortError' }))
+    cancel: () => stop(Object.assign(new Error('trace cancelled'), { name: 'AbortError' }), true)
   };
 }
 
@@ -127,9 +165,9 @@ export function startTrace(
   return runOnWorkers(
     count,
     plan.rays,
-    (w) => ({
+    (w, id) => ({
       type: 'run',
-      id: w,
+      id,
       pkg,
       rays: plan.rays,
       seed: options.seed,
@@ -143,7 +181,8 @@ export function startTrace(
       return reply.tally.launched;
     },
     total,
-    onProgress
+    onProgress,
+    false
   );
 }
 
@@ -168,9 +207,9 @@ export function startSceneTrace(
   return runOnWorkers(
     count,
     plan.rays * scenes.length,
-    (w) => ({
+    (w, id) => ({
       type: 'run-scenes',
-      id: w,
+      id,
       scenes,
       rays: plan.rays,
       seed: options.seed,
@@ -184,6 +223,7 @@ export function startSceneTrace(
       return launched;
     },
     tallies,
-    onProgress
+    onProgress,
+    true
   );
 }
