@@ -3,7 +3,7 @@ import { runOptic } from '../../../src/lib/optic-trace/optic-run';
 import { demoScenario, designWavelengthNm, resolveScenario, toWhitePackage } from '../../../src/lib/scenario';
 
 describe('runOptic over a white package (the scenario with a phosphor)', () => {
-  const scenario = { ...demoScenario(), phosphor: { id: 'garnet-yellow', weightPercent: 10, diameterUm: 12, quantumYield: 0.9 } };
+  const scenario = { ...demoScenario(), phosphor: { id: 'garnet-yellow', region: 'encapsulant' as const, weightPercent: 10, diameterUm: 12, quantumYield: 0.9 } };
   const pkg = toWhitePackage(scenario, resolveScenario(scenario));
   const { results, tally, prepared } = runOptic({
     design: { type: 'reflector', exitDiameterMm: 20, heightMm: 12, gapMm: 0.2, reflectance: 0.92 },
