@@ -4,6 +4,7 @@
  * The étendue limit of a 1 mm² source through a 20 mm exit is 2·asin(√(1/(π·10²))) = 6.47° (W. T. Welford,
  * R. Winston, High Collection Nonimaging Optics, 1989, ch. 2; computed).
  */
+import { readFileSync } from 'node:fs';
 import { expect, test } from '@playwright/test';
 
 test('three optics traced side by side, drawn, and bad input refused beside the field', async ({ page }) => {
@@ -44,4 +45,28 @@ test('three optics traced side by side, drawn, and bad input refused beside the 
   await expect(page.locator('#beam-height-hint')).toContainText('TIR collimator: Height: a TIR collimator 20 mm wide');
   await expect(page.getByText(/traced in [\d.]+ s on \d+ worker/)).toBeVisible({ timeout: 45_000 });
   await expect(page.locator('main')).not.toContainText('NaN');
+});
+
+/** Clicks and returns the download's name and text. */
+async function saved(page: import('@playwright/test').Page, name: string | RegExp): Promise<{ file: string; text: string }> {
+  const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name }).first().click()]);
+  return { file: download.suggestedFilename(), text: readFileSync((await download.path())!, 'latin1') };
+}
+
+test('exports: profile CSV, IES LM-63 of the beam, results JSON, chart PNG', async ({ page }) => {
+  await page.goto('/beam');
+  await expect(page.getByText(/traced in [\d.]+ s on \d+ worker/)).toBeVisible({ timeout: 45_000 });
+  const profile = await saved(page, 'Save the profile (CSV)');
+  expect(profile.file).toMatch(/^outcouple-beam-.*tir-profile\.csv$/);
+  expect(profile.text).toMatch(/^r_mm,z_mm,surface$/m);
+  const ies = await saved(page, /beam \(IES LM-63\)/);
+  expect(ies.text.startsWith('IES:LM-63-2019')).toBe(true);
+  expect(ies.text).toMatch(/^TILT=NONE$/m);
+  const json = await saved(page, 'Save results (JSON)');
+  const doc = JSON.parse(json.text);
+  for (const k of ['reflector', 'lens', 'tir']) expect(Number.isFinite(doc.optics[k].results.efficiency)).toBe(true);
+  expect(doc.raysPerOptic).toBe(250_000);
+  const png = await saved(page, 'Save PNG');
+  expect(png.file).toMatch(/\.png$/);
+  expect(png.text.slice(1, 4)).toBe('PNG');
 });
