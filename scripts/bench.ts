@@ -122,7 +122,7 @@ async function main(): Promise<void> {
   }
   await pool.close();
   // Beam optics, 20 mm exit, 12 mm high, PMMA, over a 1 × 1 mm Lambertian source, one thread
-  console.log('\noptic over a 1 × 1 mm Lambertian source   Mrays/s  events/ray  out of the optic');
+  console.log('\noptic over a 1 × 1 mm Lambertian source   Mrays/s  Mrays/CPU-s  events/ray  out of the optic');
   for (const type of ['reflector', 'lens', 'tir'] as const) {
     const prepared = prepareOptic({
       design: { type, exitDiameterMm: 20, heightMm: 12, gapMm: 0.2, material: 'pmma' },
@@ -132,10 +132,12 @@ async function main(): Promise<void> {
     });
     traceOpticScene(prepared, 100_000, 99);
     const t0 = performance.now();
+    const cpu0 = process.cpuUsage();
     const tally = traceOpticScene(prepared, rays, 1);
+    const cpu = process.cpuUsage(cpu0);
     const seconds = (performance.now() - t0) / 1000;
     console.log(
-      `optic trace, ${type.padEnd(26)} ${millions(rays / seconds)}  ${(tally.events / rays).toFixed(2).padStart(10)}  ${(tally.escaped ? Object.entries(tally.parts).filter(([k]) => k.startsWith('escaped:optic exit')).reduce((a, [, v]) => a + v, 0) / rays : 0).toFixed(4)}`
+      `optic trace, ${type.padEnd(26)} ${millions(rays / seconds)}  ${millions(rays / ((cpu.user + cpu.system) / 1e6)).padStart(11)}  ${(tally.events / rays).toFixed(2).padStart(10)}  ${(tally.escaped ? Object.entries(tally.parts).filter(([k]) => k.startsWith('escaped:optic exit')).reduce((a, [, v]) => a + v, 0) / rays : 0).toFixed(4)}`
     );
   }
   console.log(`\nThread pool start-up (${threads} threads, not in the timings above): ${startupMs.toFixed(0)} ms`);

@@ -3,7 +3,8 @@
  * Sources: the focal property of the parabola (every ray from the focus reflects parallel to the axis —
  * E. Hecht, Optics, 4th ed., §5.4.3 on mirrors / any analytic geometry text); Lambert's cosine law I(θ) = I0 cos θ
  * (common practice), so the flux of a Lambertian point source within θ of the axis is sin² θ of the hemisphere's
- * and a mirror from θ_rim to 90° receives cos² θ_rim.
+ * and a mirror from θ_rim to 90° receives cos² θ_rim — θ_rim being the rim angle, between the axis and the line from
+ * the focus to the open front rim (atan(R/H) for a rim of radius R at height H above the focus).
  */
 import { describe, expect, it } from 'vitest';
 import { designOptic, lambertianFractionOnMirror } from '../../src/lib/optic-design';

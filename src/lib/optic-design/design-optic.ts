@@ -6,7 +6,6 @@ import { designAsphericLens } from './aspheric-lens';
 import { designCpc } from './cpc';
 import { checkDesignOptions, type OpticDesignOptions } from './design-options';
 import { checkTargetBeam } from './etendue-limit';
-import { sourceAreaMm2 } from './lambertian-source';
 import type { OpticDesign } from './optic-design';
 import { designParaboloid } from './paraboloid';
 import { designPlanoConvexLens } from './plano-convex-lens';
@@ -19,8 +18,8 @@ import { designTirCollimator } from './tir-collimator';
  */
 export function designOptic(options: OpticDesignOptions): OpticDesign {
   const o = checkDesignOptions(options);
-  if (o.targetBeamDeg !== undefined && o.source !== undefined) {
-    checkTargetBeam(o.targetBeamDeg, { sourceAreaMm2: sourceAreaMm2(o.source), exitDiameterMm: o.exitDiameterMm });
+  if (o.targetBeamDeg !== undefined && o.sourceEtendueAreaMm2 !== undefined) {
+    checkTargetBeam(o.targetBeamDeg, { sourceAreaMm2: o.sourceEtendueAreaMm2, exitDiameterMm: o.exitDiameterMm });
   }
   switch (o.shape) {
     case 'paraboloid':

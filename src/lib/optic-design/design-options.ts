@@ -5,7 +5,7 @@
  */
 import { resolveIndex } from '../materials/resolve-index';
 import { fmt } from './format-for-message';
-import { sourceRadiusMm, type LambertianSource } from './lambertian-source';
+import { sourceAreaMm2, sourceRadiusMm, type LambertianSource } from './lambertian-source';
 
 export type OpticType = 'reflector' | 'lens' | 'tir';
 export type OpticShape = 'paraboloid' | 'cpc' | 'plano-convex' | 'aspheric' | 'tir';
@@ -32,6 +32,11 @@ export interface OpticDesignOptions {
   gapMm?: number;
   /** The source, for the fit checks and the étendue limit; default a point. */
   source?: LambertianSource;
+  /**
+   * Area whose étendue (π A) bounds the source's light, mm², for the étendue limit; default the source's own
+   * area (a package's light fills less than its outline: optic-trace/optic-source.ts packageEtendueAreaMm2).
+   */
+  sourceEtendueAreaMm2?: number;
   /** Thinnest edge of a lens, mm; default 1 (a mouldable edge, common practice). */
   edgeThicknessMm?: number;
   /** TIR collimator: the angle from the axis, at the source, splitting the lens part from the wall part; degrees. */
@@ -54,6 +59,8 @@ export interface CheckedDesignOptions {
   gapMm: number;
   source: LambertianSource | undefined;
   sourceRadiusMm: number;
+  /** Area bounding the source's étendue, mm²; undefined without a source. */
+  sourceEtendueAreaMm2: number | undefined;
   edgeThicknessMm: number;
   splitAngleDeg: number | undefined;
   exitFace: 'flat' | 'lens';
@@ -134,6 +141,8 @@ export function checkDesignOptions(o: OpticDesignOptions): CheckedDesignOptions 
     gapMm,
     source: o.source,
     sourceRadiusMm: radius,
+    sourceEtendueAreaMm2:
+      o.source === undefined ? undefined : o.sourceEtendueAreaMm2 === undefined ? sourceAreaMm2(o.source) : num('sourceEtendueAreaMm2', o.sourceEtendueAreaMm2, 0, 1e6, true),
     edgeThicknessMm,
     splitAngleDeg,
     exitFace,

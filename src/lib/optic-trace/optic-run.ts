@@ -65,7 +65,7 @@ export function prepareOptic(input: OpticRunInput): PreparedOptic {
   }
   const wavelengthNm = runWavelength(input);
   const footprint = sourceFootprint(input.source);
-  const design = designOptic({ ...input.design, wavelengthNm, source: footprint.design });
+  const design = designOptic({ ...input.design, wavelengthNm, source: footprint.design, sourceEtendueAreaMm2: footprint.areaMm2 });
   let material = { n: 1, absorptionPerMm: 0 };
   if (design.type !== 'reflector') {
     const spec = input.design.material ?? String(input.design.n);

@@ -93,7 +93,11 @@ export function sourceFootprint(source: OpticSource): SourceFootprint {
       topMm: sourcePlaneMm,
       areaMm2: area,
       design: { shape: 'disc', widthMm: 2 * radiusMm },
-      label: `the traced package (${source.scenario}), outline ⌀ ${(2 * radiusMm).toFixed(2)} mm, étendue area ${area.toFixed(2)} mm²`
+      label:
+        `the traced package (${source.scenario}), outline ⌀ ${(2 * radiusMm).toFixed(2)} mm, étendue area ${area.toFixed(2)} mm²` +
+        (source.pkg.phosphor
+          ? '; white: its phosphor converts part of the chip light, and every ray counts alike (photon fractions; cd/klm as if each ray carried the same lumens)'
+          : '')
     };
   }
   if (source.kind === 'lambertian') {

@@ -3,11 +3,11 @@
  * page starts goes through one page-wide RunQueue onto the worker pool, so runs never share the cores;
  * `browserTracer` also answers from, and fills, the trace cache kept across reloads.
  */
-import { startTrace } from '../trace/trace-pool';
+import { startSceneTrace, startTrace } from '../trace/trace-pool';
 import { summarize } from '../trace/summary';
 import { RunQueue } from './run-queue';
 import { cachedTracer, TraceCache, type TextStore } from './trace-cache';
-import type { Tracer } from './tracer';
+import type { SceneTracer, Tracer } from './tracer';
 
 /** The one line of background traces in this tab. */
 export const traceQueue = new RunQueue();
@@ -25,6 +25,29 @@ export const queuedTracer: Tracer = (pkg, { rays, seed, signal, onProgress }) =>
           (tally) => {
             signal.removeEventListener('abort', onAbort);
             resolve({ summary: summarize(tally), seconds: (performance.now() - t0) / 1000, workers: job.workers, cached: false });
+          },
+          (error: unknown) => {
+            signal.removeEventListener('abort', onAbort);
+            reject(error);
+          }
+        );
+      }),
+    signal ?? new AbortController().signal
+  );
+
+/** Traces compiled scenes on the worker pool when the jobs queued before are done (the beam page's optics). */
+export const queuedSceneTracer: SceneTracer = (scenes, { rays, seed, signal, onProgress }) =>
+  traceQueue.run(
+    (signal) =>
+      new Promise((resolve, reject) => {
+        const t0 = performance.now();
+        const job = startSceneTrace(scenes, { rays, seed }, (done, total) => onProgress?.(total > 0 ? done / total : 1));
+        const onAbort = () => job.cancel();
+        signal.addEventListener('abort', onAbort, { once: true });
+        job.result.then(
+          (tallies) => {
+            signal.removeEventListener('abort', onAbort);
+            resolve({ tallies, seconds: (performance.now() - t0) / 1000, workers: job.workers });
           },
           (error: unknown) => {
             signal.removeEventListener('abort', onAbort);

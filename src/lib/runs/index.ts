@@ -17,6 +17,9 @@
  * - Tracer (tracer.ts): (package, {rays, seed, signal, onProgress}) → TraceOutcome. browserTracer
  *   (cached, queued, worker pool) and queuedTracer (no cache) in the browser; tallyTracer(pool.run)
  *   over the Node pool; any engine in tests.
+ * - SceneTracer (tracer.ts): compiled scenes (an optic over its source) → one tally per scene, same
+ *   chunk plan and seed: queuedSceneTracer (browser-tracer.ts, worker pool, queued) in the browser,
+ *   syncSceneTracer (scene-tracer.ts, calling thread) for the command line and tests.
  * - tracePackage (package-trace.ts): the package and its bare-chip companion and the gain — the
  *   headline figures of every page. traceKey/packageKey (trace-key.ts) name what was traced: a new
  *   ray count is a new trace of the same package, not a new package.
@@ -29,7 +32,8 @@
 export { abortError, isAbort, throwIfAborted } from './abort';
 export { RunQueue, type Job } from './run-queue';
 export { LatestRun, type RunStatus, type RunContext, type RunWork, type RunView } from './latest-run';
-export { tallyTracer, type Tracer, type TraceOutcome, type TraceRequestOptions } from './tracer';
+export { tallyTracer, type Tracer, type TraceOutcome, type TraceRequestOptions, type SceneTracer, type SceneTraceOutcome } from './tracer';
+export { syncSceneTracer } from './scene-tracer';
 export { tracePackage, bareRays, BARE_MAX_RAYS, type PackageTrace } from './package-trace';
 export { traceGain } from './trace-gain';
 export { packageKey, traceKey, canonicalJson, fnv1a64, TRACE_RESULTS_VERSION } from './trace-key';

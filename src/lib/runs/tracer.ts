@@ -3,6 +3,7 @@
  * browser's is the worker pool behind the page-wide queue (browser-tracer.ts), the command line's the
  * Node thread pool (nodeTracer below takes one), tests use the synchronous tracer. Pure.
  */
+import type { CompiledScene } from '../trace/compile-scene';
 import type { TraceOptions, TracePackage } from '../trace/package-spec';
 import type { Tally } from '../trace/tally';
 import { summarize, type TraceSummary } from '../trace/summary';
@@ -42,3 +43,21 @@ export function tallyTracer(
     return { summary: summarize(tally), seconds: (performance.now() - t0) / 1000, workers, cached: false };
   };
 }
+
+/** Tallies of several compiled scenes traced on one chunk plan and seed (the beam page's optics). */
+export interface SceneTraceOutcome {
+  /** One tally per scene, in the order asked. */
+  tallies: Tally[];
+  /** Wall time of the trace itself (not the wait in a queue), seconds. */
+  seconds: number;
+  /** Worker threads it used (1 for a trace on the calling thread). */
+  workers: number;
+}
+
+/**
+ * Traces compiled scenes, `rays` each, seeded per chunk so any engine and worker count gives the same
+ * tallies; progress over all scenes; rejects with an AbortError on cancel. The browser's runs on the
+ * worker pool through the page-wide queue (browser-tracer.ts: queuedSceneTracer); tests and the
+ * command line use syncSceneTracer (scene-tracer.ts).
+ */
+export type SceneTracer = (scenes: CompiledScene[], options: TraceRequestOptions) => Promise<SceneTraceOutcome>;

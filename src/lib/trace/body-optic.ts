@@ -11,7 +11,7 @@
  * an entry face or the mirror.
  */
 import type { OpticDesign } from '../optic-design/optic-design';
-import type { MirrorSpec, SceneMedium, SceneSurface } from './scene';
+import type { MirrorSpec, SceneMedium, SceneSurface, Shape } from './scene';
 
 /** What a face does for the beam, for the ledger: light leaving through it is out, leaked, or turned back. */
 export type OpticFaceRole = 'exit' | 'side' | 'entry' | 'mirror';
@@ -35,6 +35,17 @@ const ROLE_BY_FACE: Record<string, OpticFaceRole> = { exit: 'exit', 'tir-wall': 
 
 function shifted(r: Float64Array, z: Float64Array, dz: number): { kind: 'revolution'; r: Float64Array; z: Float64Array } {
   return { kind: 'revolution', r: Float64Array.from(r), z: z.map((v) => v + dz) };
+}
+
+/**
+ * A flat face of one segment (z constant) as the scene's own disc or annulus: intersected in closed form,
+ * far cheaper than a profile, and the same plane. The profile's front lies right of its direction
+ * (outward normal (0, −Δr)): +z when the segment runs toward the axis. Null for any other face.
+ * (Walls stay profiles: as a native cylinder the cavity wall, whose outside medium is inside it, lost rays.)
+ */
+function flatFace(r: Float64Array, z: Float64Array, dz: number): Shape | null {
+  if (r.length !== 2 || z[0] !== z[1] || r[0] === r[1]) return null;
+  return { kind: 'disc', at: z[0] + dz, normalSign: r[1] < r[0] ? 1 : -1, rInner: Math.min(r[0], r[1]), rOuter: Math.max(r[0], r[1]) };
 }
 
 /**
@@ -76,6 +87,8 @@ export function opticParts(
   const surfaces: SceneSurface[] = design.surfaces.map((s) => {
     const name = `optic ${s.name}`;
     roles[name] = ROLE_BY_FACE[s.name] ?? 'entry';
+    const flat = flatFace(s.r, s.z, zOffsetMm);
+    if (flat) return { name, shape: flat, front: outside, behind: OPTIC_MEDIUM, behaviour: { kind: 'fresnel' } };
     return { name, shape: shifted(s.r, s.z, zOffsetMm), front: outside, behind: OPTIC_MEDIUM, behaviour: { kind: 'fresnel' } };
   });
   return { media, surfaces, roles, mediumName: OPTIC_MEDIUM };

@@ -26,3 +26,18 @@ export function raysInChunk(plan: ChunkPlan, index: number): number {
   const left = plan.rays - start;
   return left < plan.chunkSize ? (left > 0 ? left : 0) : plan.chunkSize;
 }
+
+/**
+ * The (scene, chunk) units worker `w` of `count` traces when `scenes` scenes share one plan: unit k of
+ * the scene-major list goes to worker k mod count, so each worker gets a share of every scene's cost.
+ * @returns pairs (scene index, chunk index), flattened
+ */
+export function dealSceneUnits(plan: ChunkPlan, scenes: number, w: number, count: number): Int32Array {
+  const units = scenes * plan.chunkCount;
+  const mine = new Int32Array(2 * Math.max(0, Math.ceil((units - w) / count)));
+  for (let k = w, j = 0; k < units; k += count, j += 2) {
+    mine[j] = Math.floor(k / plan.chunkCount);
+    mine[j + 1] = k % plan.chunkCount;
+  }
+  return mine;
+}

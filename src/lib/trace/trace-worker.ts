@@ -1,12 +1,13 @@
 /**
- * Browser worker shim around traceChunk: runs chunks [from, to) of a job, posts progress (after every
- * chunk, and every ≥ 50 ms inside a long chunk) and then the job's tally. Between chunks it yields to
- * the event loop (through a MessageChannel, which has no timer clamp) so a 'cancel' can stop the job.
+ * Browser worker shim around the chunk tracers: a 'run' job traces chunks [from, to) of a package, a
+ * 'run-scenes' job its listed (scene, chunk) units of compiled scenes; both post progress (after every
+ * chunk, and every ≥ 50 ms inside a long chunk) and then their tallies. Between chunks it yields to the
+ * event loop (through a MessageChannel, which has no timer clamp) so a 'cancel' can stop the job.
  */
 import { chunkPlan, raysInChunk } from './chunk-plan';
 import { validateTracePackage } from './package-spec';
 import { createTally } from './tally';
-import { traceChunk } from './trace-chunk';
+import { traceChunk, traceSceneChunk } from './trace-chunk';
 import type { TraceReply, TraceRequest } from './trace-messages';
 
 const scope = self as unknown as {
@@ -19,32 +20,57 @@ const waiting: (() => void)[] = [];
 tick.port1.onmessage = () => waiting.shift()?.();
 const yieldToEvents = () => new Promise<void>((r) => (waiting.push(r), tick.port2.postMessage(0)));
 
+/** A progress reporter for one job: the rays of finished chunks plus the running chunk's. */
+function reporter(id: number) {
+  let done = 0;
+  let last = Date.now();
+  return {
+    inChunk: (n: number) => {
+      if (Date.now() - last < 50) return;
+      last = Date.now();
+      scope.postMessage({ type: 'progress', id, raysDone: done + n });
+    },
+    chunkDone: (n: number) => {
+      done += n;
+      scope.postMessage({ type: 'progress', id, raysDone: done });
+    }
+  };
+}
+
 async function run(msg: Extract<TraceRequest, { type: 'run' }>): Promise<void> {
   validateTracePackage(msg.pkg);
   const plan = chunkPlan(msg.rays);
   const tally = createTally();
-  let done = 0;
-  let last = Date.now();
-  const inChunk = (n: number) => {
-    if (Date.now() - last < 50) return;
-    last = Date.now();
-    scope.postMessage({ type: 'progress', id: msg.id, raysDone: done + n });
-  };
+  const report = reporter(msg.id);
   for (let c = msg.from; c < msg.to; c++) {
-    traceChunk(msg.pkg, c, raysInChunk(plan, c), msg.seed, tally, msg.maxEvents, inChunk);
-    done += raysInChunk(plan, c);
-    scope.postMessage({ type: 'progress', id: msg.id, raysDone: done });
+    traceChunk(msg.pkg, c, raysInChunk(plan, c), msg.seed, tally, msg.maxEvents, report.inChunk);
+    report.chunkDone(raysInChunk(plan, c));
     await yieldToEvents();
     if (cancelled.delete(msg.id)) return;
   }
   scope.postMessage({ type: 'done', id: msg.id, tally });
 }
 
+async function runScenes(msg: Extract<TraceRequest, { type: 'run-scenes' }>): Promise<void> {
+  const plan = chunkPlan(msg.rays);
+  const tallies = msg.scenes.map(() => createTally());
+  const report = reporter(msg.id);
+  for (let u = 0; u < msg.units.length; u += 2) {
+    const s = msg.units[u];
+    const c = msg.units[u + 1];
+    traceSceneChunk(msg.scenes[s], c, raysInChunk(plan, c), msg.seed, tallies[s], msg.maxEvents, report.inChunk);
+    report.chunkDone(raysInChunk(plan, c));
+    await yieldToEvents();
+    if (cancelled.delete(msg.id)) return;
+  }
+  scope.postMessage({ type: 'scenes-done', id: msg.id, tallies });
+}
+
 scope.onmessage = (event) => {
   const msg = event.data;
   if (msg.type === 'cancel') cancelled.add(msg.id);
   else
-    run(msg).catch((error) =>
+    (msg.type === 'run' ? run(msg) : runScenes(msg)).catch((error) =>
       scope.postMessage({ type: 'error', id: msg.id, message: error instanceof Error ? error.message : String(error) })
     );
 };

@@ -1,17 +1,21 @@
 /**
- * The page's inputs as optic runs, and the background work that traces the three optics side by side
- * in chunks (the page yields between chunks, so it stays responsive; the run model cancels a stale run).
+ * The page's inputs as optic runs, and the background work that traces the three optics side by side:
+ * one run of a SceneTracer (on the page the worker pool behind the page-wide queue, so the page stays
+ * responsive; the run model cancels a stale run).
  */
-import { chunkPlan, raysInChunk } from '$lib/trace/chunk-plan';
-import { createTally } from '$lib/trace/tally';
-import { traceSceneChunk } from '$lib/trace/trace-chunk';
 import type { TracePackage } from '$lib/trace/package-spec';
-import { prepareOptic, preparedResults, type OpticResults, type OpticRunInput, type OpticSource, type PreparedOptic, type RayList } from '$lib/optic-trace';
-import { throwIfAborted } from '$lib/runs';
+import { checkOpticRun, prepareOptic, preparedResults, type OpticResults, type OpticRunInput, type OpticSource, type PreparedOptic, type RayList } from '$lib/optic-trace';
+import type { SceneTracer } from '$lib/runs';
+
+/** The page's seed: a fixed one, so the same inputs give the same table. */
+export const BEAM_SEED = 1;
 
 export type OpticKind = 'reflector' | 'lens' | 'tir';
 export const OPTIC_KINDS: readonly OpticKind[] = ['reflector', 'lens', 'tir'];
 export const OPTIC_LABEL: Record<OpticKind, string> = { reflector: 'Metal reflector', lens: 'Lens', tir: 'TIR collimator' };
+
+/** The page's ray counts per optic (the three optics are traced together: three times this many rays). */
+export const RAY_CHOICES = [100_000, 250_000, 1_000_000, 2_000_000] as const;
 
 export interface BeamForm {
   picked: OpticKind;
@@ -66,7 +70,7 @@ export function runInput(form: BeamForm, ctx: BeamContext, type: OpticKind): Opt
     source: opticSource(form, ctx),
     wavelengthNm: ctx.wavelengthNm,
     rays: form.rays,
-    seed: 1
+    seed: BEAM_SEED
   };
 }
 
@@ -86,6 +90,25 @@ export function inFieldTerms(message: string): string {
   return m;
 }
 
+/** The page's fields a design refusal can name (inFieldTerms's labels). */
+export const BEAM_FIELDS = ['Exit diameter', 'Height', 'Gap', 'Target beam', 'Reflector reflectance'] as const;
+export type BeamField = (typeof BEAM_FIELDS)[number];
+
+/**
+ * Where each optic that cannot be designed says why: its one-line reason beside the field it names
+ * ("TIR collimator: Height: … fits heights in (7.24, 11.5) mm"), the others traced as usual.
+ */
+export function fieldNotes(prepared: Record<OpticKind, PreparedOptic | string>): Partial<Record<BeamField, string>> {
+  const notes: Partial<Record<BeamField, string>> = {};
+  for (const k of OPTIC_KINDS) {
+    const p = prepared[k];
+    if (typeof p !== 'string') continue;
+    const field = BEAM_FIELDS.find((f) => p.startsWith(f));
+    if (field) notes[field] = [notes[field], `${OPTIC_LABEL[k]}: ${p}`].filter(Boolean).join(' ');
+  }
+  return notes;
+}
+
 /** Designs the three optics: each prepared, or the one-line reason it cannot be designed. */
 export function prepareAll(form: BeamForm, ctx: BeamContext): Record<OpticKind, PreparedOptic | string> {
   const out = {} as Record<OpticKind, PreparedOptic | string>;
@@ -99,38 +122,33 @@ export function prepareAll(form: BeamForm, ctx: BeamContext): Record<OpticKind, 
   return out;
 }
 
-export type BeamOutcome = Record<OpticKind, { results: OpticResults } | { error: string }>;
+export interface BeamOutcome {
+  optics: Record<OpticKind, { results: OpticResults } | { error: string }>;
+  /** Rays per optic. */
+  rays: number;
+  /** Wall time of the trace (all optics), seconds, and the worker threads it ran on. */
+  seconds: number;
+  workers: number;
+}
 
 /**
- * Traces the three optics, chunk by chunk, yielding to the page between chunks.
- * @param pause lets the page breathe (a macrotask), between chunks
+ * Traces the optics that could be designed, all in one run of `tracer` (on the page: the worker pool,
+ * through the page-wide queue), and evaluates each; an optic that could not be designed keeps its reason.
  */
 export async function traceAll(
   prepared: Record<OpticKind, PreparedOptic | string>,
   rays: number,
-  signal: AbortSignal,
-  progress: (fraction: number) => void,
-  pause: () => Promise<void>
+  tracer: SceneTracer,
+  run: { signal?: AbortSignal; progress?: (fraction: number) => void }
 ): Promise<BeamOutcome> {
-  const out = {} as BeamOutcome;
-  const plan = chunkPlan(rays);
-  let done = 0;
-  for (const type of OPTIC_KINDS) {
-    const p = prepared[type];
-    if (typeof p === 'string') {
-      out[type] = { error: p };
-      done += plan.chunkCount;
-      continue;
-    }
-    const tally = createTally();
-    for (let i = 0; i < plan.chunkCount; i++) {
-      throwIfAborted(signal);
-      traceSceneChunk(p.compiled, i, raysInChunk(plan, i), 1, tally);
-      done++;
-      progress(done / (3 * plan.chunkCount));
-      await pause();
-    }
-    out[type] = { results: preparedResults(p, tally) };
+  checkOpticRun(rays, BEAM_SEED);
+  const traced = OPTIC_KINDS.filter((k) => typeof prepared[k] !== 'string');
+  const scenes = traced.map((k) => (prepared[k] as PreparedOptic).compiled);
+  const { tallies, seconds, workers } = await tracer(scenes, { rays, seed: BEAM_SEED, signal: run.signal, onProgress: run.progress });
+  const optics = {} as BeamOutcome['optics'];
+  for (const k of OPTIC_KINDS) {
+    const p = prepared[k];
+    optics[k] = typeof p === 'string' ? { error: p } : { results: preparedResults(p, tallies[traced.indexOf(k)]) };
   }
-  return out;
+  return { optics, rays, seconds, workers };
 }

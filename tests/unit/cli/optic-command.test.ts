@@ -35,6 +35,10 @@ describe('outcouple optic', () => {
       [['--type', 'lens', '--reflectance', '1.5'], /--reflectance must be a number from 0 to 1/],
       [['--type', 'tir', '--exit-diameter', '2', '--source', 'lambertian:3x3'], /--exit-diameter must exceed the source's diameter/],
       [['--type', 'reflector', '--target-beam', '3', '--source', 'lambertian:1x1'], /no optic of this size can make a 3° beam from this source; the limit is 6.47°/],
+      [['--type', 'tir', '--height', '2', '--source', 'lambertian:1x1'], /^outcouple optic: --height: a TIR collimator 20 mm wide at n = 1.49\d* .*fits heights in \(/],
+      [['--type', 'lens', '--height', '0.8', '--source', 'lambertian:1x1'], /--height: a collimating lens 20 mm wide .* needs a top above/],
+      // the package's étendue area (not its outline) bounds the target beam, as on the page
+      [['--type', 'reflector', '--target-beam', '3'], /no optic of this size can make a 3° beam from this source; the limit is 11.6° \(exit 20 mm, source 3.22 mm²/],
       [['--type', 'prism'], /--type must be one of reflector, lens, tir/],
       [['--exit-diameter', '20'], /--type is required/],
       [['--type', 'lens', '--source', 'rays:/nonexistent/file.csv'], /--source rays: cannot read/],
