@@ -85,7 +85,9 @@ const {
   M_INDEX,
   M_LIST_COUNT,
   M_LIST_START,
+  M_PHOSPHOR,
   NONE,
+  SHAPE_RECT,
   SIDE_FRONT,
   SURFACE_STRIDE,
   S_B,
@@ -94,6 +96,8 @@ const {
   S_BIN_ABSORBED,
   S_BIN_ESCAPED,
   S_FRONT,
+  S_P,
+  S_SHAPE,
   S_TIR_BEHIND,
   S_TIR_FRONT
 } = layout;
@@ -149,6 +153,34 @@ const emitterZ = new Float64Array(1);
 let medium = 0;
 let lastSurface = NONE;
 
+// The box media's faces as the tight box loop (boxSteps) reads them, BOX_FACE_STRIDE doubles a face,
+// six faces a medium in M_BOX_FACES order; a medium whose faces were not filled is not walked there
+const FAST_NONE = 0;
+/** A plain Fresnel interface on an axis (or a textured one with s = 0, which draws nothing more). */
+const FAST_FRESNEL = 1;
+/** A specular mirror of a fixed reflectance. */
+const FAST_MIRROR = 2;
+const F_KIND = 0;
+const F_SURFACE = 1;
+const F_TO = 2;
+const F_ETA_I = 3;
+const F_ETA_T = 4;
+/** Outward normal sign·ê_k: cos θi = sign·d_k. */
+const F_SIGN = 5;
+const F_AXIS = 6;
+/** The face's plane coordinate, where the ray is put on reaching it (as surfaceNormal does). */
+const F_AT = 7;
+const F_TIR_COUNTER = 8;
+/** Mirror: reflectance, and the bin of what it absorbs. */
+const F_R = 9;
+const F_BIN = 10;
+const BOX_FACE_STRIDE = 11;
+let boxFaces = new Float64Array(0);
+/** 1 for a box medium boxSteps walks ('average' mode, no phosphor, not the outside). */
+let boxFast = new Int32Array(0);
+/** Set by boxSteps when the ray ended inside (absorbed in the box or at its mirror: counted). */
+let boxEnded = false;
+
 function configure(scene: CompiledScene, tally?: Tally): void {
   media = scene.media;
   surfaces = scene.surfaces;
@@ -165,6 +197,53 @@ function configure(scene: CompiledScene, tally?: Tally): void {
   track = scene.track;
   emitterDirection = scene.emitterDirection;
   spectral = scene.spectral !== null && configureSpectral(scene, tally ? (tally.spectral ??= createSpectralTally()) : createSpectralTally());
+  configureBoxFaces();
+}
+
+/**
+ * Fills boxFaces / boxFast from the compiled scene: each face of a box medium that is a plain
+ * Fresnel interface on its axis or a mirror of fixed reflectance, with what boxSteps needs of it;
+ * any other face (diffuse, metal, textured with s > 0, absorber) is FAST_NONE and left to the general
+ * event. Nothing when polarisation is tracked.
+ */
+function configureBoxFaces(): void {
+  const nm = media.length / MEDIUM_STRIDE;
+  if (boxFast.length < nm) {
+    boxFast = new Int32Array(nm);
+    boxFaces = new Float64Array(nm * 6 * BOX_FACE_STRIDE);
+  }
+  boxFast.fill(0);
+  for (let m = 0; m < nm; m++) {
+    const mo = m * MEDIUM_STRIDE;
+    if (track || m === outside || (media[mo + M_BOUNDARY] | 0) !== BOUNDARY_BOX || media[mo + M_PHOSPHOR] >= 0) continue;
+    boxFast[m] = 1;
+    for (let f = 0; f < 6; f++) {
+      const q = (m * 6 + f) * BOX_FACE_STRIDE;
+      const entry = media[mo + M_BOX_FACES + f] | 0;
+      const side = entry & 1;
+      const o = (entry >> 1) * SURFACE_STRIDE;
+      const behaviour = surfaces[o + S_BEHAVIOUR] | 0;
+      const to = (side === SIDE_FRONT ? surfaces[o + S_BEHIND] : surfaces[o + S_FRONT]) | 0;
+      const p = o + S_P;
+      boxFaces[q + F_KIND] = FAST_NONE;
+      if ((surfaces[o + S_SHAPE] | 0) !== SHAPE_RECT) continue;
+      const fresnel = behaviour === BEHAVIOUR_FRESNEL || (behaviour === BEHAVIOUR_TEXTURED && !(surfaces[o + S_B] > 0));
+      const plainMirror = behaviour === BEHAVIOUR_MIRROR && surfaces[o + S_B] >= 0;
+      if (!fresnel && !plainMirror) continue;
+      boxFaces[q + F_KIND] = fresnel ? FAST_FRESNEL : FAST_MIRROR;
+      boxFaces[q + F_SURFACE] = entry >> 1;
+      boxFaces[q + F_TO] = to;
+      boxFaces[q + F_ETA_I] = media[mo + M_INDEX];
+      boxFaces[q + F_ETA_T] = to === NONE ? 1 : media[to * MEDIUM_STRIDE + M_INDEX];
+      // surfaceNormal's normal facing the incident side is (front ? σ : −σ)·ê_k; the outward one its negative
+      boxFaces[q + F_SIGN] = side === SIDE_FRONT ? -surfaces[p + 2] : surfaces[p + 2];
+      boxFaces[q + F_AXIS] = surfaces[p];
+      boxFaces[q + F_AT] = surfaces[p + 1];
+      boxFaces[q + F_TIR_COUNTER] = surfaces[o + (side === SIDE_FRONT ? S_TIR_FRONT : S_TIR_BEHIND)];
+      boxFaces[q + F_R] = plainMirror ? surfaces[o + S_B] : 0;
+      boxFaces[q + F_BIN] = surfaces[o + S_BIN_ABSORBED];
+    }
+  }
 }
 
 /** Starts a ray in the emitting medium: position, isotropic direction, polarisation, optical depth. */
@@ -463,6 +542,85 @@ function escape(histogram: Float64Array): void {
 }
 
 /**
+ * The ray's steps inside box media (chip layers) in one tight loop: box exit → Beer–Lambert flight →
+ * the face's Fresnel decision (axisFaceEvent's arithmetic) or its mirror, the same numbers drawn in
+ * the same order and the same events counted as runRays's general steps would. Returns the ray's
+ * event count; hands the ray back to the general loop, without having started the step, when it
+ * leaves the fast boxes, reaches a face of another behaviour, finds no face ahead or reaches the event
+ * cap; boxEnded is set when it ended in the box (absorbed in it or at its mirror, counted).
+ * Its own function, taking and returning only integers (see the file comment).
+ */
+function boxSteps(rayEvents: number, maxEvents: number): number {
+  boxEnded = false;
+  for (;;) {
+    const m = medium;
+    const o = m * MEDIUM_STRIDE;
+    const face = boxExit(ray, media, o, hit);
+    if (face < 0 || rayEvents === maxEvents) return rayEvents;
+    const q = (m * 6 + face) * BOX_FACE_STRIDE;
+    const kind = boxFaces[q + F_KIND] | 0;
+    if (kind === FAST_NONE) return rayEvents;
+    rayEvents++;
+    // Free flight with Beer–Lambert absorption (flight())
+    const t = hit[0];
+    const alpha = media[o + M_ABSORPTION];
+    if (alpha > 0) {
+      const depth = alpha * t;
+      if (depth >= ray[6]) {
+        bins[media[o + M_BIN] | 0]++;
+        boxEnded = true;
+        return rayEvents;
+      }
+      ray[6] -= depth;
+    }
+    ray[0] += t * ray[3];
+    ray[1] += t * ray[4];
+    ray[2] += t * ray[5];
+    // On the face (surfaceNormal's snap)
+    const k = boxFaces[q + F_AXIS] | 0;
+    ray[k] = boxFaces[q + F_AT];
+    lastSurface = boxFaces[q + F_SURFACE] | 0;
+    const j = 3 + k;
+    if (kind === FAST_MIRROR) {
+      // mirrorEvent: reflect with probability R, else absorbed at the mirror
+      uniformsInto(u, 1);
+      if (!(u[0] < boxFaces[q + F_R])) {
+        bins[boxFaces[q + F_BIN] | 0]++;
+        boxEnded = true;
+        return rayEvents;
+      }
+      ray[j] = -ray[j];
+      continue;
+    }
+    // axisFaceEvent: total internal reflection, else reflect with probability R = (Rs + Rp)/2, else refract
+    const sign = boxFaces[q + F_SIGN];
+    const etaI = boxFaces[q + F_ETA_I];
+    const etaT = boxFaces[q + F_ETA_T];
+    fin[0] = sign * ray[j];
+    fin[1] = etaI;
+    fin[2] = etaT;
+    if (!fresnelRealAt(fin, fr)) {
+      ray[j] = -ray[j];
+      const c = boxFaces[q + F_TIR_COUNTER] | 0;
+      if (c !== NONE) counters[c]++;
+      continue;
+    }
+    uniformsInto(u, 1);
+    if (u[0] < 0.5 * (fr[0] + fr[1])) {
+      ray[j] = -ray[j];
+      continue;
+    }
+    const eta = etaI / etaT;
+    ray[3] *= eta;
+    ray[4] *= eta;
+    ray[5] *= eta;
+    ray[j] = sign * fr[2];
+    medium = boxFaces[q + F_TO] | 0;
+    if (boxFast[medium] === 0) return rayEvents;
+  }
+}
+
+/**
  * The ray loop proper: launches `rays` rays and follows each to its end, counting fates in `bins`.
  * Kept apart from the tally bookkeeping so the optimised loop never meets code it has not yet run.
  */
@@ -473,6 +631,11 @@ function runRays(rays: number, maxEvents: number, histogram: Float64Array, onPro
     if (spectral) launchWavelength(i);
     let rayEvents = 0;
     for (;;) {
+      // Inside the chip's layers: the tight loop, until the ray leaves them or needs the general step
+      if (boxFast[medium] === 1) {
+        rayEvents = boxSteps(rayEvents, maxEvents);
+        if (boxEnded) break;
+      }
       const entry = nearestBoundary();
       // Nothing ahead in the outside medium: the bounding sphere
       if (entry === NONE && medium === outside) {
