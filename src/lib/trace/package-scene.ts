@@ -43,7 +43,9 @@ export function packageScene(pkg: TracePackage): SceneDescription {
     top: pkg.chip.topScatter ? { kind: 'textured', scatteredFraction: pkg.chip.topScatter } : { kind: 'fresnel' }
   });
   const media: SceneMedium[] = [...chip.media];
-  const surfaces: SceneSurface[] = [...chip.surfaces];
+  // A bare chip on the flat base: its box is all the outside meets (the base then borders nothing)
+  const bareBox = bare && !cup;
+  const surfaces: SceneSurface[] = chip.surfaces.map((s) => (bareBox && chip.outerFaces.includes(s.name) ? { ...s, finalExit: true } : s));
   const ph = pkg.phosphor;
   if (!bare) {
     media.push({
@@ -81,7 +83,8 @@ export function packageScene(pkg: TracePackage): SceneDescription {
         front: OUTSIDE,
         behind: ENCAPSULANT,
         behaviour: { kind: 'fresnel' },
-        legacyEscape: 'escapedDome'
+        legacyEscape: 'escapedDome',
+        finalExit: true
       });
     } else {
       surfaces.push(
@@ -91,7 +94,8 @@ export function packageScene(pkg: TracePackage): SceneDescription {
           front: OUTSIDE,
           behind: ENCAPSULANT,
           behaviour: { kind: 'fresnel' },
-          legacyEscape: 'escapedCylinderSide'
+          legacyEscape: 'escapedCylinderSide',
+          finalExit: true
         },
         {
           name: 'cylinder top',
@@ -99,7 +103,8 @@ export function packageScene(pkg: TracePackage): SceneDescription {
           front: OUTSIDE,
           behind: ENCAPSULANT,
           behaviour: { kind: 'fresnel' },
-          legacyEscape: 'escapedCylinderTop'
+          legacyEscape: 'escapedCylinderTop',
+          finalExit: true
         }
       );
     }

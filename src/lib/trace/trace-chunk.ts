@@ -126,7 +126,7 @@ const mirror = new Float64Array(MIRROR_AMPLITUDES_LENGTH);
 // numbers handed to the polarisation functions (see polarization.ts: arrays, so nothing is boxed)
 const trackArgs = new Float64Array(5);
 // Uniform random numbers just drawn (uniformsInto), and the Fresnel inputs [cos θi, etaI, etaT]
-const u = new Float64Array(2);
+const u = new Float64Array(5);
 const fin = new Float64Array(3);
 // Debug counters of the current chunk (COUNTER_*)
 const counters = new Float64Array(COUNTERS);
@@ -135,6 +135,7 @@ const counters = new Float64Array(COUNTERS);
 let media: Float64Array = new Float64Array(0);
 let surfaces: Float64Array = new Float64Array(0);
 let bounds: Int32Array = new Int32Array(0);
+let finalExit: Uint8Array = new Uint8Array(0);
 let bins = new Float64Array(2);
 let outside = 0;
 let emitterOffset = 0;
@@ -185,6 +186,7 @@ function configure(scene: CompiledScene, tally?: Tally): void {
   media = scene.media;
   surfaces = scene.surfaces;
   bounds = scene.bounds;
+  finalExit = scene.finalExit;
   if (bins.length !== scene.binNames.length) bins = new Float64Array(scene.binNames.length);
   bins.fill(0);
   counters.fill(0);
@@ -246,26 +248,31 @@ function configureBoxFaces(): void {
   }
 }
 
-/** Starts a ray in the emitting medium: position, isotropic direction, polarisation, optical depth. */
+/**
+ * Starts a ray in the emitting medium: position, direction, polarisation, optical depth. The common
+ * case (a plane, isotropic) draws its position and first direction pair in one call; the numbers are
+ * the same, in the same order, as one draw each.
+ */
 function launch(): void {
   const o = emitterOffset;
-  // Position on the emitting plane or in the volume of the emitting box
-  uniformsInto(u, 2);
+  // Position on the emitting plane or in the volume of the emitting box, then (isotropic) a first pair
+  const isotropic = emitterDirection === EMIT_ISOTROPIC;
+  const n = volumeEmission ? 3 : 2;
+  uniformsInto(u, isotropic ? n + 2 : n);
   ray[0] = (u[0] - 0.5) * 2 * media[o + M_BOX_A];
   ray[1] = (u[1] - 0.5) * 2 * media[o + M_BOX_B];
   if (volumeEmission) {
     const z0 = media[o + M_BOX_Z0];
-    uniformsInto(u, 1);
-    ray[2] = z0 + u[0] * (media[o + M_BOX_Z1] - z0);
+    ray[2] = z0 + u[2] * (media[o + M_BOX_Z1] - z0);
   } else {
     ray[2] = emitterZ[0];
   }
-  // Isotropic direction without trigonometry (Marsaglia 1972): (u, v) uniform in the unit disc,
-  // s = u² + v²; then (2u√(1 − s), 2v√(1 − s), 1 − 2s) is uniform on the sphere
-  if (emitterDirection === EMIT_ISOTROPIC) {
-    let a = 0;
-    let b = 0;
-    let s = 1;
+  // Isotropic direction without trigonometry (Marsaglia 1972): (a, b) uniform in the unit disc,
+  // s = a² + b²; then (2a√(1 − s), 2b√(1 − s), 1 − 2s) is uniform on the sphere
+  if (isotropic) {
+    let a = 2 * u[n] - 1;
+    let b = 2 * u[n + 1] - 1;
+    let s = a * a + b * b;
     while (s >= 1) {
       uniformsInto(u, 2);
       a = 2 * u[0] - 1;
@@ -276,18 +283,8 @@ function launch(): void {
     ray[3] = k * a;
     ray[4] = k * b;
     ray[5] = 1 - 2 * s;
-  } else if (emitterDirection === EMIT_DOWN) {
-    ray[3] = 0;
-    ray[4] = 0;
-    ray[5] = -1;
-  } else {
-    uniformsInto(u, 2);
-    lambertianDirection(direction, downAxis, u);
-  }
-  if (track) {
-    uniformsInto(trackArgs, 1);
-    launchPolarization(direction, trackArgs);
-  }
+  } else launchDirection();
+  if (track) redrawPolarization();
   // Optical depth to absorption, τ ~ Exp(1) by inverse transform (1 − u ∈ (0, 1]); none if nothing absorbs
   if (absorbing) {
     uniformsInto(u, 1);
@@ -295,6 +292,18 @@ function launch(): void {
   } else ray[6] = Infinity;
   medium = emitterMedium;
   lastSurface = NONE;
+}
+
+/** A launch direction other than isotropic: straight down, or cosine-weighted about −z. */
+function launchDirection(): void {
+  if (emitterDirection === EMIT_DOWN) {
+    ray[3] = 0;
+    ray[4] = 0;
+    ray[5] = -1;
+  } else {
+    uniformsInto(u, 2);
+    lambertianDirection(direction, downAxis, u);
+  }
 }
 
 /**
@@ -635,6 +644,11 @@ function runRays(rays: number, maxEvents: number, histogram: Float64Array, onPro
       if (boxFast[medium] === 1) {
         rayEvents = boxSteps(rayEvents, maxEvents);
         if (boxEnded) break;
+      }
+      // Left a convex package for good (SceneSurface.finalExit): nothing to search
+      if (medium === outside && lastSurface >= 0 && finalExit[lastSurface] === 1) {
+        escape(histogram);
+        break;
       }
       const entry = nearestBoundary();
       // Nothing ahead in the outside medium: the bounding sphere
