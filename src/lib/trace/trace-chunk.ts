@@ -154,8 +154,15 @@ const emitterZ = new Float64Array(1);
 let medium = 0;
 let lastSurface = NONE;
 
-// The box media's faces as the tight box loop (boxSteps) reads them, BOX_FACE_STRIDE doubles a face,
-// six faces a medium in M_BOX_FACES order; a medium whose faces were not filled is not walked there
+// The box media the tight box loop (boxSteps) walks, in a table of its own: module constants (not
+// the scene's arrays, which configure() replaces), so the optimised loop reads them without checks.
+// A box record: [a, b, z0, z1] (boxExit's layout), α, its absorption bin, then its six faces in
+// M_BOX_FACES order, FACE_STRIDE doubles each.
+const MAX_FAST_BOXES = 8;
+const MAX_FAST_MEDIA = 64;
+const B_ABSORPTION = 4;
+const B_BIN = 5;
+const B_FACES = 6;
 const FAST_NONE = 0;
 /** A plain Fresnel interface on an axis (or a textured one with s = 0, which draws nothing more). */
 const FAST_FRESNEL = 1;
@@ -175,10 +182,13 @@ const F_TIR_COUNTER = 8;
 /** Mirror: reflectance, and the bin of what it absorbs. */
 const F_R = 9;
 const F_BIN = 10;
-const BOX_FACE_STRIDE = 11;
-let boxFaces = new Float64Array(0);
-/** 1 for a box medium boxSteps walks ('average' mode, no phosphor, not the outside). */
-let boxFast = new Int32Array(0);
+const FACE_STRIDE = 11;
+const BOX_STRIDE = B_FACES + 6 * FACE_STRIDE;
+const boxTable = new Float64Array(MAX_FAST_BOXES * BOX_STRIDE);
+/** Per medium: offset of its record in boxTable + 1 when boxSteps walks it, else 0. */
+const boxOf = new Int32Array(MAX_FAST_MEDIA);
+/** False when the scene has more media than boxOf holds (then no box is walked fast). */
+let fastBoxes = false;
 /** Set by boxSteps when the ray ended inside (absorbed in the box or at its mirror: counted). */
 let boxEnded = false;
 
@@ -203,47 +213,50 @@ function configure(scene: CompiledScene, tally?: Tally): void {
 }
 
 /**
- * Fills boxFaces / boxFast from the compiled scene: each face of a box medium that is a plain
- * Fresnel interface on its axis or a mirror of fixed reflectance, with what boxSteps needs of it;
- * any other face (diffuse, metal, textured with s > 0, absorber) is FAST_NONE and left to the general
- * event. Nothing when polarisation is tracked.
+ * Fills boxTable / boxOf from the compiled scene: each box medium ('average' mode, no phosphor, not
+ * the outside; the first MAX_FAST_BOXES), and of its faces each that is a plain Fresnel interface on
+ * its axis or a mirror of fixed reflectance, with what boxSteps needs of it; any other face (diffuse,
+ * metal, textured with s > 0, absorber) is FAST_NONE and left to the general event.
  */
 function configureBoxFaces(): void {
   const nm = media.length / MEDIUM_STRIDE;
-  if (boxFast.length < nm) {
-    boxFast = new Int32Array(nm);
-    boxFaces = new Float64Array(nm * 6 * BOX_FACE_STRIDE);
-  }
-  boxFast.fill(0);
-  for (let m = 0; m < nm; m++) {
+  boxOf.fill(0);
+  fastBoxes = nm <= MAX_FAST_MEDIA && !track;
+  if (!fastBoxes) return;
+  let slots = 0;
+  for (let m = 0; m < nm && slots < MAX_FAST_BOXES; m++) {
     const mo = m * MEDIUM_STRIDE;
-    if (track || m === outside || (media[mo + M_BOUNDARY] | 0) !== BOUNDARY_BOX || media[mo + M_PHOSPHOR] >= 0) continue;
-    boxFast[m] = 1;
+    if (m === outside || (media[mo + M_BOUNDARY] | 0) !== BOUNDARY_BOX || media[mo + M_PHOSPHOR] >= 0) continue;
+    const bo = slots++ * BOX_STRIDE;
+    boxOf[m] = bo + 1;
+    boxTable.set(media.subarray(mo + M_BOX_A, mo + M_BOX_A + 4), bo);
+    boxTable[bo + B_ABSORPTION] = media[mo + M_ABSORPTION];
+    boxTable[bo + B_BIN] = media[mo + M_BIN];
     for (let f = 0; f < 6; f++) {
-      const q = (m * 6 + f) * BOX_FACE_STRIDE;
+      const q = bo + B_FACES + f * FACE_STRIDE;
       const entry = media[mo + M_BOX_FACES + f] | 0;
       const side = entry & 1;
       const o = (entry >> 1) * SURFACE_STRIDE;
       const behaviour = surfaces[o + S_BEHAVIOUR] | 0;
       const to = (side === SIDE_FRONT ? surfaces[o + S_BEHIND] : surfaces[o + S_FRONT]) | 0;
       const p = o + S_P;
-      boxFaces[q + F_KIND] = FAST_NONE;
+      boxTable[q + F_KIND] = FAST_NONE;
       if ((surfaces[o + S_SHAPE] | 0) !== SHAPE_RECT) continue;
       const fresnel = behaviour === BEHAVIOUR_FRESNEL || (behaviour === BEHAVIOUR_TEXTURED && !(surfaces[o + S_B] > 0));
       const plainMirror = behaviour === BEHAVIOUR_MIRROR && surfaces[o + S_B] >= 0;
       if (!fresnel && !plainMirror) continue;
-      boxFaces[q + F_KIND] = fresnel ? FAST_FRESNEL : FAST_MIRROR;
-      boxFaces[q + F_SURFACE] = entry >> 1;
-      boxFaces[q + F_TO] = to;
-      boxFaces[q + F_ETA_I] = media[mo + M_INDEX];
-      boxFaces[q + F_ETA_T] = to === NONE ? 1 : media[to * MEDIUM_STRIDE + M_INDEX];
+      boxTable[q + F_KIND] = fresnel ? FAST_FRESNEL : FAST_MIRROR;
+      boxTable[q + F_SURFACE] = entry >> 1;
+      boxTable[q + F_TO] = to;
+      boxTable[q + F_ETA_I] = media[mo + M_INDEX];
+      boxTable[q + F_ETA_T] = to === NONE ? 1 : media[to * MEDIUM_STRIDE + M_INDEX];
       // surfaceNormal's normal facing the incident side is (front ? σ : −σ)·ê_k; the outward one its negative
-      boxFaces[q + F_SIGN] = side === SIDE_FRONT ? -surfaces[p + 2] : surfaces[p + 2];
-      boxFaces[q + F_AXIS] = surfaces[p];
-      boxFaces[q + F_AT] = surfaces[p + 1];
-      boxFaces[q + F_TIR_COUNTER] = surfaces[o + (side === SIDE_FRONT ? S_TIR_FRONT : S_TIR_BEHIND)];
-      boxFaces[q + F_R] = plainMirror ? surfaces[o + S_B] : 0;
-      boxFaces[q + F_BIN] = surfaces[o + S_BIN_ABSORBED];
+      boxTable[q + F_SIGN] = side === SIDE_FRONT ? -surfaces[p + 2] : surfaces[p + 2];
+      boxTable[q + F_AXIS] = surfaces[p];
+      boxTable[q + F_AT] = surfaces[p + 1];
+      boxTable[q + F_TIR_COUNTER] = surfaces[o + (side === SIDE_FRONT ? S_TIR_FRONT : S_TIR_BEHIND)];
+      boxTable[q + F_R] = plainMirror ? surfaces[o + S_B] : 0;
+      boxTable[q + F_BIN] = surfaces[o + S_BIN_ABSORBED];
     }
   }
 }
@@ -313,7 +326,7 @@ function launchDirection(): void {
 function nearestBoundary(): number {
   const o = medium * MEDIUM_STRIDE;
   if ((media[o + M_BOUNDARY] | 0) === BOUNDARY_BOX) {
-    const face = boxExit(ray, media, o, hit);
+    const face = boxExit(ray, media, o + M_BOX_A, hit);
     return face < 0 ? NONE : media[o + M_BOX_FACES + face] | 0;
   }
   let best = NONE;
@@ -561,22 +574,21 @@ function escape(histogram: Float64Array): void {
  */
 function boxSteps(rayEvents: number, maxEvents: number): number {
   boxEnded = false;
+  let bo = boxOf[medium] - 1;
   for (;;) {
-    const m = medium;
-    const o = m * MEDIUM_STRIDE;
-    const face = boxExit(ray, media, o, hit);
+    const face = boxExit(ray, boxTable, bo, hit);
     if (face < 0 || rayEvents === maxEvents) return rayEvents;
-    const q = (m * 6 + face) * BOX_FACE_STRIDE;
-    const kind = boxFaces[q + F_KIND] | 0;
+    const q = bo + B_FACES + face * FACE_STRIDE;
+    const kind = boxTable[q + F_KIND];
     if (kind === FAST_NONE) return rayEvents;
     rayEvents++;
     // Free flight with Beer–Lambert absorption (flight())
     const t = hit[0];
-    const alpha = media[o + M_ABSORPTION];
+    const alpha = boxTable[bo + B_ABSORPTION];
     if (alpha > 0) {
       const depth = alpha * t;
       if (depth >= ray[6]) {
-        bins[media[o + M_BIN] | 0]++;
+        bins[boxTable[bo + B_BIN] | 0]++;
         boxEnded = true;
         return rayEvents;
       }
@@ -586,15 +598,15 @@ function boxSteps(rayEvents: number, maxEvents: number): number {
     ray[1] += t * ray[4];
     ray[2] += t * ray[5];
     // On the face (surfaceNormal's snap)
-    const k = boxFaces[q + F_AXIS] | 0;
-    ray[k] = boxFaces[q + F_AT];
-    lastSurface = boxFaces[q + F_SURFACE] | 0;
+    const k = boxTable[q + F_AXIS] | 0;
+    ray[k] = boxTable[q + F_AT];
+    lastSurface = boxTable[q + F_SURFACE] | 0;
     const j = 3 + k;
     if (kind === FAST_MIRROR) {
       // mirrorEvent: reflect with probability R, else absorbed at the mirror
       uniformsInto(u, 1);
-      if (!(u[0] < boxFaces[q + F_R])) {
-        bins[boxFaces[q + F_BIN] | 0]++;
+      if (!(u[0] < boxTable[q + F_R])) {
+        bins[boxTable[q + F_BIN] | 0]++;
         boxEnded = true;
         return rayEvents;
       }
@@ -602,15 +614,15 @@ function boxSteps(rayEvents: number, maxEvents: number): number {
       continue;
     }
     // axisFaceEvent: total internal reflection, else reflect with probability R = (Rs + Rp)/2, else refract
-    const sign = boxFaces[q + F_SIGN];
-    const etaI = boxFaces[q + F_ETA_I];
-    const etaT = boxFaces[q + F_ETA_T];
+    const sign = boxTable[q + F_SIGN];
+    const etaI = boxTable[q + F_ETA_I];
+    const etaT = boxTable[q + F_ETA_T];
     fin[0] = sign * ray[j];
     fin[1] = etaI;
     fin[2] = etaT;
     if (!fresnelRealAt(fin, fr)) {
       ray[j] = -ray[j];
-      const c = boxFaces[q + F_TIR_COUNTER] | 0;
+      const c = boxTable[q + F_TIR_COUNTER] | 0;
       if (c !== NONE) counters[c]++;
       continue;
     }
@@ -624,8 +636,9 @@ function boxSteps(rayEvents: number, maxEvents: number): number {
     ray[4] *= eta;
     ray[5] *= eta;
     ray[j] = sign * fr[2];
-    medium = boxFaces[q + F_TO] | 0;
-    if (boxFast[medium] === 0) return rayEvents;
+    medium = boxTable[q + F_TO] | 0;
+    bo = boxOf[medium] - 1;
+    if (bo < 0) return rayEvents;
   }
 }
 
@@ -641,7 +654,7 @@ function runRays(rays: number, maxEvents: number, histogram: Float64Array, onPro
     let rayEvents = 0;
     for (;;) {
       // Inside the chip's layers: the tight loop, until the ray leaves them or needs the general step
-      if (boxFast[medium] === 1) {
+      if (fastBoxes && boxOf[medium] !== 0) {
         rayEvents = boxSteps(rayEvents, maxEvents);
         if (boxEnded) break;
       }
