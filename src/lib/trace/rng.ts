@@ -49,26 +49,28 @@ export function seedChunk(seed: number, chunkIndex: number): void {
 }
 
 /**
- * Draws `count` uniform numbers in [0, 1) into out[0..count−1], in sequence, each with 32 random bits:
- * u = x·2⁻³², x the xoshiro128** output (smallest step 2⁻³² ≈ 2.3e−10). The ray loop draws this way:
- * a number returned from a call the engine does not inline is a heap object, a number written into an
- * array is not. The generator step is written out here, not called: when the loop inlines this function
- * but has no budget left for a callee, a called step would return a boxed number per draw.
+ * Draws one uniform number in [0, 1) with 32 random bits into out[i]: u = x·2⁻³², x the xoshiro128**
+ * output (smallest step 2⁻³² ≈ 2.3e−10). The ray loop draws into arrays: a number returned from a
+ * call the engine does not inline is a heap object, a number written into an array is not. Small and
+ * loop-free, so a loop that has spent most of its inlining budget still inlines it.
  */
+export function uniformAt(out: Float64Array, i: number): void {
+  // xoshiro128**: result = rotl(s1·5, 7)·9; t = s1 << 9; s2 ^= s0; s3 ^= s1; s1 ^= s2; s0 ^= s3; s2 ^= t; s3 = rotl(s3, 11)
+  const m = Math.imul(s[1], 5);
+  const result = Math.imul((m << 7) | (m >>> 25), 9) >>> 0;
+  const t = s[1] << 9;
+  s[2] ^= s[0];
+  s[3] ^= s[1];
+  s[1] ^= s[2];
+  s[0] ^= s[3];
+  s[2] ^= t;
+  s[3] = (s[3] << 11) | (s[3] >>> 21);
+  out[i] = result * 2.3283064365386963e-10;
+}
+
+/** Draws `count` uniform numbers into out[0..count−1], in sequence (uniformAt's). */
 export function uniformsInto(out: Float64Array, count: number): void {
-  for (let i = 0; i < count; i++) {
-    // xoshiro128**: result = rotl(s1·5, 7)·9; t = s1 << 9; s2 ^= s0; s3 ^= s1; s1 ^= s2; s0 ^= s3; s2 ^= t; s3 = rotl(s3, 11)
-    const m = Math.imul(s[1], 5);
-    const result = Math.imul((m << 7) | (m >>> 25), 9) >>> 0;
-    const t = s[1] << 9;
-    s[2] ^= s[0];
-    s[3] ^= s[1];
-    s[1] ^= s[2];
-    s[0] ^= s[3];
-    s[2] ^= t;
-    s[3] = (s[3] << 11) | (s[3] >>> 21);
-    out[i] = result * 2.3283064365386963e-10;
-  }
+  for (let i = 0; i < count; i++) uniformAt(out, i);
 }
 
 const one = new Float64Array(1);

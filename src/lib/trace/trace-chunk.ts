@@ -53,7 +53,7 @@ import { lambertianDirection } from './lambertian';
 import { DEFAULT_MAX_EVENTS, type TracePackage } from './package-spec';
 import { packageScene } from './package-scene';
 import { TRACK_TIR, TRACK_TRANSMITTED, launchPolarization, trackedInterface, trackedMirror } from './polarization';
-import { seedChunk, uniformsInto } from './rng';
+import { seedChunk, uniformAt, uniformsInto } from './rng';
 import * as layout from './scene-layout';
 import { intersectSurface, surfaceNormal } from './shape-intersect';
 import { POLAR_BINS, type Tally } from './tally';
@@ -300,7 +300,7 @@ function launch(): void {
   if (track) redrawPolarization();
   // Optical depth to absorption, τ ~ Exp(1) by inverse transform (1 − u ∈ (0, 1]); none if nothing absorbs
   if (absorbing) {
-    uniformsInto(u, 1);
+    uniformAt(u, 0);
     ray[6] = -Math.log(1 - u[0]);
   } else ray[6] = Infinity;
   medium = emitterMedium;
@@ -378,7 +378,7 @@ function interfaceEvent(from: number, to: number): number {
     trackArgs[0] = cosI;
     trackArgs[1] = etaI;
     trackArgs[2] = etaT;
-    uniformsInto(u, 1);
+    uniformAt(u, 0);
     trackArgs[3] = u[0];
     const code = trackedInterface(direction, normal, trackArgs);
     return code === TRACK_TRANSMITTED ? TRANSMITTED : code === TRACK_TIR ? TIR : REFLECTED;
@@ -392,7 +392,7 @@ function interfaceEvent(from: number, to: number): number {
     return TIR;
   }
   // Reflect with probability R = (Rs + Rp)/2, else refract
-  uniformsInto(u, 1);
+  uniformAt(u, 0);
   if (u[0] < 0.5 * (fr[0] + fr[1])) {
     reflectDirection(direction, direction, normal);
     return REFLECTED;
@@ -421,7 +421,7 @@ function axisFaceEvent(k: number, from: number, to: number): number {
     return TIR;
   }
   // Reflect with probability R = (Rs + Rp)/2, else refract
-  uniformsInto(u, 1);
+  uniformAt(u, 0);
   if (u[0] < 0.5 * (fr[0] + fr[1])) {
     ray[j] = -ray[j];
     return REFLECTED;
@@ -436,7 +436,7 @@ function axisFaceEvent(k: number, from: number, to: number): number {
 
 /** A new random linear polarisation for a ray whose direction was redrawn (a diffuse event depolarises). */
 function redrawPolarization(): void {
-  uniformsInto(trackArgs, 1);
+  uniformAt(trackArgs, 0);
   launchPolarization(direction, trackArgs);
 }
 
@@ -466,7 +466,7 @@ function dielectricEvent(entry: number, axis: number): void {
 function textureEvent(o: number, into: number): void {
   const s = surfaces[o + S_B];
   if (!(s > 0)) return;
-  uniformsInto(u, 1);
+  uniformAt(u, 0);
   if (!(u[0] < s)) return;
   scatterAxis[0] = into * normal[0];
   scatterAxis[1] = into * normal[1];
@@ -494,12 +494,12 @@ function mirrorEvent(o: number, axis: number): boolean {
     trackArgs[1] = metal ? mirror[1] : 0;
     trackArgs[2] = metal ? mirror[2] : amplitude;
     trackArgs[3] = metal ? mirror[3] : 0;
-    uniformsInto(u, 1);
+    uniformAt(u, 0);
     trackArgs[4] = u[0];
     return trackedMirror(direction, normal, trackArgs);
   }
   const R = metal ? 0.5 * (mirror[4] + mirror[5]) : reflectance;
-  uniformsInto(u, 1);
+  uniformAt(u, 0);
   if (!(u[0] < R)) return false;
   if (axis >= 0) ray[3 + axis] = -ray[3 + axis];
   else reflectDirection(direction, direction, normal);
@@ -508,7 +508,7 @@ function mirrorEvent(o: number, axis: number): boolean {
 
 /** Lambertian reflector at offset o: true if reflected into a cosine-weighted direction. */
 function diffuseEvent(o: number): boolean {
-  uniformsInto(u, 1);
+  uniformAt(u, 0);
   if (!(u[0] < surfaces[o + S_B])) return false;
   uniformsInto(u, 2);
   lambertianDirection(direction, normal, u);
@@ -604,7 +604,7 @@ function boxSteps(rayEvents: number, maxEvents: number): number {
     const j = 3 + k;
     if (kind === FAST_MIRROR) {
       // mirrorEvent: reflect with probability R, else absorbed at the mirror
-      uniformsInto(u, 1);
+      uniformAt(u, 0);
       if (!(u[0] < boxTable[q + F_R])) {
         bins[boxTable[q + F_BIN] | 0]++;
         boxEnded = true;
@@ -626,7 +626,7 @@ function boxSteps(rayEvents: number, maxEvents: number): number {
       if (c !== NONE) counters[c]++;
       continue;
     }
-    uniformsInto(u, 1);
+    uniformAt(u, 0);
     if (u[0] < 0.5 * (fr[0] + fr[1])) {
       ray[j] = -ray[j];
       continue;
