@@ -56,15 +56,17 @@ export function seedChunk(seed: number, chunkIndex: number): void {
  */
 export function uniformAt(out: Float64Array, i: number): void {
   // xoshiro128**: result = rotl(s1·5, 7)·9; t = s1 << 9; s2 ^= s0; s3 ^= s1; s1 ^= s2; s0 ^= s3; s2 ^= t; s3 = rotl(s3, 11)
-  const m = Math.imul(s[1], 5);
+  // (each word read once and written once: the state array is memory the engine does not keep in registers)
+  const s0 = s[0];
+  const s1 = s[1];
+  const s2 = s[2] ^ s0;
+  const s3 = s[3] ^ s1;
+  const m = Math.imul(s1, 5);
   const result = Math.imul((m << 7) | (m >>> 25), 9) >>> 0;
-  const t = s[1] << 9;
-  s[2] ^= s[0];
-  s[3] ^= s[1];
-  s[1] ^= s[2];
-  s[0] ^= s[3];
-  s[2] ^= t;
-  s[3] = (s[3] << 11) | (s[3] >>> 21);
+  s[0] = s0 ^ s3;
+  s[1] = s1 ^ s2;
+  s[2] = s2 ^ (s1 << 9);
+  s[3] = (s3 << 11) | (s3 >>> 21);
   out[i] = result * 2.3283064365386963e-10;
 }
 
