@@ -602,36 +602,35 @@ function boxSteps(rayEvents: number, maxEvents: number): number {
     ray[k] = boxTable[q + F_AT];
     lastSurface = boxTable[q + F_SURFACE] | 0;
     const j = 3 + k;
-    if (kind === FAST_MIRROR) {
-      // mirrorEvent: reflect with probability R, else absorbed at the mirror
-      uniformAt(u, 0);
-      if (!(u[0] < boxTable[q + F_R])) {
-        bins[boxTable[q + F_BIN] | 0]++;
-        boxEnded = true;
-        return rayEvents;
-      }
-      ray[j] = -ray[j];
-      continue;
-    }
-    // axisFaceEvent: total internal reflection, else reflect with probability R = (Rs + Rp)/2, else refract
+    // The probability of reflection: a mirror's R, or the Fresnel R = (Rs + Rp)/2 (axisFaceEvent's
+    // arithmetic) after total internal reflection is ruled out; one draw site for both, which keeps the
+    // generator inlined here
+    let R = boxTable[q + F_R];
     const sign = boxTable[q + F_SIGN];
-    const etaI = boxTable[q + F_ETA_I];
-    const etaT = boxTable[q + F_ETA_T];
-    fin[0] = sign * ray[j];
-    fin[1] = etaI;
-    fin[2] = etaT;
-    if (!fresnelRealAt(fin, fr)) {
-      ray[j] = -ray[j];
-      const c = boxTable[q + F_TIR_COUNTER] | 0;
-      if (c !== NONE) counters[c]++;
-      continue;
+    if (kind === FAST_FRESNEL) {
+      fin[0] = sign * ray[j];
+      fin[1] = boxTable[q + F_ETA_I];
+      fin[2] = boxTable[q + F_ETA_T];
+      if (!fresnelRealAt(fin, fr)) {
+        ray[j] = -ray[j];
+        const c = boxTable[q + F_TIR_COUNTER] | 0;
+        if (c !== NONE) counters[c]++;
+        continue;
+      }
+      R = 0.5 * (fr[0] + fr[1]);
     }
     uniformAt(u, 0);
-    if (u[0] < 0.5 * (fr[0] + fr[1])) {
+    if (u[0] < R) {
       ray[j] = -ray[j];
       continue;
     }
-    const eta = etaI / etaT;
+    // Not reflected: absorbed at a mirror (mirrorEvent), refracted through an interface
+    if (kind === FAST_MIRROR) {
+      bins[boxTable[q + F_BIN] | 0]++;
+      boxEnded = true;
+      return rayEvents;
+    }
+    const eta = fin[1] / fin[2];
     ray[3] *= eta;
     ray[4] *= eta;
     ray[5] *= eta;
