@@ -28,7 +28,11 @@ export function intersectRect(s: Float64Array, p: number, side: number, ray: Flo
   const dk = ray[3 + k];
   // From the front the ray moves against the normal σ·ê_k
   if (side === SIDE_FRONT ? sigma * dk >= 0 : sigma * dk <= 0) return false;
-  const t = (s[p + 1] - ray[k]) / dk;
+  // t = D/d_k ≥ 0 exactly when D is 0 or has d_k's sign (|d_k| ≤ 1: the quotient never rounds to 0),
+  // so a plane behind the ray costs no division
+  const D = s[p + 1] - ray[k];
+  if (dk < 0 ? D > 0 : D < 0) return false;
+  const t = D / dk;
   if (!(t >= 0)) return false;
   // The two other axes in order
   const iu = k === 0 ? 1 : 0;
