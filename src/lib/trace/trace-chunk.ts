@@ -10,6 +10,12 @@
  *   medium — a chip layer — by the slab method, any other by the nearest of its surface list). No
  *   surface ahead is a geometry error, counted, never hidden; in the outside medium it is an escape
  *   (see below).
+ * - Inside the chip: most events happen there (about 2 total internal reflections per ray of about 5
+ *   events), so while a ray is in a box medium whose faces are plain Fresnel interfaces or a mirror
+ *   of fixed reflectance ('average' mode, no phosphor) boxSteps runs the same steps in a loop of its
+ *   own — box exit, flight, face event — from a table of those boxes it keeps itself, drawing the
+ *   same numbers in the same order and counting the same events; it hands the ray back to the
+ *   general loop when it leaves the boxes or meets any other face.
  * - Bulk absorption by Beer–Lambert: each ray draws one optical depth τ ~ Exp(1) at launch and spends
  *   α·t of it on every segment of length t; it is absorbed where the total reaches τ. The same as a
  *   fresh exponential free path per segment (the exponential is memoryless), at one logarithm per ray.
@@ -22,7 +28,8 @@
  * - Escape: a ray in the outside medium is followed to the next surface bounding the outside; when
  *   there is none it reaches the scene's bounding sphere and has escaped, credited to the last
  *   surface it met, with its polar angle (escapes heading below the horizon also counted apart).
- *   With nothing else in the outside (today's packages are convex seen from outside) escape is final.
+ *   A surface its builder marks finalExit (all the outside meets is one convex solid: a dome, a
+ *   closed cylinder, a bare chip, a cup's flat top) ends the ray at once, without the search.
  * - Every ray ends in exactly one ledger bin (named by the scene): escaped by surface, absorbed in a
  *   medium or at a surface, lost at the event cap, or lost on a geometry error. One event = one
  *   segment ending on a surface (or in absorption); the flight to the bounding sphere is not one.
@@ -35,9 +42,11 @@
  * declines to inline a call — and the bundle's loop runs out of inlining budget, so the core helpers
  * it calls with arrays (fresnelRealAt, refractDirectionAt) hold their formulas themselves rather than
  * forward numbers. The flight and the surface event are separate functions so each is optimised with
- * its own inlining budget.
+ * its own inlining budget, and so is boxSteps (the chip's loop: box exit, Fresnel and one draw site
+ * inlined, which is what its budget holds).
  * Drawing: recordSceneRays runs the same steps in a loop of its own and reports each ray's path, so
- * the traced run pays nothing for it (ray-paths.ts).
+ * the traced run pays nothing for it (ray-paths.ts). It takes the general steps only (no boxSteps, no
+ * finalExit shortcut), which give the same fates by construction.
  * Sources: M. Pharr, W. Jakob, G. Humphreys, Physically Based Rendering, 3rd ed. (choosing
  * reflection with probability R, §14.1; exponential free paths, §15.2; media on both sides of a
  * surface, §11.3); G. Marsaglia, "Choosing a point from the surface of a sphere", Ann. Math. Stat. 43,
