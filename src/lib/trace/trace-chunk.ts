@@ -12,10 +12,11 @@
  *   (see below).
  * - Inside the chip: most events happen there (about 2 total internal reflections per ray of about 5
  *   events), so while a ray is in a box medium whose faces are plain Fresnel interfaces or a mirror
- *   of fixed reflectance ('average' mode, no phosphor) boxSteps runs the same steps in a loop of its
- *   own — box exit, flight, face event — from a table of those boxes it keeps itself, drawing the
- *   same numbers in the same order and counting the same events; it hands the ray back to the
- *   general loop when it leaves the boxes or meets any other face.
+ *   of fixed reflectance (no phosphor) boxSteps runs the same steps in a loop of its own — box exit,
+ *   flight, face event (inline in 'average' mode, the general event functions in 'track' mode) —
+ *   from a table of those boxes it keeps itself, drawing the same numbers in the same order and
+ *   counting the same events; it hands the ray back to the general loop when it leaves the boxes or
+ *   meets any other face.
  * - Bulk absorption by Beer–Lambert: each ray draws one optical depth τ ~ Exp(1) at launch and spends
  *   α·t of it on every segment of length t; it is absorbed where the total reaches τ. The same as a
  *   fresh exponential free path per segment (the exponential is memoryless), at one logarithm per ray.
@@ -222,15 +223,15 @@ function configure(scene: CompiledScene, tally?: Tally): void {
 }
 
 /**
- * Fills boxTable / boxOf from the compiled scene: each box medium ('average' mode, no phosphor, not
- * the outside; the first MAX_FAST_BOXES), and of its faces each that is a plain Fresnel interface on
+ * Fills boxTable / boxOf from the compiled scene: each box medium (no phosphor, not the outside; the
+ * first MAX_FAST_BOXES), and of its faces each that is a plain Fresnel interface on
  * its axis or a mirror of fixed reflectance, with what boxSteps needs of it; any other face (diffuse,
  * metal, textured with s > 0, absorber) is FAST_NONE and left to the general event.
  */
 function configureBoxFaces(): void {
   const nm = media.length / MEDIUM_STRIDE;
   boxOf.fill(0);
-  fastBoxes = nm <= MAX_FAST_MEDIA && !track;
+  fastBoxes = nm <= MAX_FAST_MEDIA;
   if (!fastBoxes) return;
   let slots = 0;
   for (let m = 0; m < nm && slots < MAX_FAST_BOXES; m++) {
@@ -574,8 +575,9 @@ function escape(histogram: Float64Array): void {
 
 /**
  * The ray's steps inside box media (chip layers) in one tight loop: box exit → Beer–Lambert flight →
- * the face's Fresnel decision (axisFaceEvent's arithmetic) or its mirror, the same numbers drawn in
- * the same order and the same events counted as runRays's general steps would. Returns the ray's
+ * the face's Fresnel decision (axisFaceEvent's arithmetic; interfaceEvent in 'track' mode) or its
+ * mirror, the same numbers drawn in the same order and the same events counted as runRays's general
+ * steps would. Returns the ray's
  * event count; hands the ray back to the general loop, without having started the step, when it
  * leaves the fast boxes, reaches a face of another behaviour, finds no face ahead or reaches the event
  * cap; boxEnded is set when it ended in the box (absorbed in it or at its mirror, counted).
@@ -611,11 +613,35 @@ function boxSteps(rayEvents: number, maxEvents: number): number {
     ray[k] = boxTable[q + F_AT];
     lastSurface = boxTable[q + F_SURFACE] | 0;
     const j = 3 + k;
+    const sign = boxTable[q + F_SIGN];
+    if (track) {
+      // The general events (their polarisation arithmetic) with surfaceNormal's normal, −sign·ê_k
+      normal[0] = 0;
+      normal[1] = 0;
+      normal[2] = 0;
+      normal[k] = -sign;
+      if (kind === FAST_MIRROR) {
+        if (mirrorEvent(lastSurface * SURFACE_STRIDE, k)) continue;
+        bins[boxTable[q + F_BIN] | 0]++;
+        boxEnded = true;
+        return rayEvents;
+      }
+      const to = boxTable[q + F_TO] | 0;
+      const outcome = interfaceEvent(medium, to);
+      if (outcome === TIR) {
+        const c = boxTable[q + F_TIR_COUNTER] | 0;
+        if (c !== NONE) counters[c]++;
+      }
+      if (outcome !== TRANSMITTED) continue;
+      medium = to;
+      bo = boxOf[medium] - 1;
+      if (bo < 0) return rayEvents;
+      continue;
+    }
     // The probability of reflection: a mirror's R, or the Fresnel R = (Rs + Rp)/2 (axisFaceEvent's
     // arithmetic) after total internal reflection is ruled out; one draw site for both, which keeps the
     // generator inlined here
     let R = boxTable[q + F_R];
-    const sign = boxTable[q + F_SIGN];
     if (kind === FAST_FRESNEL) {
       fin[0] = sign * ray[j];
       fin[1] = boxTable[q + F_ETA_I];
