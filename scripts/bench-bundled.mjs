@@ -8,6 +8,7 @@
  *
  *   node scripts/bench-bundled.mjs                          # 1,000,000 rays per run, 3 rounds, vs 39aaaae
  *   node scripts/bench-bundled.mjs --rays 500000 --rounds 5 --old <commit>|none
+ *   node scripts/bench-bundled.mjs --only dome --one-thread  # packages whose name holds 'dome', one thread
  *
  * The older tracer is taken from git (`git archive <commit> src/lib`) and knows only the packages of
  * its time: the flip chip and the cup rows are timed for the current tracer alone.
@@ -22,13 +23,24 @@ import { Worker, isMainThread, parentPort, workerData } from 'node:worker_thread
 
 const CHUNK_RAYS = 16384;
 
-/** The packages timed (the same as scripts/bench.ts); `old` marks those the older tracer knows. */
+/** The packages timed (those of scripts/bench.ts but the phosphor cup); `old` marks those the older tracer knows. */
 function packages(flipChip) {
   const chip = { widthMm: 1, lengthMm: 1, heightMm: 0.15, n: 2.45, absorptionPerMm: 0.5, emitterZMm: 0.1, emission: 'plane' };
   const dome = { shape: 'dome', radiusMm: 2.5, heightMm: 2.5, n: 1.41, absorptionPerMm: 0.001 };
   const base = { kind: 'reflectance', reflectance: 0.92 };
   return [
+    {
+      name: 'bare chip',
+      old: true,
+      pkg: { chip, base, encapsulant: { shape: 'none', radiusMm: 1, heightMm: 1, n: 1, absorptionPerMm: 0 }, outsideN: 1, polarization: 'average' }
+    },
     { name: 'hemispherical dome', old: true, pkg: { chip, base, encapsulant: dome, outsideN: 1, polarization: 'average' } },
+    {
+      name: 'cylinder',
+      old: true,
+      pkg: { chip, base, encapsulant: { shape: 'cylinder', radiusMm: 2.5, heightMm: 1, n: 1.41, absorptionPerMm: 0.001 }, outsideN: 1, polarization: 'average' }
+    },
+    { name: 'dome, pol. tracked', old: true, pkg: { chip, base, encapsulant: dome, outsideN: 1, polarization: 'track' } },
     { name: 'flip chip, dome', old: false, pkg: { chip: flipChip, base, encapsulant: dome, outsideN: 1, polarization: 'average' } },
     {
       name: 'mid-power cup',
@@ -63,10 +75,12 @@ function readArgs(argv) {
   const rays = Number(get('--rays', 1_000_000));
   const rounds = Number(get('--rounds', 3));
   const old = get('--old', '39aaaae');
+  const only = get('--only', '');
+  const oneThread = argv.includes('--one-thread');
   if (!Number.isInteger(rays) || rays < CHUNK_RAYS || rays > 1e8) throw new RangeError('--rays must be an integer in [16384, 1e8]');
   if (!Number.isInteger(rounds) || rounds < 1 || rounds > 50) throw new RangeError('--rounds must be an integer in [1, 50]');
   if (!/^(none|[0-9a-f]{4,40})$/.test(old)) throw new RangeError('--old must be a commit hash or none');
-  return { rays, rounds, old };
+  return { rays, rounds, old, only, oneThread };
 }
 
 /** Bundles src/lib/trace/index.ts under `root` into dir/name.mjs; returns its file URL. */
@@ -132,7 +146,7 @@ const median = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 const m = (x) => (x / 1e6).toFixed(2).padStart(7);
 
 async function main() {
-  const { rays, rounds, old } = readArgs(process.argv.slice(2));
+  const { rays, rounds, old, only, oneThread } = readArgs(process.argv.slice(2));
   const repo = resolve(fileURLToPath(import.meta.url), '../..');
   const esbuild = await import('esbuild');
   const dir = mkdtempSync(join(tmpdir(), 'outcouple-bench-'));
@@ -151,11 +165,12 @@ async function main() {
     console.log('package              tracer   threads  Mrays/s  Mevents/s  Mrays/CPU-s  scavenges/Mray  extraction');
     const pools = builds.map((b) => startPool(b.url, threads));
     for (const { name, old: oldKnows, pkg } of packages(current.flipChipOnSapphire())) {
+      if (!name.includes(only)) continue;
       const which = builds.map((b, i) => i).filter((i) => i === 0 || oldKnows);
       // Warm-up: let the engine optimise each bundle's loop, here and in the threads
       for (const i of which) {
         traceChunks(libs[i], pkg, 0, 12, 12 * CHUNK_RAYS, 99);
-        await pools[i].run(pkg, 8 * threads * CHUNK_RAYS, 99);
+        if (!oneThread) await pools[i].run(pkg, 8 * threads * CHUNK_RAYS, 99);
       }
       for (const t of [1, threads]) {
         const results = which.map(() => []);
@@ -182,7 +197,7 @@ async function main() {
           const cpuRatio = t === 1 ? `, per CPU second ${ratio('raysPerCpuS')}×` : '';
           console.log(`${''.padEnd(20)} current/${builds[1].label}: wall clock ${ratio('raysPerS')}×${cpuRatio}`);
         }
-        if (t === threads) break;
+        if (t === threads || oneThread) break;
       }
     }
     await Promise.all(pools.map((p) => p.close()));

@@ -42,8 +42,10 @@ export function opticScene(design: OpticDesign, source: OpticSource, material: {
       );
     }
     const base = packageScene(source.pkg);
+    // With the optic in the outside, a ray leaving the package may meet it: no escape from the package is final
+    const packageSurfaces = base.surfaces.map(({ finalExit: _final, ...s }) => s);
     return {
-      scene: { ...base, media: [...base.media, ...parts.media], surfaces: [...base.surfaces, ...parts.surfaces] },
+      scene: { ...base, media: [...base.media, ...parts.media], surfaces: [...packageSurfaces, ...parts.surfaces] },
       roles: parts.roles,
       zOffsetMm: topMm
     };

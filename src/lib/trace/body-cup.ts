@@ -48,7 +48,9 @@ export function cupSurfaces(c: CupBuild): SceneSurface[] {
       shape: { kind: 'disc', at: Hc, normalSign: 1, rInner: 0, rOuter: c.topRadiusMm },
       front: c.outside,
       behind: c.inside,
-      behaviour: { kind: 'fresnel' }
+      behaviour: { kind: 'fresnel' },
+      // the only surface bounding the outside: a plane is left for good
+      finalExit: true
     });
   } else if (c.fill === 'dome') {
     surfaces.push({
@@ -57,7 +59,9 @@ export function cupSurfaces(c: CupBuild): SceneSurface[] {
       front: c.outside,
       behind: c.inside,
       behaviour: { kind: 'fresnel' },
-      legacyEscape: 'escapedDome'
+      legacyEscape: 'escapedDome',
+      // alone (no annulus beside it) the dome is all the outside meets
+      finalExit: c.domeRadiusMm >= c.topRadiusMm
     });
     if (c.domeRadiusMm < c.topRadiusMm) {
       surfaces.push({

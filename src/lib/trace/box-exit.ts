@@ -1,9 +1,3 @@
-import * as layout from './scene-layout';
-
-// The layout's constants as module constants: under tsx (command line, bench) an imported binding is a
-// getter, which the optimiser does not always inline in a large function (measured: 3× slower loop)
-const { M_BOX_A, M_BOX_B, M_BOX_Z0, M_BOX_Z1 } = layout;
-
 /** Faces of a box medium, in the order of its M_BOX_FACES slots. */
 export const FACE_X_POS = 0;
 export const FACE_X_NEG = 1;
@@ -21,10 +15,11 @@ export const FACE_Z_NEG = 5;
  * Writes the distance (mm, ≥ 0) to hit[0] and returns the face (FACE_*), or −1 for a zero
  * direction. A point a hair outside (roundoff) gives t = 0, never t < 0.
  * @param ray [x, y, z, dx, dy, dz] in mm, unit direction (read only)
- * @param media medium records; @param o offset of this box medium's record (box slots M_BOX_*)
+ * @param box the box's [a, b, z0, z1] (mm) from offset o: a medium record's M_BOX_A slots, or the
+ *   tracer's own table of box media
  * @see T. L. Kay, J. T. Kajiya, "Ray tracing complex scenes", SIGGRAPH '86 (slabs)
  */
-export function boxExit(ray: Float64Array, media: Float64Array, o: number, hit: Float64Array): number {
+export function boxExit(ray: Float64Array, box: Float64Array, o: number, hit: Float64Array): number {
   const px = ray[0];
   const py = ray[1];
   const pz = ray[2];
@@ -36,23 +31,23 @@ export function boxExit(ray: Float64Array, media: Float64Array, o: number, hit: 
   let speed = 0;
   let face = -1;
   if (dx > 0) {
-    D = media[o + M_BOX_A] - px;
+    D = box[o] - px;
     speed = dx;
     face = FACE_X_POS;
   } else if (dx < 0) {
-    D = media[o + M_BOX_A] + px;
+    D = box[o] + px;
     speed = -dx;
     face = FACE_X_NEG;
   }
   if (dy > 0) {
-    const Dy = media[o + M_BOX_B] - py;
+    const Dy = box[o + 1] - py;
     if (Dy * speed < D * dy) {
       D = Dy;
       speed = dy;
       face = FACE_Y_POS;
     }
   } else if (dy < 0) {
-    const Dy = media[o + M_BOX_B] + py;
+    const Dy = box[o + 1] + py;
     if (Dy * speed < -D * dy) {
       D = Dy;
       speed = -dy;
@@ -60,14 +55,14 @@ export function boxExit(ray: Float64Array, media: Float64Array, o: number, hit: 
     }
   }
   if (dz > 0) {
-    const Dz = media[o + M_BOX_Z1] - pz;
+    const Dz = box[o + 3] - pz;
     if (Dz * speed < D * dz) {
       D = Dz;
       speed = dz;
       face = FACE_Z_POS;
     }
   } else if (dz < 0) {
-    const Dz = pz - media[o + M_BOX_Z0];
+    const Dz = pz - box[o + 2];
     if (Dz * speed < -D * dz) {
       D = Dz;
       speed = -dz;

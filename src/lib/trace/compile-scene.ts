@@ -100,6 +100,8 @@ export interface CompiledScene {
   spectral: SpectralTables | null;
   /** Ledger bin of each phosphor's heat (absorbed, not re-emitted), by phosphor index. */
   phosphorBins: number[];
+  /** 1 for each surface whose escapes are final (SceneSurface.finalExit), by surface index. */
+  finalExit: Uint8Array;
   /** True when some medium absorbs (each ray then draws an optical depth). */
   absorbing: boolean;
   binNames: string[];
@@ -347,6 +349,7 @@ export function compileScene(scene: SceneDescription): CompiledScene {
     spectral: phosphors.length && scene.chipSpectrum ? buildSpectralTables(scene.chipSpectrum, phosphors) : null,
     phosphorBins,
     track: scene.polarization === 'track',
+    finalExit: Uint8Array.from(scene.surfaces, (s) => (s.finalExit === true ? 1 : 0)),
     absorbing,
     binNames,
     binGroups,

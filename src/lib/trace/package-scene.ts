@@ -69,7 +69,9 @@ export function packageScene(pkg: TracePackage): SceneDescription {
     top: pkg.chip.topScatter ? { kind: 'textured', scatteredFraction: pkg.chip.topScatter } : { kind: 'fresnel' }
   });
   const media: SceneMedium[] = [...chip.media];
-  const surfaces: SceneSurface[] = [...chip.surfaces];
+  // A bare chip on the flat base: its box is all the outside meets (the base then borders nothing)
+  const bareBox = bare && !cup;
+  const surfaces: SceneSurface[] = chip.surfaces.map((s) => (bareBox && chip.outerFaces.includes(s.name) ? { ...s, finalExit: true } : s));
   const ph = pkg.phosphor;
   if (!bare) {
     media.push({
@@ -107,7 +109,8 @@ export function packageScene(pkg: TracePackage): SceneDescription {
         front: OUTSIDE,
         behind: ENCAPSULANT,
         behaviour: { kind: 'fresnel' },
-        legacyEscape: 'escapedDome'
+        legacyEscape: 'escapedDome',
+        finalExit: true
       });
     } else if (enc.shape === 'box') {
       surfaces.push(...encapsulantBoxSurfaces(enc.radiusMm, enc.heightMm));
@@ -119,7 +122,8 @@ export function packageScene(pkg: TracePackage): SceneDescription {
           front: OUTSIDE,
           behind: ENCAPSULANT,
           behaviour: { kind: 'fresnel' },
-          legacyEscape: 'escapedCylinderSide'
+          legacyEscape: 'escapedCylinderSide',
+          finalExit: true
         },
         {
           name: 'cylinder top',
@@ -127,7 +131,8 @@ export function packageScene(pkg: TracePackage): SceneDescription {
           front: OUTSIDE,
           behind: ENCAPSULANT,
           behaviour: { kind: 'fresnel' },
-          legacyEscape: 'escapedCylinderTop'
+          legacyEscape: 'escapedCylinderTop',
+          finalExit: true
         }
       );
     }

@@ -49,30 +49,38 @@ export function seedChunk(seed: number, chunkIndex: number): void {
 }
 
 /**
- * Next uniform number in [0, 1) with 32 random bits: u = x·2⁻³², x the xoshiro128** output.
- * Smallest step 2⁻³² ≈ 2.3e−10.
+ * Draws one uniform number in [0, 1) with 32 random bits into out[i]: u = x·2⁻³², x the xoshiro128**
+ * output (smallest step 2⁻³² ≈ 2.3e−10). The ray loop draws into arrays: a number returned from a
+ * call the engine does not inline is a heap object, a number written into an array is not. Small and
+ * loop-free, so a loop that has spent most of its inlining budget still inlines it.
  */
-export function nextFloat(): number {
+export function uniformAt(out: Float64Array, i: number): void {
   // xoshiro128**: result = rotl(s1·5, 7)·9; t = s1 << 9; s2 ^= s0; s3 ^= s1; s1 ^= s2; s0 ^= s3; s2 ^= t; s3 = rotl(s3, 11)
-  const m = Math.imul(s[1], 5);
+  // (each word read once and written once: the state array is memory the engine does not keep in registers)
+  const s0 = s[0];
+  const s1 = s[1];
+  const s2 = s[2] ^ s0;
+  const s3 = s[3] ^ s1;
+  const m = Math.imul(s1, 5);
   const result = Math.imul((m << 7) | (m >>> 25), 9) >>> 0;
-  const t = s[1] << 9;
-  s[2] ^= s[0];
-  s[3] ^= s[1];
-  s[1] ^= s[2];
-  s[0] ^= s[3];
-  s[2] ^= t;
-  s[3] = (s[3] << 11) | (s[3] >>> 21);
-  return result * 2.3283064365386963e-10;
+  s[0] = s0 ^ s3;
+  s[1] = s1 ^ s2;
+  s[2] = s2 ^ (s1 << 9);
+  s[3] = (s3 << 11) | (s3 >>> 21);
+  out[i] = result * 2.3283064365386963e-10;
 }
 
-/**
- * Draws `count` uniform numbers in [0, 1) into out[0..count−1], in sequence (the same numbers as
- * `count` calls of nextFloat). The ray loop draws this way: a number returned from a call the engine
- * does not inline is a heap object, a number written into an array is not.
- */
+/** Draws `count` uniform numbers into out[0..count−1], in sequence (uniformAt's). */
 export function uniformsInto(out: Float64Array, count: number): void {
-  for (let i = 0; i < count; i++) out[i] = nextFloat();
+  for (let i = 0; i < count; i++) uniformAt(out, i);
+}
+
+const one = new Float64Array(1);
+
+/** Next uniform number in [0, 1) (uniformsInto's, one at a time; not for the ray loop: see there). */
+export function nextFloat(): number {
+  uniformsInto(one, 1);
+  return one[0];
 }
 
 /** Next raw 32-bit output as an unsigned integer (for tests against the reference sequence). */

@@ -142,6 +142,14 @@ export interface SceneSurface {
   /** Ledger bin for rays whose last surface before the bounding sphere was this one; default `name`. */
   escapedBin?: string;
   legacyEscape?: LegacyEscape;
+  /**
+   * The builder's promise that a ray in the outside medium whose last surface was this one meets no
+   * surface again: every surface bounding the outside is a face of one convex solid seen from without
+   * (a dome, a closed cylinder, a bare chip's box, a lone flat top), and a ray that has left a convex
+   * solid does not re-enter it. The tracer then counts the escape without searching the outside's
+   * surfaces. Default false (the search decides).
+   */
+  finalExit?: boolean;
 }
 
 export interface SceneEmitter {

@@ -29,7 +29,11 @@ export function intersectRect(s: Float64Array, p: number, side: number, ray: Flo
   const dk = ray[3 + k];
   // From the front the ray moves against the normal σ·ê_k
   if (side === SIDE_FRONT ? sigma * dk >= 0 : sigma * dk <= 0) return false;
-  const t = (s[p + 1] - ray[k]) / dk;
+  // t = D/d_k ≥ 0 exactly when D is 0 or has d_k's sign (|d_k| ≤ 1: the quotient never rounds to 0),
+  // so a plane behind the ray costs no division
+  const D = s[p + 1] - ray[k];
+  if (dk < 0 ? D > 0 : D < 0) return false;
+  const t = D / dk;
   if (!(t >= 0)) return false;
   // The two other axes in order
   const iu = k === 0 ? 1 : 0;
@@ -57,28 +61,39 @@ export function intersectDisc(s: Float64Array, p: number, side: number, ray: Flo
   return true;
 }
 
+// A quadric's coefficients [A, B, C] and its root, in arrays: a call the engine declines to inline
+// boxes every floating-point argument and result, and the tracer's list search is out of budget often
+const quadric = new Float64Array(4);
+
 /**
- * The root of A t² + 2B t + C = 0 where the ray crosses from `side`, or −1 when there is none. From
- * behind with A > 0 (a closed quadric seen from inside) a negative discriminant is roundoff of a point
- * a hair outside: it is read as 0 (the tangent point), never NaN.
+ * The root of A t² + 2B t + C = 0 where the ray crosses from `side`, or −1 when there is none, with
+ * q = [A, B, C]; written to q[3]. From behind with A > 0 (a closed quadric seen from inside) a negative
+ * discriminant is roundoff of a point a hair outside: it is read as 0 (the tangent point), never NaN.
  */
-function quadricRoot(A: number, B: number, C: number, side: number): number {
+function quadricRoot(q: Float64Array, side: number): void {
+  const A = q[0];
+  const B = q[1];
+  const C = q[2];
   let D = B * B - A * C;
   if (side === SIDE_FRONT) {
-    if (D < 0 || A === 0) return -1;
+    if (D < 0 || A === 0) {
+      q[3] = -1;
+      return;
+    }
     const sq = Math.sqrt(D);
     // t = (−B − √D)/A
-    return B < 0 ? C / (sq - B) : -(B + sq) / A;
+    q[3] = B < 0 ? C / (sq - B) : -(B + sq) / A;
+    return;
   }
-  if (A === 0) return -1;
-  if (D < 0) {
-    if (A < 0) return -1;
-    D = 0;
+  if (A === 0 || (D < 0 && A < 0)) {
+    q[3] = -1;
+    return;
   }
+  if (D < 0) D = 0;
   const sq = Math.sqrt(D);
   // t = (−B + √D)/A; from inside a closed quadric (A > 0) a point a hair outside gives 0, not t < 0
   const t = B > 0 ? -C / (B + sq) : (sq - B) / A;
-  return A > 0 && t < 0 ? 0 : t;
+  q[3] = A > 0 && t < 0 ? 0 : t;
 }
 
 /** Cylinder wall about z: radius, z0, z1 from offset p. */
@@ -91,7 +106,11 @@ export function intersectCylinder(s: Float64Array, p: number, side: number, ray:
   // f = x² + y² − R²
   const A = dx * dx + dy * dy;
   if (!(A > 0)) return false;
-  const t = quadricRoot(A, px * dx + py * dy, px * px + py * py - R * R, side);
+  quadric[0] = A;
+  quadric[1] = px * dx + py * dy;
+  quadric[2] = px * px + py * py - R * R;
+  quadricRoot(quadric, side);
+  const t = quadric[3];
   if (!(t >= 0)) return false;
   const z = ray[2] + t * ray[5];
   if (!(z >= s[p + 1] && z <= s[p + 2])) return false;
@@ -110,7 +129,11 @@ export function intersectFrustum(s: Float64Array, p: number, side: number, ray: 
   // f = x² + y² − ρ(z)², ρ(z) = r0 + k (z − z0)
   const rho = s[p] + k * (ray[2] - s[p + 1]);
   const kdz = k * dz;
-  const t = quadricRoot(dx * dx + dy * dy - kdz * kdz, px * dx + py * dy - rho * kdz, px * px + py * py - rho * rho, side);
+  quadric[0] = dx * dx + dy * dy - kdz * kdz;
+  quadric[1] = px * dx + py * dy - rho * kdz;
+  quadric[2] = px * px + py * py - rho * rho;
+  quadricRoot(quadric, side);
+  const t = quadric[3];
   if (!(t >= 0)) return false;
   const z = ray[2] + t * dz;
   if (!(z >= s[p + 1] && z <= s[p + 3])) return false;
@@ -133,7 +156,11 @@ export function intersectSpheroidCap(s: Float64Array, p: number, side: number, r
   const zc = s[p + 2];
   const qz = (ray[2] - zc) * scale;
   const vz = ray[5] * scale;
-  const t = quadricRoot(dx * dx + dy * dy + vz * vz, px * dx + py * dy + qz * vz, px * px + py * py + qz * qz - R * R, side);
+  quadric[0] = dx * dx + dy * dy + vz * vz;
+  quadric[1] = px * dx + py * dy + qz * vz;
+  quadric[2] = px * px + py * py + qz * qz - R * R;
+  quadricRoot(quadric, side);
+  const t = quadric[3];
   if (!(t >= 0)) return false;
   if (!(ray[2] + t * ray[5] >= zc)) return false;
   hit[0] = t;

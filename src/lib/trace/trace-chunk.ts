@@ -10,6 +10,13 @@
  *   medium — a chip layer — by the slab method, any other by the nearest of its surface list). No
  *   surface ahead is a geometry error, counted, never hidden; in the outside medium it is an escape
  *   (see below).
+ * - Inside the chip: most events happen there (about 2 total internal reflections per ray of about 5
+ *   events), so while a ray is in a box medium whose faces are plain Fresnel interfaces or a mirror
+ *   of fixed reflectance (no phosphor) boxSteps runs the same steps in a loop of its own — box exit,
+ *   flight, face event (inline in 'average' mode, the general event functions in 'track' mode) —
+ *   from a table of those boxes it keeps itself, drawing the same numbers in the same order and
+ *   counting the same events; it hands the ray back to the general loop when it leaves the boxes or
+ *   meets any other face.
  * - Bulk absorption by Beer–Lambert: each ray draws one optical depth τ ~ Exp(1) at launch and spends
  *   α·t of it on every segment of length t; it is absorbed where the total reaches τ. The same as a
  *   fresh exponential free path per segment (the exponential is memoryless), at one logarithm per ray.
@@ -22,7 +29,8 @@
  * - Escape: a ray in the outside medium is followed to the next surface bounding the outside; when
  *   there is none it reaches the scene's bounding sphere and has escaped, credited to the last
  *   surface it met, with its polar angle (escapes heading below the horizon also counted apart).
- *   With nothing else in the outside (today's packages are convex seen from outside) escape is final.
+ *   A surface its builder marks finalExit (all the outside meets is one convex solid: a dome, a
+ *   closed cylinder, a bare chip, a cup's flat top) ends the ray at once, without the search.
  * - Every ray ends in exactly one ledger bin (named by the scene): escaped by surface, absorbed in a
  *   medium or at a surface, lost at the event cap, or lost on a geometry error. One event = one
  *   segment ending on a surface (or in absorption); the flight to the bounding sphere is not one.
@@ -35,9 +43,11 @@
  * declines to inline a call — and the bundle's loop runs out of inlining budget, so the core helpers
  * it calls with arrays (fresnelRealAt, refractDirectionAt) hold their formulas themselves rather than
  * forward numbers. The flight and the surface event are separate functions so each is optimised with
- * its own inlining budget.
+ * its own inlining budget, and so is boxSteps (the chip's loop: box exit, Fresnel and one draw site
+ * inlined, which is what its budget holds).
  * Drawing: recordSceneRays runs the same steps in a loop of its own and reports each ray's path, so
- * the traced run pays nothing for it (ray-paths.ts).
+ * the traced run pays nothing for it (ray-paths.ts). It takes the general steps only (no boxSteps, no
+ * finalExit shortcut), which give the same fates by construction.
  * Sources: M. Pharr, W. Jakob, G. Humphreys, Physically Based Rendering, 3rd ed. (choosing
  * reflection with probability R, §14.1; exponential free paths, §15.2; media on both sides of a
  * surface, §11.3); G. Marsaglia, "Choosing a point from the surface of a sphere", Ann. Math. Stat. 43,
@@ -53,7 +63,7 @@ import { lambertianDirection } from './lambertian';
 import { DEFAULT_MAX_EVENTS, type TracePackage } from './package-spec';
 import { packageScene } from './package-scene';
 import { TRACK_TIR, TRACK_TRANSMITTED, launchPolarization, trackedInterface, trackedMirror } from './polarization';
-import { seedChunk, uniformsInto } from './rng';
+import { seedChunk, uniformAt, uniformsInto } from './rng';
 import { useRevolutionProfiles } from './revolution-shape';
 import { launchSourceRay } from './source-launch';
 import * as layout from './scene-layout';
@@ -91,7 +101,9 @@ const {
   M_INDEX,
   M_LIST_COUNT,
   M_LIST_START,
+  M_PHOSPHOR,
   NONE,
+  SHAPE_RECT,
   SIDE_FRONT,
   SURFACE_STRIDE,
   S_B,
@@ -100,6 +112,8 @@ const {
   S_BIN_ABSORBED,
   S_BIN_ESCAPED,
   S_FRONT,
+  S_P,
+  S_SHAPE,
   S_TIR_BEHIND,
   S_TIR_FRONT
 } = layout;
@@ -128,7 +142,7 @@ const mirror = new Float64Array(MIRROR_AMPLITUDES_LENGTH);
 // numbers handed to the polarisation functions (see polarization.ts: arrays, so nothing is boxed)
 const trackArgs = new Float64Array(5);
 // Uniform random numbers just drawn (uniformsInto), and the Fresnel inputs [cos θi, etaI, etaT]
-const u = new Float64Array(2);
+const u = new Float64Array(5);
 const fin = new Float64Array(3);
 // Debug counters of the current chunk (COUNTER_*)
 const counters = new Float64Array(COUNTERS);
@@ -137,6 +151,7 @@ const counters = new Float64Array(COUNTERS);
 let media: Float64Array = new Float64Array(0);
 let surfaces: Float64Array = new Float64Array(0);
 let bounds: Int32Array = new Int32Array(0);
+let finalExit: Uint8Array = new Uint8Array(0);
 let bins = new Float64Array(2);
 let outside = 0;
 let emitterOffset = 0;
@@ -164,10 +179,49 @@ let escapesLogged = 0;
 let medium = 0;
 let lastSurface = NONE;
 
+// The box media the tight box loop (boxSteps) walks, in a table of its own: module constants (not
+// the scene's arrays, which configure() replaces), so the optimised loop reads them without checks.
+// A box record: [a, b, z0, z1] (boxExit's layout), α, its absorption bin, then its six faces in
+// M_BOX_FACES order, FACE_STRIDE doubles each.
+const MAX_FAST_BOXES = 8;
+const MAX_FAST_MEDIA = 64;
+const B_ABSORPTION = 4;
+const B_BIN = 5;
+const B_FACES = 6;
+const FAST_NONE = 0;
+/** A plain Fresnel interface on an axis (or a textured one with s = 0, which draws nothing more). */
+const FAST_FRESNEL = 1;
+/** A specular mirror of a fixed reflectance. */
+const FAST_MIRROR = 2;
+const F_KIND = 0;
+const F_SURFACE = 1;
+const F_TO = 2;
+const F_ETA_I = 3;
+const F_ETA_T = 4;
+/** Outward normal sign·ê_k: cos θi = sign·d_k. */
+const F_SIGN = 5;
+const F_AXIS = 6;
+/** The face's plane coordinate, where the ray is put on reaching it (as surfaceNormal does). */
+const F_AT = 7;
+const F_TIR_COUNTER = 8;
+/** Mirror: reflectance, and the bin of what it absorbs. */
+const F_R = 9;
+const F_BIN = 10;
+const FACE_STRIDE = 11;
+const BOX_STRIDE = B_FACES + 6 * FACE_STRIDE;
+const boxTable = new Float64Array(MAX_FAST_BOXES * BOX_STRIDE);
+/** Per medium: offset of its record in boxTable + 1 when boxSteps walks it, else 0. */
+const boxOf = new Int32Array(MAX_FAST_MEDIA);
+/** False when the scene has more media than boxOf holds (then no box is walked fast). */
+let fastBoxes = false;
+/** Set by boxSteps when the ray ended inside (absorbed in the box or at its mirror: counted). */
+let boxEnded = false;
+
 function configure(scene: CompiledScene, tally?: Tally): void {
   media = scene.media;
   surfaces = scene.surfaces;
   bounds = scene.bounds;
+  finalExit = scene.finalExit;
   if (bins.length !== scene.binNames.length) bins = new Float64Array(scene.binNames.length);
   bins.fill(0);
   counters.fill(0);
@@ -187,19 +241,66 @@ function configure(scene: CompiledScene, tally?: Tally): void {
   sourceRays = scene.emitterRays;
   sourceSurface = scene.emitterSurface;
   useRevolutionProfiles(scene.profiles, scene.surfaceNames.length);
+  configureBoxFaces();
+}
+
+/**
+ * Fills boxTable / boxOf from the compiled scene: each box medium (no phosphor, not the outside; the
+ * first MAX_FAST_BOXES), and of its faces each that is a plain Fresnel interface on
+ * its axis or a mirror of fixed reflectance, with what boxSteps needs of it; any other face (diffuse,
+ * metal, textured with s > 0, absorber) is FAST_NONE and left to the general event.
+ */
+function configureBoxFaces(): void {
+  const nm = media.length / MEDIUM_STRIDE;
+  boxOf.fill(0);
+  fastBoxes = nm <= MAX_FAST_MEDIA;
+  if (!fastBoxes) return;
+  let slots = 0;
+  for (let m = 0; m < nm && slots < MAX_FAST_BOXES; m++) {
+    const mo = m * MEDIUM_STRIDE;
+    if (m === outside || (media[mo + M_BOUNDARY] | 0) !== BOUNDARY_BOX || media[mo + M_PHOSPHOR] >= 0) continue;
+    const bo = slots++ * BOX_STRIDE;
+    boxOf[m] = bo + 1;
+    boxTable.set(media.subarray(mo + M_BOX_A, mo + M_BOX_A + 4), bo);
+    boxTable[bo + B_ABSORPTION] = media[mo + M_ABSORPTION];
+    boxTable[bo + B_BIN] = media[mo + M_BIN];
+    for (let f = 0; f < 6; f++) {
+      const q = bo + B_FACES + f * FACE_STRIDE;
+      const entry = media[mo + M_BOX_FACES + f] | 0;
+      const side = entry & 1;
+      const o = (entry >> 1) * SURFACE_STRIDE;
+      const behaviour = surfaces[o + S_BEHAVIOUR] | 0;
+      const to = (side === SIDE_FRONT ? surfaces[o + S_BEHIND] : surfaces[o + S_FRONT]) | 0;
+      const p = o + S_P;
+      boxTable[q + F_KIND] = FAST_NONE;
+      if ((surfaces[o + S_SHAPE] | 0) !== SHAPE_RECT) continue;
+      const fresnel = behaviour === BEHAVIOUR_FRESNEL || (behaviour === BEHAVIOUR_TEXTURED && !(surfaces[o + S_B] > 0));
+      const plainMirror = behaviour === BEHAVIOUR_MIRROR && surfaces[o + S_B] >= 0;
+      if (!fresnel && !plainMirror) continue;
+      boxTable[q + F_KIND] = fresnel ? FAST_FRESNEL : FAST_MIRROR;
+      boxTable[q + F_SURFACE] = entry >> 1;
+      boxTable[q + F_TO] = to;
+      boxTable[q + F_ETA_I] = media[mo + M_INDEX];
+      boxTable[q + F_ETA_T] = to === NONE ? 1 : media[to * MEDIUM_STRIDE + M_INDEX];
+      // surfaceNormal's normal facing the incident side is (front ? σ : −σ)·ê_k; the outward one its negative
+      boxTable[q + F_SIGN] = side === SIDE_FRONT ? -surfaces[p + 2] : surfaces[p + 2];
+      boxTable[q + F_AXIS] = surfaces[p];
+      boxTable[q + F_AT] = surfaces[p + 1];
+      boxTable[q + F_TIR_COUNTER] = surfaces[o + (side === SIDE_FRONT ? S_TIR_FRONT : S_TIR_BEHIND)];
+      boxTable[q + F_R] = plainMirror ? surfaces[o + S_B] : 0;
+      boxTable[q + F_BIN] = surfaces[o + S_BIN_ABSORBED];
+    }
+  }
 }
 
 /** Starts a ray in the emitting medium (or from a source, see source-launch.ts): position, direction, polarisation, optical depth. */
 function launch(): void {
   if (sourceKind >= EMIT_LAMBERTIAN_RECT) launchSourceRay(ray, sourceKind, sourceParams, sourceRays);
   else launchFromChip();
-  if (track) {
-    uniformsInto(trackArgs, 1);
-    launchPolarization(direction, trackArgs);
-  }
+  if (track) redrawPolarization();
   // Optical depth to absorption, τ ~ Exp(1) by inverse transform (1 − u ∈ (0, 1]); none if nothing absorbs
   if (absorbing) {
-    uniformsInto(u, 1);
+    uniformAt(u, 0);
     ray[6] = -Math.log(1 - u[0]);
   } else ray[6] = Infinity;
   medium = emitterMedium;
@@ -209,23 +310,24 @@ function launch(): void {
 /** Position and direction (isotropic, or a beam down for slab references) of a ray from the emitting chip layer. */
 function launchFromChip(): void {
   const o = emitterOffset;
-  // Position on the emitting plane or in the volume of the emitting box
-  uniformsInto(u, 2);
+  // Position on the emitting plane or in the volume of the emitting box, then (isotropic) a first pair
+  const isotropic = emitterDirection === DIRECTION_ISOTROPIC;
+  const n = volumeEmission ? 3 : 2;
+  uniformsInto(u, isotropic ? n + 2 : n);
   ray[0] = (u[0] - 0.5) * 2 * media[o + M_BOX_A];
   ray[1] = (u[1] - 0.5) * 2 * media[o + M_BOX_B];
   if (volumeEmission) {
     const z0 = media[o + M_BOX_Z0];
-    uniformsInto(u, 1);
-    ray[2] = z0 + u[0] * (media[o + M_BOX_Z1] - z0);
+    ray[2] = z0 + u[2] * (media[o + M_BOX_Z1] - z0);
   } else {
     ray[2] = emitterZ[0];
   }
-  // Isotropic direction without trigonometry (Marsaglia 1972): (u, v) uniform in the unit disc,
-  // s = u² + v²; then (2u√(1 − s), 2v√(1 − s), 1 − 2s) is uniform on the sphere
-  if (emitterDirection === DIRECTION_ISOTROPIC) {
-    let a = 0;
-    let b = 0;
-    let s = 1;
+  // Isotropic direction without trigonometry (Marsaglia 1972): (a, b) uniform in the unit disc,
+  // s = a² + b²; then (2a√(1 − s), 2b√(1 − s), 1 − 2s) is uniform on the sphere
+  if (isotropic) {
+    let a = 2 * u[n] - 1;
+    let b = 2 * u[n + 1] - 1;
+    let s = a * a + b * b;
     while (s >= 1) {
       uniformsInto(u, 2);
       a = 2 * u[0] - 1;
@@ -236,7 +338,12 @@ function launchFromChip(): void {
     ray[3] = k * a;
     ray[4] = k * b;
     ray[5] = 1 - 2 * s;
-  } else if (emitterDirection === DIRECTION_DOWN) {
+  } else launchDirection();
+}
+
+/** A launch direction other than isotropic: straight down, or cosine-weighted about −z. */
+function launchDirection(): void {
+  if (emitterDirection === DIRECTION_DOWN) {
     ray[3] = 0;
     ray[4] = 0;
     ray[5] = -1;
@@ -253,7 +360,7 @@ function launchFromChip(): void {
 function nearestBoundary(): number {
   const o = medium * MEDIUM_STRIDE;
   if ((media[o + M_BOUNDARY] | 0) === BOUNDARY_BOX) {
-    const face = boxExit(ray, media, o, hit);
+    const face = boxExit(ray, media, o + M_BOX_A, hit);
     return face < 0 ? NONE : media[o + M_BOX_FACES + face] | 0;
   }
   let best = NONE;
@@ -305,7 +412,7 @@ function interfaceEvent(from: number, to: number): number {
     trackArgs[0] = cosI;
     trackArgs[1] = etaI;
     trackArgs[2] = etaT;
-    uniformsInto(u, 1);
+    uniformAt(u, 0);
     trackArgs[3] = u[0];
     const code = trackedInterface(direction, normal, trackArgs);
     return code === TRACK_TRANSMITTED ? TRANSMITTED : code === TRACK_TIR ? TIR : REFLECTED;
@@ -319,7 +426,7 @@ function interfaceEvent(from: number, to: number): number {
     return TIR;
   }
   // Reflect with probability R = (Rs + Rp)/2, else refract
-  uniformsInto(u, 1);
+  uniformAt(u, 0);
   if (u[0] < 0.5 * (fr[0] + fr[1])) {
     reflectDirection(direction, direction, normal);
     return REFLECTED;
@@ -348,7 +455,7 @@ function axisFaceEvent(k: number, from: number, to: number): number {
     return TIR;
   }
   // Reflect with probability R = (Rs + Rp)/2, else refract
-  uniformsInto(u, 1);
+  uniformAt(u, 0);
   if (u[0] < 0.5 * (fr[0] + fr[1])) {
     ray[j] = -ray[j];
     return REFLECTED;
@@ -363,7 +470,7 @@ function axisFaceEvent(k: number, from: number, to: number): number {
 
 /** A new random linear polarisation for a ray whose direction was redrawn (a diffuse event depolarises). */
 function redrawPolarization(): void {
-  uniformsInto(trackArgs, 1);
+  uniformAt(trackArgs, 0);
   launchPolarization(direction, trackArgs);
 }
 
@@ -393,7 +500,7 @@ function dielectricEvent(entry: number, axis: number): void {
 function textureEvent(o: number, into: number): void {
   const s = surfaces[o + S_B];
   if (!(s > 0)) return;
-  uniformsInto(u, 1);
+  uniformAt(u, 0);
   if (!(u[0] < s)) return;
   scatterAxis[0] = into * normal[0];
   scatterAxis[1] = into * normal[1];
@@ -421,12 +528,12 @@ function mirrorEvent(o: number, axis: number): boolean {
     trackArgs[1] = metal ? mirror[1] : 0;
     trackArgs[2] = metal ? mirror[2] : amplitude;
     trackArgs[3] = metal ? mirror[3] : 0;
-    uniformsInto(u, 1);
+    uniformAt(u, 0);
     trackArgs[4] = u[0];
     return trackedMirror(direction, normal, trackArgs);
   }
   const R = metal ? 0.5 * (mirror[4] + mirror[5]) : reflectance;
-  uniformsInto(u, 1);
+  uniformAt(u, 0);
   if (!(u[0] < R)) return false;
   if (axis >= 0) ray[3 + axis] = -ray[3 + axis];
   else reflectDirection(direction, direction, normal);
@@ -435,7 +542,7 @@ function mirrorEvent(o: number, axis: number): boolean {
 
 /** Lambertian reflector at offset o: true if reflected into a cosine-weighted direction. */
 function diffuseEvent(o: number): boolean {
-  uniformsInto(u, 1);
+  uniformAt(u, 0);
   if (!(u[0] < surfaces[o + S_B])) return false;
   uniformsInto(u, 2);
   lambertianDirection(direction, normal, u);
@@ -511,6 +618,109 @@ export function recordEscapes(buffer: Float64Array): () => number {
 }
 
 /**
+ * The ray's steps inside box media (chip layers) in one tight loop: box exit → Beer–Lambert flight →
+ * the face's Fresnel decision (axisFaceEvent's arithmetic; interfaceEvent in 'track' mode) or its
+ * mirror, the same numbers drawn in the same order and the same events counted as runRays's general
+ * steps would. Returns the ray's
+ * event count; hands the ray back to the general loop, without having started the step, when it
+ * leaves the fast boxes, reaches a face of another behaviour, finds no face ahead or reaches the event
+ * cap; boxEnded is set when it ended in the box (absorbed in it or at its mirror, counted).
+ * Its own function, taking and returning only integers (see the file comment).
+ */
+function boxSteps(rayEvents: number, maxEvents: number): number {
+  boxEnded = false;
+  let bo = boxOf[medium] - 1;
+  for (;;) {
+    const face = boxExit(ray, boxTable, bo, hit);
+    if (face < 0 || rayEvents === maxEvents) return rayEvents;
+    const q = bo + B_FACES + face * FACE_STRIDE;
+    const kind = boxTable[q + F_KIND];
+    if (kind === FAST_NONE) return rayEvents;
+    rayEvents++;
+    // Free flight with Beer–Lambert absorption (flight())
+    const t = hit[0];
+    const alpha = boxTable[bo + B_ABSORPTION];
+    if (alpha > 0) {
+      const depth = alpha * t;
+      if (depth >= ray[6]) {
+        bins[boxTable[bo + B_BIN] | 0]++;
+        boxEnded = true;
+        return rayEvents;
+      }
+      ray[6] -= depth;
+    }
+    ray[0] += t * ray[3];
+    ray[1] += t * ray[4];
+    ray[2] += t * ray[5];
+    // On the face (surfaceNormal's snap)
+    const k = boxTable[q + F_AXIS] | 0;
+    ray[k] = boxTable[q + F_AT];
+    lastSurface = boxTable[q + F_SURFACE] | 0;
+    const j = 3 + k;
+    const sign = boxTable[q + F_SIGN];
+    if (track) {
+      // The general events (their polarisation arithmetic) with surfaceNormal's normal, −sign·ê_k
+      normal[0] = 0;
+      normal[1] = 0;
+      normal[2] = 0;
+      normal[k] = -sign;
+      if (kind === FAST_MIRROR) {
+        if (mirrorEvent(lastSurface * SURFACE_STRIDE, k)) continue;
+        bins[boxTable[q + F_BIN] | 0]++;
+        boxEnded = true;
+        return rayEvents;
+      }
+      const to = boxTable[q + F_TO] | 0;
+      const outcome = interfaceEvent(medium, to);
+      if (outcome === TIR) {
+        const c = boxTable[q + F_TIR_COUNTER] | 0;
+        if (c !== NONE) counters[c]++;
+      }
+      if (outcome !== TRANSMITTED) continue;
+      medium = to;
+      bo = boxOf[medium] - 1;
+      if (bo < 0) return rayEvents;
+      continue;
+    }
+    // The probability of reflection: a mirror's R, or the Fresnel R = (Rs + Rp)/2 (axisFaceEvent's
+    // arithmetic) after total internal reflection is ruled out; one draw site for both, which keeps the
+    // generator inlined here
+    let R = boxTable[q + F_R];
+    if (kind === FAST_FRESNEL) {
+      fin[0] = sign * ray[j];
+      fin[1] = boxTable[q + F_ETA_I];
+      fin[2] = boxTable[q + F_ETA_T];
+      if (!fresnelRealAt(fin, fr)) {
+        ray[j] = -ray[j];
+        const c = boxTable[q + F_TIR_COUNTER] | 0;
+        if (c !== NONE) counters[c]++;
+        continue;
+      }
+      R = 0.5 * (fr[0] + fr[1]);
+    }
+    uniformAt(u, 0);
+    if (u[0] < R) {
+      ray[j] = -ray[j];
+      continue;
+    }
+    // Not reflected: absorbed at a mirror (mirrorEvent), refracted through an interface
+    if (kind === FAST_MIRROR) {
+      bins[boxTable[q + F_BIN] | 0]++;
+      boxEnded = true;
+      return rayEvents;
+    }
+    const eta = fin[1] / fin[2];
+    ray[3] *= eta;
+    ray[4] *= eta;
+    ray[5] *= eta;
+    ray[j] = sign * fr[2];
+    medium = boxTable[q + F_TO] | 0;
+    bo = boxOf[medium] - 1;
+    if (bo < 0) return rayEvents;
+  }
+}
+
+/**
  * The ray loop proper: launches `rays` rays and follows each to its end, counting fates in `bins`.
  * Kept apart from the tally bookkeeping so the optimised loop never meets code it has not yet run.
  */
@@ -521,6 +731,16 @@ function runRays(rays: number, maxEvents: number, histogram: Float64Array, onPro
     if (spectral) launchWavelength(i);
     let rayEvents = 0;
     for (;;) {
+      // Inside the chip's layers: the tight loop, until the ray leaves them or needs the general step
+      if (fastBoxes && boxOf[medium] !== 0) {
+        rayEvents = boxSteps(rayEvents, maxEvents);
+        if (boxEnded) break;
+      }
+      // Left a convex package for good (SceneSurface.finalExit): nothing to search
+      if (medium === outside && lastSurface >= 0 && finalExit[lastSurface] === 1) {
+        escape(histogram);
+        break;
+      }
       const entry = nearestBoundary();
       // Nothing ahead in the outside medium: the bounding sphere
       if (entry === NONE && medium === outside) {

@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import * as S from '../../../src/lib/trace/box-exit';
 
-const boxExit = (r: Float64Array, b: Float64Array, h: Float64Array) => S.boxExit(r, b, MEDIUM_STRIDE, h);
+const boxExit = (r: Float64Array, b: Float64Array, h: Float64Array) => S.boxExit(r, b, MEDIUM_STRIDE + M_BOX_A, h);
 import { MEDIUM_STRIDE, M_BOX_A } from '../../../src/lib/trace/scene-layout';
 import { EPS, assertInDelta } from '../../support/assert';
 
@@ -15,7 +15,7 @@ const ray = (x: number, y: number, z: number, dx: number, dy: number, dz: number
   return Float64Array.of(x, y, z, dx / n, dy / n, dz / n);
 };
 
-describe('boxExit(ray, media, offset, hit)', () => {
+describe('boxExit(ray, box, offset, hit)', () => {
   it.each([
     [ray(0, 0, 0.05, 1, 0, 0), S.FACE_X_POS, 0.5],
     [ray(0, 0, 0.05, -1, 0, 0), S.FACE_X_NEG, 0.5],
@@ -71,7 +71,7 @@ describe('boxExit on a raised box (a chip layer above another)', () => {
     const layer = new Float64Array(MEDIUM_STRIDE);
     layer.set([0.5, 0.25, 0.125, 0.25], M_BOX_A);
     const r = Float64Array.of(0, 0, 0.2, 0, 0, -1);
-    expect(S.boxExit(r, layer, 0, hit)).toBe(S.FACE_Z_NEG);
+    expect(S.boxExit(r, layer, M_BOX_A, hit)).toBe(S.FACE_Z_NEG);
     expect(hit[0]).toBe(0.2 - 0.125);
   });
 });
