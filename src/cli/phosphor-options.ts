@@ -5,7 +5,7 @@
  */
 import { readFileSync, statSync } from 'node:fs';
 import { LIMITS } from '../lib/scenario';
-import { PHOSPHOR_REGIONS, TRACED_PHOSPHOR_REGIONS } from '../lib/trace/package-phosphor';
+import { PHOSPHOR_REGIONS } from '../lib/trace/package-phosphor';
 import { gaussianRows, libraryPhosphor, type PhosphorSetting } from '../lib/trace/white-light';
 import { listPhosphors } from '../lib/phosphors';
 import { CliError } from './cli-error';
@@ -19,8 +19,10 @@ export const PHOSPHOR_OPTION_HELP = `Phosphor (white light; rays then carry thei
                                       (linear between rows, the ends held; no Mie is run)
   --phosphor-emission FILE.csv|gaussian:PEAK:FWHM   emission spectrum (needed with a coefficients file)
   --quantum-yield Q                   0 to 1 (default: the phosphor's typical)
-  --phosphor-region ${PHOSPHOR_REGIONS.join('|')}   where it is; traced today: ${TRACED_PHOSPHOR_REGIONS.join(', ')}
-  --phosphor-thickness T              layer thickness, mm (for the layer regions)`;
+  --phosphor-region ${PHOSPHOR_REGIONS.join('|')}   where it is (default encapsulant: dispersed in all of it);
+                                      conformal: a layer around the chip's top and sides; remote: the top of a
+                                      flat fill or cylinder, or a shell under a dome; floor: settled around the chip
+  --phosphor-thickness T              layer thickness, ${LIMITS.phosphorThicknessMm.min} to ${LIMITS.phosphorThicknessMm.max} mm (needed for the layer regions)`;
 
 export const PHOSPHOR_OPTIONS: OptionSpec = Object.fromEntries(
   ['phosphor', 'phosphor-wt', 'phosphor-diameter', 'phosphor-coefficients', 'phosphor-emission', 'quantum-yield', 'phosphor-region', 'phosphor-thickness'].map(
@@ -80,12 +82,14 @@ export function phosphorFromOptions(values: ParsedValues, defaultWeightPercent =
   const given = Object.keys(PHOSPHOR_OPTIONS).some((k) => values[k] !== undefined);
   if (!given) return null;
   const region = choiceOption(values, 'phosphor-region', PHOSPHOR_REGIONS, 'encapsulant');
-  if (!(TRACED_PHOSPHOR_REGIONS as readonly string[]).includes(region)) {
-    throw new CliError(`--phosphor-region: '${region}' is not traced yet; use ${TRACED_PHOSPHOR_REGIONS.join(', ')}`);
+  const Th = LIMITS.phosphorThicknessMm;
+  if (region === 'encapsulant' && values['phosphor-thickness'] !== undefined) {
+    throw new CliError('--phosphor-thickness applies to a layer region (conformal, remote, floor); the encapsulant region fills the whole encapsulant');
   }
-  if (values['phosphor-thickness'] !== undefined) {
-    throw new CliError('--phosphor-thickness applies to a layer region; the encapsulant region fills the whole encapsulant');
+  if (region !== 'encapsulant' && values['phosphor-thickness'] === undefined) {
+    throw new CliError(`--phosphor-region ${region} needs --phosphor-thickness T (${Th.min} to ${Th.max} mm)`);
   }
+  const placement = region === 'encapsulant' ? { region } : { region, thicknessMm: numberOption(values, 'phosphor-thickness', Th.min, Th.max) };
   const emission = emissionOption(values);
   const coefficientsPath = stringOption(values, 'phosphor-coefficients');
   const Q = LIMITS.quantumYield;
@@ -97,6 +101,7 @@ export function phosphorFromOptions(values: ParsedValues, defaultWeightPercent =
     });
     if (!emission) throw new CliError('--phosphor-coefficients needs --phosphor-emission FILE.csv or gaussian:PEAK:FWHM');
     return {
+      ...placement,
       kind: 'table',
       coefficients: rows as [number, number, number, number][],
       emission,
@@ -114,6 +119,7 @@ export function phosphorFromOptions(values: ParsedValues, defaultWeightPercent =
   const W = LIMITS.phosphorWeightPercent;
   const D = LIMITS.phosphorDiameterUm;
   return {
+    ...placement,
     kind: 'particles',
     phosphor,
     weightPercent: numberOption(values, 'phosphor-wt', W.min, W.max, defaultWeightPercent),

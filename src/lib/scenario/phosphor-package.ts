@@ -12,7 +12,10 @@ import type { Scenario } from './schema';
 export function phosphorSettingOf(scenario: Scenario): Extract<PhosphorSetting, { kind: 'particles' }> | null {
   const p = scenario.phosphor;
   if (!p) return null;
-  return { kind: 'particles', phosphor: libraryPhosphor(p.id, 'Phosphor'), weightPercent: p.weightPercent, diameterUm: p.diameterUm, quantumYield: p.quantumYield };
+  return {
+    kind: 'particles', phosphor: libraryPhosphor(p.id, 'Phosphor'), weightPercent: p.weightPercent, diameterUm: p.diameterUm, quantumYield: p.quantumYield,
+    region: p.region, ...(p.thicknessMm !== undefined ? { thicknessMm: p.thicknessMm } : {})
+  };
 }
 
 /** The traced package with the scenario's phosphor (or `setting` instead), or the clear package when there is none. */

@@ -212,7 +212,7 @@ export function compileScene(scene: SceneDescription): CompiledScene {
     } else {
       media[o + M_BIN] = NONE;
     }
-    media[o + M_BOUNDARY] = m.box ? BOUNDARY_BOX : BOUNDARY_LIST;
+    media[o + M_BOUNDARY] = m.box?.faces ? BOUNDARY_BOX : BOUNDARY_LIST;
   });
 
   // Surfaces
@@ -265,8 +265,8 @@ export function compileScene(scene: SceneDescription): CompiledScene {
       from === NONE ? NONE : media[from * MEDIUM_STRIDE + M_IS_CHIP] === 1 ? COUNTER_TIR_CHIP : to === outside ? COUNTER_TIR_OUTER : NONE;
     surfaces[o + S_TIR_FRONT] = tirFrom(front, behind);
     surfaces[o + S_TIR_BEHIND] = tirFrom(behind, front);
-    if (front !== NONE && !scene.media[front].box) lists[front].push(2 * i + SIDE_FRONT);
-    if (behind !== NONE && !scene.media[behind].box) lists[behind].push(2 * i + SIDE_BEHIND);
+    if (front !== NONE && !scene.media[front].box?.faces) lists[front].push(2 * i + SIDE_FRONT);
+    if (behind !== NONE && !scene.media[behind].box?.faces) lists[behind].push(2 * i + SIDE_BEHIND);
   });
 
   // Box media: their six faces, by the side the box lies on
@@ -277,7 +277,7 @@ export function compileScene(scene: SceneDescription): CompiledScene {
     media[o + M_BOX_B] = m.box.b;
     media[o + M_BOX_Z0] = m.box.z0;
     media[o + M_BOX_Z1] = m.box.z1;
-    m.box.faces.forEach((faceName, f) => {
+    m.box.faces?.forEach((faceName, f) => {
       const s = surfaceIndex.get(faceName);
       if (s === undefined) throw new Error(`scene: box medium '${m.name}' names unknown face '${faceName}'`);
       const front = surfaces[s * SURFACE_STRIDE + S_FRONT];
