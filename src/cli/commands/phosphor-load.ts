@@ -1,4 +1,4 @@
-import { LIMITS, toTracePackage } from '../../lib/scenario';
+import { LIMITS, toTracePackage, withDispersion } from '../../lib/scenario';
 import { chipSpectrumRows, loadForCct, LOAD_SEARCH, traceWhite, withPhosphor } from '../../lib/trace/white-light';
 import { traceSync } from '../../lib/trace/trace';
 import { CliError } from '../cli-error';
@@ -35,7 +35,8 @@ export async function run(argv: string[]): Promise<void> {
   if (!setting || setting.kind !== 'particles') throw new CliError('--phosphor ID is needed');
   const { rays, seed } = scenario.trace;
   const started = performance.now();
-  const clearPkg = toTracePackage(scenario, resolved);
+  // with its media's dispersion: once it holds the phosphor each ray sees the indices at its wavelength
+  const clearPkg = withDispersion(toTracePackage(scenario, resolved), scenario, resolved);
   const chip = chipSpectrumRows(scenario.emission);
   const evaluate = async (weightPercent: number) => traceWhite(withPhosphor(clearPkg, { ...setting, weightPercent }, chip), rays, seed).summary;
   const clear = traceSync(clearPkg, { rays, seed });
@@ -54,7 +55,7 @@ export async function run(argv: string[]): Promise<void> {
   const notes = [
     `${search.trials.length} trials of ${rays} rays each, seed ${seed} (common random numbers)`,
     ...(search.converged ? [] : [`not converged to ±${LOAD_SEARCH.toleranceK} K within ${LOAD_SEARCH.maxTrials} trials: the best trial is shown`]),
-    'refractive indices at the design wavelength for every ray (no per-ray dispersion yet)',
+    'each ray sees the library indices at its own wavelength (typed indices, metal mirrors and the Mie host index stay at the design wavelength)',
     'caution: white LEDs emit intense blue light; do not stare into them; mind the phosphor heat in a real package'
   ];
   const result = {

@@ -141,7 +141,7 @@ function whiteJson(w: PhosphorSummary, ledger: Record<string, number>) {
 }
 
 function whiteNotes(w: PhosphorSummary): string[] {
-  const notes = ['refractive indices are taken at the design wavelength for every ray (no per-ray dispersion yet)'];
+  const notes = ['each ray sees the library indices at its own wavelength (typed indices, metal mirrors and the Mie host index stay at the design wavelength)'];
   if (w.color) notes.push(...w.color.warnings);
   notes.push('caution: a white LED still emits intense blue; do not stare into it, and mind the phosphor heat in a real package');
   return notes;

@@ -96,7 +96,11 @@ export interface CompiledScene {
   /** Prepared profiles of the revolution surfaces, by the index packed in their records. */
   profiles: RevolutionProfile[];
   track: boolean;
-  /** Spectral rays and phosphor tables when some medium holds a phosphor; null otherwise (no wavelength is drawn). */
+  /**
+   * Spectral rays and phosphor tables when some medium holds a phosphor; null otherwise (no wavelength
+   * is drawn). In a spectral scene the ray loop rewrites the index slot of each dispersive medium in
+   * `media` whenever the ray's wavelength changes (medium-events.ts): after a run it holds the last ray's.
+   */
   spectral: SpectralTables | null;
   /** Ledger bin of each phosphor's heat (absorbed, not re-emitted), by phosphor index. */
   phosphorBins: number[];
@@ -344,7 +348,14 @@ export function compileScene(scene: SceneDescription): CompiledScene {
     emitterRays,
     emitterSurface: em.surface === undefined ? NONE : surfaceOf(em.surface),
     profiles,
-    spectral: phosphors.length && scene.chipSpectrum ? buildSpectralTables(scene.chipSpectrum, phosphors) : null,
+    spectral:
+      phosphors.length && scene.chipSpectrum
+        ? buildSpectralTables(
+            scene.chipSpectrum,
+            phosphors,
+            scene.media.flatMap((m, i) => (m.indexRows ? [{ medium: i, rows: m.indexRows }] : []))
+          )
+        : null,
     phosphorBins,
     track: scene.polarization === 'track',
     absorbing,
