@@ -133,7 +133,14 @@ export function intersectSpheroidCap(s: Float64Array, p: number, side: number, r
   const zc = s[p + 2];
   const qz = (ray[2] - zc) * scale;
   const vz = ray[5] * scale;
-  const t = quadricRoot(dx * dx + dy * dy + vz * vz, px * dx + py * dy + qz * vz, px * px + py * py + qz * qz - R * R, side);
+  const A = dx * dx + dy * dy + vz * vz;
+  const B = px * dx + py * dy + qz * vz;
+  const C = px * px + py * py + qz * qz - R * R;
+  // From behind, a point clearly outside the spheroid (the medium behind a cap can reach below its base
+  // plane, as a cup's fill under a remote phosphor shell does) crosses the cap only after entering the
+  // spheroid: not when its line misses it or it moves away (quadricRoot would read that as roundoff)
+  if (side !== SIDE_FRONT && C > 1e-9 * R * R && (B >= 0 || B * B < A * C)) return false;
+  const t = quadricRoot(A, B, C, side);
   if (!(t >= 0)) return false;
   if (!(ray[2] + t * ray[5] >= zc)) return false;
   hit[0] = t;
