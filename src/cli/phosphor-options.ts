@@ -7,6 +7,7 @@ import { readFileSync, statSync } from 'node:fs';
 import { LIMITS } from '../lib/scenario';
 import { PHOSPHOR_REGIONS } from '../lib/trace/package-phosphor';
 import { gaussianRows, libraryPhosphor, type PhosphorSetting } from '../lib/trace/white-light';
+import { validateTracePackage, type TracePackage } from '../lib/trace/package-spec';
 import { listPhosphors } from '../lib/phosphors';
 import { CliError } from './cli-error';
 import { choiceOption, numberOption, stringOption, truncate, type OptionSpec, type ParsedValues } from './options';
@@ -42,17 +43,22 @@ function readRows(option: string, path: string, columns: string[]): number[][] {
     throw new CliError(`--${option}: cannot read '${truncate(path, 80)}'`);
   }
   const rows: number[][] = [];
+  let firstLine = true;
   text.split(/\r?\n/).forEach((line, i) => {
     const t = line.trim();
     if (t === '' || t.startsWith('#')) return;
     const cells = t.split(/[,;\t]/).map((c) => c.trim());
-    if (rows.length === 0 && cells.some((c) => Number.isNaN(Number(c)))) return; // header
-    const nums = cells.map(Number);
+    // only the first line may be a header (column names)
+    const header = firstLine && cells.some((c) => Number.isNaN(Number(c)));
+    firstLine = false;
+    if (header) return;
+    const nums = cells.map((c) => (c === '' ? NaN : Number(c)));
     if (nums.length !== columns.length || nums.some((v) => !Number.isFinite(v))) {
       throw new CliError(`--${option}: line ${i + 1} must hold ${columns.length} numbers (${columns.join(', ')})`);
     }
     if (rows.length && !(nums[0] > rows[rows.length - 1][0])) throw new CliError(`--${option}: line ${i + 1}: wavelength_nm must be above the previous row's (rows sorted, no repeats)`);
-    if (nums.slice(1).some((v, k) => v < 0 && columns[k + 1] !== 'g')) throw new CliError(`--${option}: line ${i + 1}: values must be ≥ 0`);
+    const negative = nums.findIndex((v, k) => k > 0 && v < 0 && columns[k] !== 'g');
+    if (negative > 0) throw new CliError(`--${option}: line ${i + 1}: ${columns[negative]} must be ≥ 0 (got ${nums[negative]})`);
     rows.push(nums);
   });
   if (!rows.length) throw new CliError(`--${option}: '${truncate(path, 80)}' holds no rows of ${columns.join(', ')}`);
@@ -75,6 +81,33 @@ function emissionOption(values: ParsedValues): [number, number][] | undefined {
   const rows = readRows('phosphor-emission', raw, ['wavelength_nm', 'value']);
   if (!rows.some((r) => r[1] > 0)) throw new CliError('--phosphor-emission: some value must be above 0');
   return rows as [number, number][];
+}
+
+/** The particle diameter, µm, inside the range the Mie evaluation supports (said so when outside). */
+function diameterOption(values: ParsedValues, fallback: number): number {
+  const D = LIMITS.phosphorDiameterUm;
+  try {
+    return numberOption(values, 'phosphor-diameter', D.min, D.max, fallback);
+  } catch (error) {
+    if (error instanceof CliError) throw new CliError(`${error.message}: particle diameters in µm, the range the Mie evaluation supports`);
+    throw error;
+  }
+}
+
+/**
+ * Checks that the phosphor's region fits the package (the tracer's edge check), naming the command
+ * line's option rather than the package field: --phosphor-thickness or --phosphor-region.
+ */
+export function checkPhosphorFit(pkg: TracePackage): void {
+  if (!pkg.phosphor) return;
+  try {
+    validateTracePackage(pkg);
+  } catch (error) {
+    if (!(error instanceof RangeError)) throw error;
+    const m = /^phosphor\.(thicknessMm|region): (.*)$/.exec(error.message);
+    if (m) throw new CliError(`--phosphor-${m[1] === 'region' ? 'region' : 'thickness'}: ${m[2]}`);
+    throw error;
+  }
 }
 
 /** The phosphor setting the options name, or null when no phosphor option is given. */
@@ -117,13 +150,12 @@ export function phosphorFromOptions(values: ParsedValues, defaultWeightPercent =
     throw new CliError(`--phosphor: unknown phosphor '${truncate(id)}' (one of ${listPhosphors().map((p) => p.id).join(', ')})`);
   }
   const W = LIMITS.phosphorWeightPercent;
-  const D = LIMITS.phosphorDiameterUm;
   return {
     ...placement,
     kind: 'particles',
     phosphor,
     weightPercent: numberOption(values, 'phosphor-wt', W.min, W.max, defaultWeightPercent),
-    diameterUm: numberOption(values, 'phosphor-diameter', D.min, D.max, phosphor.typicalD50Um),
+    diameterUm: diameterOption(values, phosphor.typicalD50Um),
     quantumYield: numberOption(values, 'quantum-yield', Q.min, Q.max, phosphor.quantumYield),
     ...(emission ? { emission } : {})
   };

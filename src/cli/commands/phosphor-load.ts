@@ -4,7 +4,7 @@ import { traceSync } from '../../lib/trace/trace';
 import { CliError } from '../cli-error';
 import { numberOption, parseOptions, truncate, type OptionSpec } from '../options';
 import { emit, percent, type Row } from '../output';
-import { PHOSPHOR_OPTION_HELP, PHOSPHOR_OPTIONS, phosphorFromOptions } from '../phosphor-options';
+import { checkPhosphorFit, PHOSPHOR_OPTION_HELP, PHOSPHOR_OPTIONS, phosphorFromOptions } from '../phosphor-options';
 import { SCENARIO_OPTION_HELP, SCENARIO_OPTIONS, scenarioFromOptions } from '../scenario-options';
 
 export const summary = 'The phosphor load that gives a target CCT in a package, and what that load costs';
@@ -39,6 +39,7 @@ export async function run(argv: string[]): Promise<void> {
   const clearPkg = withDispersion(toTracePackage(scenario, resolved), scenario, resolved);
   const chip = chipSpectrumRows(scenario.emission);
   const evaluate = async (weightPercent: number) => traceWhite(withPhosphor(clearPkg, { ...setting, weightPercent }, chip), rays, seed).summary;
+  checkPhosphorFit(withPhosphor(clearPkg, setting, chip));
   const clear = traceSync(clearPkg, { rays, seed });
   const clearEfficiency = clear.escaped / clear.launched;
   let search;

@@ -10,7 +10,7 @@ import { CliError } from '../cli-error';
 import { integerOption, numberOption, parseOptions, stringOption, truncate, type OptionSpec } from '../options';
 import { emit, percent, type Row } from '../output';
 import { SCENARIO_OPTION_HELP, SCENARIO_OPTIONS, scenarioFromOptions } from '../scenario-options';
-import { PHOSPHOR_OPTION_HELP, PHOSPHOR_OPTIONS, phosphorFromOptions } from '../phosphor-options';
+import { checkPhosphorFit, PHOSPHOR_OPTION_HELP, PHOSPHOR_OPTIONS, phosphorFromOptions } from '../phosphor-options';
 import { phosphorSummary, type PhosphorSummary } from '../../lib/trace/phosphor-summary';
 
 export const summary = 'Monte Carlo ray trace of an LED package: extraction, loss ledger, far field; IES LM-63 export';
@@ -52,6 +52,7 @@ export async function run(argv: string[]): Promise<void> {
   // Phosphor options win over the scenario's phosphor block
   const setting = phosphorFromOptions(values) ?? phosphorSettingOf(scenario);
   const pkg = toWhitePackage(scenario, resolved, setting);
+  checkPhosphorFit(pkg);
   const { rays, seed } = scenario.trace;
   const name = scenario.name;
   const threads = integerOption(values, 'threads', 1, MAX_THREADS, defaultThreads());
