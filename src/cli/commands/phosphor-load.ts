@@ -60,7 +60,8 @@ export async function run(argv: string[]): Promise<void> {
     'caution: white LEDs emit intense blue light; do not stare into them; mind the phosphor heat in a real package'
   ];
   const result = {
-    targetCctK: target, phosphor: setting.phosphor.id, diameterUm: setting.diameterUm, weightPercent: search.weightPercent,
+    targetCctK: target, phosphor: setting.phosphor.id, region: setting.region ?? 'encapsulant',
+    ...(setting.thicknessMm !== undefined ? { thicknessMm: setting.thicknessMm } : {}), diameterUm: setting.diameterUm, weightPercent: search.weightPercent,
     color: { x: c.x, y: c.y, cctK: c.cctK, duv: c.duv, ra: c.ra, r9: c.r9, lerLmPerW: c.lerLmPerW, sigma: c.sigma },
     photonEfficiency: w.photonEfficiency, energyEfficiency: w.energyEfficiency, clearEfficiency,
     photonCost, energyCost: 1 - w.energyEfficiency / clearEfficiency, phosphorHeat: w.phosphorHeat,
@@ -68,7 +69,7 @@ export async function run(argv: string[]): Promise<void> {
     trials: search.trials, converged: search.converged, rays, seed, seconds, notes
   };
   const rows: Row[] = [
-    ['phosphor', `${setting.phosphor.id}, ${setting.diameterUm} µm`],
+    ['phosphor', `${setting.phosphor.id}, ${setting.diameterUm} µm, ${setting.region ?? 'encapsulant'}${setting.thicknessMm !== undefined ? ` layer ${setting.thicknessMm} mm` : ''}`],
     ['load found', search.weightPercent.toFixed(2), 'wt%'],
     ['CCT', `${c.cctK?.toFixed(0) ?? '—'} ± ${c.sigma.cctK?.toFixed(0) ?? '—'}`, 'K'], ['Duv', c.duv?.toFixed(4) ?? '—'],
     ['Ra, R9', `${c.ra?.toFixed(1) ?? '—'}, ${c.r9?.toFixed(1) ?? '—'}`],

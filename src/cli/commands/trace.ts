@@ -83,7 +83,7 @@ export async function run(argv: string[]): Promise<void> {
     if (lmPerChipWatt !== null && !lumensGiven) lumens = lmPerChipWatt;
     const bins = s.farField.bins.map((b) => b.relativeIntensity);
     // The same file the dome page writes: zone-averaged near the poles, the smoothing stated in it
-    const ies = traceIes({ binIntensities: white && tally.spectral ? luminousBinIntensities(bins, tally.spectral) : bins, lumens, rays, seed,
+    const ies = traceIes({ binIntensities: white ? luminousBinIntensities(bins, white.luminousBandWeights) : bins, lumens, rays, seed,
       issueDate: new Date().toISOString().slice(0, 10), name, opening: packageOpening(pkg.encapsulant, pkg.chip, pkg.body),
       ...(lmPerChipWatt !== null ? { fluxNote: whiteFluxNote(lmPerChipWatt, lumens, lumensGiven) } : {}) });
     if (iesPath) {
@@ -137,6 +137,7 @@ function whiteJson(w: PhosphorSummary, ledger: Record<string, number>) {
     escapedBlue: w.escapedBlue,
     escapedConverted: w.escapedConverted,
     energyEfficiency: w.energyEfficiency,
+    lumensPerWattOfChipLight: lumensPerChipWatt(w),
     stokes: { meanChipNm: w.meanChipNm, meanEscapedNm: w.meanEscapedNm },
     color: c && {
       x: c.x, y: c.y, uPrime: c.uPrime, vPrime: c.vPrime, cctK: c.cctK, duv: c.duv, ra: c.ra, r9: c.r9, lerLmPerW: c.lerLmPerW,

@@ -9,13 +9,12 @@
  * watt of chip light and what the file is scaled to.
  * Far field: the trace's 1° bins count photons; a band of the colour over angle whose light is yellower
  * carries more lumens per photon. Each bin is weighted by its 10° band's lumens per photon over the
- * whole's, Σ V(λ)/λ per photon (a photon's energy ∝ 1/λ): the weights keep the flux, so the bins stay
+ * whole's, V(λ)/λ per photon (trace/luminous-bands.ts): the weights keep the flux, so the bins stay
  * relative to a Lambertian of the same (luminous) flux.
  * Sources: CIE 015:2018 §7.1 and ISO 23539 (V(λ), Km); BIPM SI brochure, 9th ed. (Km = 683 lm/W).
  */
-import { photopicV } from '../photometry/photopic';
 import type { PhosphorSummary } from '../trace/phosphor-summary';
-import { ANGLE_BANDS, ANGLE_BAND_DEG, SPECTRUM_BINS, SPECTRUM_FROM_NM, SPECTRUM_STEP_NM, type SpectralTally } from '../trace/spectral-tally';
+import { ANGLE_BAND_DEG } from '../trace/spectral-tally';
 
 /** Lumens per watt of chip light: LER × energy efficiency; null when nothing escaped. */
 export function lumensPerChipWatt(summary: PhosphorSummary): number | null {
@@ -23,29 +22,15 @@ export function lumensPerChipWatt(summary: PhosphorSummary): number | null {
   return c && c.lerLmPerW > 0 && summary.energyEfficiency > 0 ? c.lerLmPerW * summary.energyEfficiency : null;
 }
 
-/** The 1° bins' relative intensities weighted by their band's lumens per photon (see the file comment). */
-export function luminousBinIntensities(binIntensities: ArrayLike<number>, spectral: SpectralTally): number[] {
-  const batches = spectral.escaped.length / (ANGLE_BANDS * SPECTRUM_BINS);
-  const photons = new Float64Array(ANGLE_BANDS);
-  const lumens = new Float64Array(ANGLE_BANDS);
-  for (let i = 0; i < SPECTRUM_BINS; i++) {
-    const nm = SPECTRUM_FROM_NM + (i + 0.5) * SPECTRUM_STEP_NM;
-    const perPhoton = photopicV(nm) / nm;
-    for (let b = 0; b < batches; b++) {
-      for (let a = 0; a < ANGLE_BANDS; a++) {
-        const n = spectral.escaped[(b * ANGLE_BANDS + a) * SPECTRUM_BINS + i];
-        photons[a] += n;
-        lumens[a] += n * perPhoton;
-      }
-    }
-  }
-  const totalPhotons = photons.reduce((x, y) => x + y, 0);
-  const totalLumens = lumens.reduce((x, y) => x + y, 0);
+/**
+ * The 1° bins' relative intensities weighted by their 10° band's lumens per photon over the whole's
+ * (PhosphorSummary.luminousBandWeights; see trace/luminous-bands.ts): the luminous far field, flux kept.
+ */
+export function luminousBinIntensities(binIntensities: ArrayLike<number>, bandWeights: ArrayLike<number>): number[] {
   const out: number[] = [];
   for (let j = 0; j < binIntensities.length; j++) {
-    const a = Math.min(ANGLE_BANDS - 1, Math.floor(j / ANGLE_BAND_DEG));
-    const weight = photons[a] > 0 && totalLumens > 0 ? lumens[a] / photons[a] / (totalLumens / totalPhotons) : 1;
-    out.push(binIntensities[j] * weight);
+    const a = Math.min(bandWeights.length - 1, Math.floor(j / ANGLE_BAND_DEG));
+    out.push(binIntensities[j] * bandWeights[a]);
   }
   return out;
 }

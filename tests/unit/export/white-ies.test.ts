@@ -5,6 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { parseIes } from '../../../src/lib/export/ies';
 import { symmetricFlux } from '../../../src/lib/export/symmetric-flux';
 import { luminousBinIntensities } from '../../../src/lib/export/white-ies';
+import { luminousBandWeights } from '../../../src/lib/trace/luminous-bands';
 import { photopicV } from '../../../src/lib/photometry/photopic';
 import { createSpectralTally, SPECTRUM_BINS, SPECTRUM_FROM_NM, SPECTRUM_STEP_NM, ANGLE_BANDS } from '../../../src/lib/trace/spectral-tally';
 import { runCli, runJson } from '../cli/run-cli';
@@ -25,7 +26,7 @@ describe('luminous far field of a white package', () => {
     s.escaped[0 * SPECTRUM_BINS + binOf(555)] = 100;
     s.escaped[1 * SPECTRUM_BINS + binOf(450)] = 100;
     const bins = new Array(180).fill(0).map((_, j) => (j < 20 ? 1 : 0));
-    const out = luminousBinIntensities(bins, s);
+    const out = luminousBinIntensities(bins, luminousBandWeights(s));
     const nm0 = SPECTRUM_FROM_NM + (binOf(555) + 0.5) * SPECTRUM_STEP_NM;
     const nm1 = SPECTRUM_FROM_NM + (binOf(450) + 0.5) * SPECTRUM_STEP_NM;
     // lumens per photon ∝ V(λ)/λ at the bins' centres (555 and 451 nm): V(555) = 1.000, V(451) ≈ 0.0399 (CIE 1924 table)
