@@ -58,3 +58,15 @@ describe('phosphor regions in the scenario', () => {
     expect(r.ok).toBe(true);
   });
 });
+
+describe('a phosphor layer in a link', () => {
+  it('the region and thickness survive the URL encoding', async () => {
+    const { encodeScenarioParam, decodeScenarioParam } = await import('../../../src/lib/scenario/url');
+    const r = readScenario({ ...demoScenario(), phosphor: { id: 'garnet-yellow', region: 'remote', thicknessMm: 0.25, weightPercent: 20, diameterUm: 12, quantumYield: 0.9 } });
+    expect(r.ok).toBe(true);
+    if (!r.ok) return;
+    const back = decodeScenarioParam(encodeScenarioParam(r.scenario));
+    expect(back.fromLink).toBe(true);
+    expect(back.scenario.phosphor).toMatchObject({ region: 'remote', thicknessMm: 0.25 });
+  });
+});
