@@ -5,8 +5,9 @@
  */
 import { readFileSync, statSync } from 'node:fs';
 import { LIMITS } from '../lib/scenario';
-import { PHOSPHOR_REGIONS, TRACED_PHOSPHOR_REGIONS } from '../lib/trace/package-phosphor';
+import { PHOSPHOR_REGIONS } from '../lib/trace/package-phosphor';
 import { gaussianRows, libraryPhosphor, type PhosphorSetting } from '../lib/trace/white-light';
+import { validateTracePackage, type TracePackage } from '../lib/trace/package-spec';
 import { listPhosphors } from '../lib/phosphors';
 import { CliError } from './cli-error';
 import { choiceOption, numberOption, stringOption, truncate, type OptionSpec, type ParsedValues } from './options';
@@ -19,8 +20,10 @@ export const PHOSPHOR_OPTION_HELP = `Phosphor (white light; rays then carry thei
                                       (linear between rows, the ends held; no Mie is run)
   --phosphor-emission FILE.csv|gaussian:PEAK:FWHM   emission spectrum (needed with a coefficients file)
   --quantum-yield Q                   0 to 1 (default: the phosphor's typical)
-  --phosphor-region ${PHOSPHOR_REGIONS.join('|')}   where it is; traced today: ${TRACED_PHOSPHOR_REGIONS.join(', ')}
-  --phosphor-thickness T              layer thickness, mm (for the layer regions)`;
+  --phosphor-region ${PHOSPHOR_REGIONS.join('|')}   where it is (default encapsulant: dispersed in all of it);
+                                      conformal: a layer around the chip's top and sides; remote: the top of a
+                                      flat fill or cylinder, or a shell under a dome; floor: settled around the chip
+  --phosphor-thickness T              layer thickness, ${LIMITS.phosphorThicknessMm.min} to ${LIMITS.phosphorThicknessMm.max} mm (needed for the layer regions)`;
 
 export const PHOSPHOR_OPTIONS: OptionSpec = Object.fromEntries(
   ['phosphor', 'phosphor-wt', 'phosphor-diameter', 'phosphor-coefficients', 'phosphor-emission', 'quantum-yield', 'phosphor-region', 'phosphor-thickness'].map(
@@ -40,17 +43,22 @@ function readRows(option: string, path: string, columns: string[]): number[][] {
     throw new CliError(`--${option}: cannot read '${truncate(path, 80)}'`);
   }
   const rows: number[][] = [];
+  let firstLine = true;
   text.split(/\r?\n/).forEach((line, i) => {
     const t = line.trim();
     if (t === '' || t.startsWith('#')) return;
     const cells = t.split(/[,;\t]/).map((c) => c.trim());
-    if (rows.length === 0 && cells.some((c) => Number.isNaN(Number(c)))) return; // header
-    const nums = cells.map(Number);
+    // only the first line may be a header (column names)
+    const header = firstLine && cells.some((c) => Number.isNaN(Number(c)));
+    firstLine = false;
+    if (header) return;
+    const nums = cells.map((c) => (c === '' ? NaN : Number(c)));
     if (nums.length !== columns.length || nums.some((v) => !Number.isFinite(v))) {
       throw new CliError(`--${option}: line ${i + 1} must hold ${columns.length} numbers (${columns.join(', ')})`);
     }
     if (rows.length && !(nums[0] > rows[rows.length - 1][0])) throw new CliError(`--${option}: line ${i + 1}: wavelength_nm must be above the previous row's (rows sorted, no repeats)`);
-    if (nums.slice(1).some((v, k) => v < 0 && columns[k + 1] !== 'g')) throw new CliError(`--${option}: line ${i + 1}: values must be ≥ 0`);
+    const negative = nums.findIndex((v, k) => k > 0 && v < 0 && columns[k] !== 'g');
+    if (negative > 0) throw new CliError(`--${option}: line ${i + 1}: ${columns[negative]} must be ≥ 0 (got ${nums[negative]})`);
     rows.push(nums);
   });
   if (!rows.length) throw new CliError(`--${option}: '${truncate(path, 80)}' holds no rows of ${columns.join(', ')}`);
@@ -75,17 +83,46 @@ function emissionOption(values: ParsedValues): [number, number][] | undefined {
   return rows as [number, number][];
 }
 
+/** The particle diameter, µm, inside the range the Mie evaluation supports (said so when outside). */
+function diameterOption(values: ParsedValues, fallback: number): number {
+  const D = LIMITS.phosphorDiameterUm;
+  try {
+    return numberOption(values, 'phosphor-diameter', D.min, D.max, fallback);
+  } catch (error) {
+    if (error instanceof CliError) throw new CliError(`${error.message}: particle diameters in µm, the range the Mie evaluation supports`);
+    throw error;
+  }
+}
+
+/**
+ * Checks that the phosphor's region fits the package (the tracer's edge check), naming the command
+ * line's option rather than the package field: --phosphor-thickness or --phosphor-region.
+ */
+export function checkPhosphorFit(pkg: TracePackage): void {
+  if (!pkg.phosphor) return;
+  try {
+    validateTracePackage(pkg);
+  } catch (error) {
+    if (!(error instanceof RangeError)) throw error;
+    const m = /^phosphor\.(thicknessMm|region): (.*)$/.exec(error.message);
+    if (m) throw new CliError(`--phosphor-${m[1] === 'region' ? 'region' : 'thickness'}: ${m[2]}`);
+    throw error;
+  }
+}
+
 /** The phosphor setting the options name, or null when no phosphor option is given. */
 export function phosphorFromOptions(values: ParsedValues, defaultWeightPercent = 8): PhosphorSetting | null {
   const given = Object.keys(PHOSPHOR_OPTIONS).some((k) => values[k] !== undefined);
   if (!given) return null;
   const region = choiceOption(values, 'phosphor-region', PHOSPHOR_REGIONS, 'encapsulant');
-  if (!(TRACED_PHOSPHOR_REGIONS as readonly string[]).includes(region)) {
-    throw new CliError(`--phosphor-region: '${region}' is not traced yet; use ${TRACED_PHOSPHOR_REGIONS.join(', ')}`);
+  const Th = LIMITS.phosphorThicknessMm;
+  if (region === 'encapsulant' && values['phosphor-thickness'] !== undefined) {
+    throw new CliError('--phosphor-thickness applies to a layer region (conformal, remote, floor); the encapsulant region fills the whole encapsulant');
   }
-  if (values['phosphor-thickness'] !== undefined) {
-    throw new CliError('--phosphor-thickness applies to a layer region; the encapsulant region fills the whole encapsulant');
+  if (region !== 'encapsulant' && values['phosphor-thickness'] === undefined) {
+    throw new CliError(`--phosphor-region ${region} needs --phosphor-thickness T (${Th.min} to ${Th.max} mm)`);
   }
+  const placement = region === 'encapsulant' ? { region } : { region, thicknessMm: numberOption(values, 'phosphor-thickness', Th.min, Th.max) };
   const emission = emissionOption(values);
   const coefficientsPath = stringOption(values, 'phosphor-coefficients');
   const Q = LIMITS.quantumYield;
@@ -97,6 +134,7 @@ export function phosphorFromOptions(values: ParsedValues, defaultWeightPercent =
     });
     if (!emission) throw new CliError('--phosphor-coefficients needs --phosphor-emission FILE.csv or gaussian:PEAK:FWHM');
     return {
+      ...placement,
       kind: 'table',
       coefficients: rows as [number, number, number, number][],
       emission,
@@ -112,12 +150,12 @@ export function phosphorFromOptions(values: ParsedValues, defaultWeightPercent =
     throw new CliError(`--phosphor: unknown phosphor '${truncate(id)}' (one of ${listPhosphors().map((p) => p.id).join(', ')})`);
   }
   const W = LIMITS.phosphorWeightPercent;
-  const D = LIMITS.phosphorDiameterUm;
   return {
+    ...placement,
     kind: 'particles',
     phosphor,
     weightPercent: numberOption(values, 'phosphor-wt', W.min, W.max, defaultWeightPercent),
-    diameterUm: numberOption(values, 'phosphor-diameter', D.min, D.max, phosphor.typicalD50Um),
+    diameterUm: diameterOption(values, phosphor.typicalD50Um),
     quantumYield: numberOption(values, 'quantum-yield', Q.min, Q.max, phosphor.quantumYield),
     ...(emission ? { emission } : {})
   };

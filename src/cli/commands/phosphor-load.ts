@@ -1,10 +1,10 @@
-import { LIMITS, toTracePackage } from '../../lib/scenario';
+import { LIMITS, toTracePackage, withDispersion } from '../../lib/scenario';
 import { chipSpectrumRows, loadForCct, LOAD_SEARCH, traceWhite, withPhosphor } from '../../lib/trace/white-light';
 import { traceSync } from '../../lib/trace/trace';
 import { CliError } from '../cli-error';
 import { numberOption, parseOptions, truncate, type OptionSpec } from '../options';
 import { emit, percent, type Row } from '../output';
-import { PHOSPHOR_OPTION_HELP, PHOSPHOR_OPTIONS, phosphorFromOptions } from '../phosphor-options';
+import { checkPhosphorFit, PHOSPHOR_OPTION_HELP, PHOSPHOR_OPTIONS, phosphorFromOptions } from '../phosphor-options';
 import { SCENARIO_OPTION_HELP, SCENARIO_OPTIONS, scenarioFromOptions } from '../scenario-options';
 
 export const summary = 'The phosphor load that gives a target CCT in a package, and what that load costs';
@@ -35,9 +35,11 @@ export async function run(argv: string[]): Promise<void> {
   if (!setting || setting.kind !== 'particles') throw new CliError('--phosphor ID is needed');
   const { rays, seed } = scenario.trace;
   const started = performance.now();
-  const clearPkg = toTracePackage(scenario, resolved);
+  // with its media's dispersion: once it holds the phosphor each ray sees the indices at its wavelength
+  const clearPkg = withDispersion(toTracePackage(scenario, resolved), scenario, resolved);
   const chip = chipSpectrumRows(scenario.emission);
   const evaluate = async (weightPercent: number) => traceWhite(withPhosphor(clearPkg, { ...setting, weightPercent }, chip), rays, seed).summary;
+  checkPhosphorFit(withPhosphor(clearPkg, setting, chip));
   const clear = traceSync(clearPkg, { rays, seed });
   const clearEfficiency = clear.escaped / clear.launched;
   let search;
@@ -54,11 +56,12 @@ export async function run(argv: string[]): Promise<void> {
   const notes = [
     `${search.trials.length} trials of ${rays} rays each, seed ${seed} (common random numbers)`,
     ...(search.converged ? [] : [`not converged to ±${LOAD_SEARCH.toleranceK} K within ${LOAD_SEARCH.maxTrials} trials: the best trial is shown`]),
-    'refractive indices at the design wavelength for every ray (no per-ray dispersion yet)',
+    'each ray sees the library indices at its own wavelength (typed indices, metal mirrors and the Mie host index stay at the design wavelength)',
     'caution: white LEDs emit intense blue light; do not stare into them; mind the phosphor heat in a real package'
   ];
   const result = {
-    targetCctK: target, phosphor: setting.phosphor.id, diameterUm: setting.diameterUm, weightPercent: search.weightPercent,
+    targetCctK: target, phosphor: setting.phosphor.id, region: setting.region ?? 'encapsulant',
+    ...(setting.thicknessMm !== undefined ? { thicknessMm: setting.thicknessMm } : {}), diameterUm: setting.diameterUm, weightPercent: search.weightPercent,
     color: { x: c.x, y: c.y, cctK: c.cctK, duv: c.duv, ra: c.ra, r9: c.r9, lerLmPerW: c.lerLmPerW, sigma: c.sigma },
     photonEfficiency: w.photonEfficiency, energyEfficiency: w.energyEfficiency, clearEfficiency,
     photonCost, energyCost: 1 - w.energyEfficiency / clearEfficiency, phosphorHeat: w.phosphorHeat,
@@ -66,7 +69,7 @@ export async function run(argv: string[]): Promise<void> {
     trials: search.trials, converged: search.converged, rays, seed, seconds, notes
   };
   const rows: Row[] = [
-    ['phosphor', `${setting.phosphor.id}, ${setting.diameterUm} µm`],
+    ['phosphor', `${setting.phosphor.id}, ${setting.diameterUm} µm, ${setting.region ?? 'encapsulant'}${setting.thicknessMm !== undefined ? ` layer ${setting.thicknessMm} mm` : ''}`],
     ['load found', search.weightPercent.toFixed(2), 'wt%'],
     ['CCT', `${c.cctK?.toFixed(0) ?? '—'} ± ${c.sigma.cctK?.toFixed(0) ?? '—'}`, 'K'], ['Duv', c.duv?.toFixed(4) ?? '—'],
     ['Ra, R9', `${c.ra?.toFixed(1) ?? '—'}, ${c.r9?.toFixed(1) ?? '—'}`],

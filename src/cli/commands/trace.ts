@@ -5,12 +5,12 @@ import { partShares } from '../../lib/trace/part-shares';
 import { traceSync } from '../../lib/trace/trace';
 import { defaultThreads, traceParallel, MAX_THREADS } from '../../lib/trace/node/node-pool';
 import { LIMITS, phosphorSettingOf, toWhitePackage } from '../../lib/scenario';
-import { farFieldCsv, packageOpening, traceIes } from '../../lib/export';
+import { farFieldCsv, lumensPerChipWatt, luminousBinIntensities, packageOpening, traceIes, whiteFluxNote } from '../../lib/export';
 import { CliError } from '../cli-error';
 import { integerOption, numberOption, parseOptions, stringOption, truncate, type OptionSpec } from '../options';
 import { emit, percent, type Row } from '../output';
 import { SCENARIO_OPTION_HELP, SCENARIO_OPTIONS, scenarioFromOptions } from '../scenario-options';
-import { PHOSPHOR_OPTION_HELP, PHOSPHOR_OPTIONS, phosphorFromOptions } from '../phosphor-options';
+import { checkPhosphorFit, PHOSPHOR_OPTION_HELP, PHOSPHOR_OPTIONS, phosphorFromOptions } from '../phosphor-options';
 import { phosphorSummary, type PhosphorSummary } from '../../lib/trace/phosphor-summary';
 
 export const summary = 'Monte Carlo ray trace of an LED package: extraction, loss ledger, far field; IES LM-63 export';
@@ -24,7 +24,9 @@ Run
   --threads T                         1 to ${MAX_THREADS} (default: all cores; any count gives the same ledger)
   --max-events E                      events before a ray counts as lost, ${LIMITS.maxEvents.min} to ${LIMITS.maxEvents.max} (default 1000; 10000 with a phosphor)
 Output
-  --ies FILE --lumens L               write the far field as an IES LM-63-2019 file scaled to L lm
+  --ies FILE --lumens L               write the far field as an IES LM-63-2019 file scaled to L lm; with a
+                                      phosphor --lumens may be left out: the file then carries the traced
+                                      luminous flux per 1 W of chip light (683 lm/W x integral V(lambda) Phi(lambda))
   --csv FILE                          write the far field as CSV (with --lumens: candela too)
   --json                              print one JSON object
 
@@ -52,6 +54,7 @@ export async function run(argv: string[]): Promise<void> {
   // Phosphor options win over the scenario's phosphor block
   const setting = phosphorFromOptions(values) ?? phosphorSettingOf(scenario);
   const pkg = toWhitePackage(scenario, resolved, setting);
+  checkPhosphorFit(pkg);
   const { rays, seed } = scenario.trace;
   const name = scenario.name;
   const threads = integerOption(values, 'threads', 1, MAX_THREADS, defaultThreads());
@@ -59,8 +62,8 @@ export async function run(argv: string[]): Promise<void> {
   const iesPath = stringOption(values, 'ies');
   const csvPath = stringOption(values, 'csv');
   const lumensGiven = values.lumens !== undefined;
-  if (iesPath && !lumensGiven) throw new CliError('--ies needs --lumens (the flux to scale the file to, 1e-6 to 1e7 lm)');
-  const lumens = numberOption(values, 'lumens', 1e-6, 1e7, 100);
+  if (iesPath && !lumensGiven && !setting) throw new CliError('--ies needs --lumens (the flux to scale the file to, 1e-6 to 1e7 lm)');
+  let lumens = numberOption(values, 'lumens', 1e-6, 1e7, 100);
 
   const started = performance.now();
   // the scenario schema has checked the package: the tracer's own edge check cannot refuse it
@@ -71,14 +74,21 @@ export async function run(argv: string[]): Promise<void> {
   if (s.trappedNote) notes.push(s.trappedNote);
   if (s.geometryNote) notes.push(s.geometryNote);
 
+  const white = phosphorSummary(tally);
   if (iesPath || csvPath) {
     if (s.counts.escaped === 0) throw new CliError('no ray escaped, so there is no far field to write');
+    // A white package: a luminous far field, and its flux from the traced spectrum (white-ies.ts)
+    const lmPerChipWatt = white ? lumensPerChipWatt(white) : null;
+    if (white && lmPerChipWatt === null) throw new CliError('no visible light escaped, so there is no luminous flux to write');
+    if (lmPerChipWatt !== null && !lumensGiven) lumens = lmPerChipWatt;
+    const bins = s.farField.bins.map((b) => b.relativeIntensity);
     // The same file the dome page writes: zone-averaged near the poles, the smoothing stated in it
-    const ies = traceIes({ binIntensities: s.farField.bins.map((b) => b.relativeIntensity), lumens, rays, seed,
-      issueDate: new Date().toISOString().slice(0, 10), name, opening: packageOpening(pkg.encapsulant, pkg.chip, pkg.body) });
+    const ies = traceIes({ binIntensities: white ? luminousBinIntensities(bins, white.luminousBandWeights) : bins, lumens, rays, seed,
+      issueDate: new Date().toISOString().slice(0, 10), name, opening: packageOpening(pkg.encapsulant, pkg.chip, pkg.body),
+      ...(lmPerChipWatt !== null ? { fluxNote: whiteFluxNote(lmPerChipWatt, lumens, lumensGiven) } : {}) });
     if (iesPath) {
       writeOutput(iesPath, ies.text, 'ies');
-      notes.push(`IES LM-63 file written to ${iesPath} (${lumens} lm)`);
+      notes.push(`IES LM-63 file written to ${iesPath} (${Number(lumens.toPrecision(6))} lm${white && !lumensGiven ? ' per 1 W of chip light, from the traced spectrum' : ''})`);
     }
     if (csvPath) {
       writeOutput(csvPath, farFieldCsv(ies.farField, lumens), 'csv');
@@ -86,7 +96,6 @@ export async function run(argv: string[]): Promise<void> {
     }
   }
 
-  const white = phosphorSummary(tally);
   if (white) notes.push(...whiteNotes(white));
   const scene = packageScene(pkg);
   const shares = partShares(s, scene);
@@ -128,6 +137,7 @@ function whiteJson(w: PhosphorSummary, ledger: Record<string, number>) {
     escapedBlue: w.escapedBlue,
     escapedConverted: w.escapedConverted,
     energyEfficiency: w.energyEfficiency,
+    lumensPerWattOfChipLight: lumensPerChipWatt(w),
     stokes: { meanChipNm: w.meanChipNm, meanEscapedNm: w.meanEscapedNm },
     color: c && {
       x: c.x, y: c.y, uPrime: c.uPrime, vPrime: c.vPrime, cctK: c.cctK, duv: c.duv, ra: c.ra, r9: c.r9, lerLmPerW: c.lerLmPerW,
@@ -141,7 +151,7 @@ function whiteJson(w: PhosphorSummary, ledger: Record<string, number>) {
 }
 
 function whiteNotes(w: PhosphorSummary): string[] {
-  const notes = ['refractive indices are taken at the design wavelength for every ray (no per-ray dispersion yet)'];
+  const notes = ['each ray sees the library indices at its own wavelength (typed indices, metal mirrors and the Mie host index stay at the design wavelength)'];
   if (w.color) notes.push(...w.color.warnings);
   notes.push('caution: a white LED still emits intense blue; do not stare into it, and mind the phosphor heat in a real package');
   return notes;

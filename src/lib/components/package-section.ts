@@ -5,8 +5,9 @@
  *
  * Media are filled from the solids that bound them: a box medium (a chip layer) is its rectangle; a
  * medium behind a dome, a cylinder or a cup wall fills the region that surface closes over the plane
- * it stands on (their union is the encapsulant, a cup filled and domed included). The outside medium
- * is left blank. Surfaces are strokes styled by their behaviour; faces whose normal is ±y do not cut
+ * it stands on (their union is the encapsulant, a cup filled and domed included); a medium bounded by
+ * flat faces only (a conformal phosphor layer) fills the box of those faces. A medium holding a phosphor
+ * has the role 'phosphor' (its own fill) and says so in the legend. The outside medium is left blank. Surfaces are strokes styled by their behaviour; faces whose normal is ±y do not cut
  * the x–z plane and are not drawn.
  */
 import type { Behaviour, SceneDescription, SceneSurface, Shape } from '$lib/trace/scene';
@@ -15,7 +16,7 @@ export type StrokeStyle = 'mirror' | 'diffuse' | 'interface' | 'textured' | 'abs
 
 export interface SectionRegion {
   medium: string;
-  role: 'chip' | 'encapsulant';
+  role: 'chip' | 'encapsulant' | 'phosphor';
   /** Index into the legend's media (fill colour). */
   colour: number;
   d: string;
@@ -160,6 +161,24 @@ function enclosedRegion(sh: Shape): string | null {
   }
 }
 
+/** The x–z box of the rects among `shapes` (the outer faces of a box shell); null when there are none. */
+function rectBox(shapes: Shape[]): string | null {
+  let xMin = Infinity;
+  let xMax = -Infinity;
+  let zMin = Infinity;
+  let zMax = -Infinity;
+  for (const sh of shapes) {
+    if (sh.kind !== 'rect' || sh.axis === 1) continue;
+    const [x0, x1, z0, z1] = sh.axis === 0 ? [sh.at, sh.at, sh.vMin, sh.vMax] : [sh.uMin, sh.uMax, sh.at, sh.at];
+    xMin = Math.min(xMin, x0);
+    xMax = Math.max(xMax, x1);
+    zMin = Math.min(zMin, z0);
+    zMax = Math.max(zMax, z1);
+  }
+  if (!(xMax > xMin && zMax > zMin)) return null;
+  return polyline([[xMin, zMin], [xMax, zMin], [xMax, zMax], [xMin, zMax]], true);
+}
+
 function styleOf(b: Behaviour): StrokeStyle {
   if (b.kind === 'fresnel') return 'interface';
   return b.kind;
@@ -220,15 +239,22 @@ export function packageSection(scene: SceneDescription): PackageSection {
     colourOf.set(m.name, media.length);
     const thick = m.box ? `, ${mm(m.box.z1 - m.box.z0)} thick, ${mm(2 * m.box.a)} × ${mm(2 * m.box.b)}` : '';
     const loss = m.absorptionPerMm > 0 ? `, α = ${fmt(m.absorptionPerMm)} /mm` : '';
-    media.push({ name: m.name, colour: media.length, text: `${m.name}: n = ${index(m.n)}${loss}${thick}` });
+    const phosphor = m.phosphor ? `, holds the phosphor (quantum yield ${fmt(m.phosphor.quantumYield)})` : '';
+    media.push({ name: m.name, colour: media.length, text: `${m.name}: n = ${index(m.n)}${loss}${thick}${phosphor}` });
   }
   const regions: SectionRegion[] = [];
-  // enclosing solids first (the encapsulant), then the chip's boxes on top
+  const roleOf = (m: SceneDescription['media'][number]): SectionRegion['role'] => (m.role === 'chip' ? 'chip' : m.phosphor ? 'phosphor' : 'encapsulant');
+  // enclosing solids first (the encapsulant), then media of flat faces only, then the chip's boxes on top
   for (const s of scene.surfaces) {
     const medium = scene.media.find((m) => m.name === s.behind);
     const d = enclosedRegion(s.shape);
     if (!medium || medium.role === 'outside' || d === null || medium.box) continue;
-    regions.push({ medium: medium.name, role: medium.role === 'chip' ? 'chip' : 'encapsulant', colour: colourOf.get(medium.name) ?? 0, d, title: `${medium.name}: n = ${index(medium.n)}` });
+    regions.push({ medium: medium.name, role: roleOf(medium), colour: colourOf.get(medium.name) ?? 0, d, title: media[colourOf.get(medium.name) ?? 0].text });
+  }
+  for (const m of scene.media) {
+    if (m.role === 'outside' || m.box || regions.some((r) => r.medium === m.name)) continue;
+    const d = rectBox(scene.surfaces.filter((s) => s.behind === m.name).map((s) => s.shape));
+    if (d !== null) regions.push({ medium: m.name, role: roleOf(m), colour: colourOf.get(m.name) ?? 0, d, title: media[colourOf.get(m.name) ?? 0].text });
   }
   for (const m of scene.media) {
     if (!m.box) continue;

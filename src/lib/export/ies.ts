@@ -52,6 +52,8 @@ export interface IesWriteInput {
   stepDeg?: number;
   /** How the far field was smoothed, if it was: written as the [_SMOOTHING] keyword. */
   smoothing?: string;
+  /** Where the flux comes from (a white package's traced spectrum), if stated: the [_LUMINOUS_FLUX] keyword. */
+  fluxNote?: string;
 }
 
 /** Spellings of the non-ASCII characters our names and notes use (a keyword line is ASCII only). */
@@ -195,6 +197,7 @@ export function writeIes(input: IesWriteInput): string {
     lines.push(head + (keywordText(text, MAX_LINE - head.length) || 'none'));
   }
   if (input.smoothing !== undefined) lines.push(...keywordLines('_SMOOTHING', input.smoothing));
+  if (input.fluxNote !== undefined) lines.push(...keywordLines('_LUMINOUS_FLUX', input.fluxNote));
   lines.push('TILT=NONE');
   // Line 4: lamps, lumens per lamp, multiplier, #vertical, #horizontal, type C, metres, w, l, h
   lines.push(

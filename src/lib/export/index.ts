@@ -24,3 +24,4 @@ export { exportNumber, roundSignificant, exportJsonReplacer, CSV_SIGNIFICANT_DIG
 export { exportFileName, slug, type ExportFileNameParts } from './file-name';
 export { smoothFarField, FAR_FIELD_MIN_ZONE_SR, type SmoothedFarField } from './far-field-smoothing';
 export { traceIes, type TraceIesInput } from './trace-ies';
+export { lumensPerChipWatt, luminousBinIntensities, whiteFluxNote } from './white-ies';

@@ -36,3 +36,4 @@ export {
   type ResolvedScenario
 } from './resolve';
 export { phosphorSettingOf, toWhitePackage } from './phosphor-package';
+export { indexRowsOf, scenarioDispersion, withDispersion } from './package-dispersion';

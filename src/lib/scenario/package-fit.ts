@@ -177,3 +177,108 @@ export function packageFitProblems(chip: FitChip, enc: FitEncapsulant, body: Fit
   }
   return problems;
 }
+
+/** Where a phosphor sits (the regions the tracer builds; see trace/body-phosphor.ts). */
+export type FitPhosphorRegion = 'encapsulant' | 'conformal' | 'remote' | 'floor';
+
+export interface FitPhosphor {
+  region: FitPhosphorRegion;
+  /** Layer thickness T, mm (the layer regions; ignored for 'encapsulant'). */
+  thicknessMm?: number;
+}
+
+/** x rounded down to 3 significant digits, so a value at the shown bound fits. */
+function roundedDown(x: number): number {
+  const step = 10 ** (Math.floor(Math.log10(x)) - 2);
+  return Number((Math.floor(x / step) * step).toPrecision(3));
+}
+
+/** A broken phosphor rule: the field and its message. */
+export interface PhosphorFitProblem {
+  path: 'phosphor.region' | 'phosphor.thicknessMm';
+  message: string;
+}
+
+/**
+ * The largest layer thickness (exclusive) that fits, by bisection of a predicate that only gets
+ * harder to meet as the layer thickens; 0 when none does.
+ */
+function largestFitting(fits: (t: number) => boolean, upTo: number): number {
+  if (fits(upTo)) return upTo;
+  let lo = 0;
+  let hi = upTo;
+  for (let i = 0; i < 60; i++) {
+    const mid = 0.5 * (lo + hi);
+    if (fits(mid)) lo = mid;
+    else hi = mid;
+  }
+  return lo;
+}
+
+/**
+ * The phosphor's placement rules: a layer region needs its thickness, every region needs an
+ * encapsulant (the layer's binder is the encapsulant material), and the layer must fit:
+ * conformal — the coated chip (w + 2T) × (l + 2T) × (H + T) inside the dome or cylinder, or on the cup
+ * floor below the rim; remote — a plate (the top T of a flat fill or cylinder) above the chip, or on a
+ * dome a shell of thickness T under its surface (inner spheroid R − T, h − T) clear of the chip;
+ * floor — a settled layer thinner than the chip, in a cup or a cylinder (not under a dome on a flat
+ * base, whose curved edge the layer would meet).
+ * `enc.shape` is the fill for a cup ('flat', 'dome', 'none').
+ */
+export function phosphorFitProblems(chip: FitChip, enc: FitEncapsulant, body: FitBody, phosphor: FitPhosphor): PhosphorFitProblem[] {
+  const region = phosphor.region;
+  if (enc.shape === 'none') {
+    return [{ path: 'phosphor.region', message: `Phosphor region '${region}' needs an encapsulant (the phosphor's binder is the encapsulant material): choose a fill, a dome or a cylinder.` }];
+  }
+  if (region === 'encapsulant') return [];
+  if (enc.shape === 'box' && body.kind !== 'cup') {
+    return [{ path: 'phosphor.region', message: `Phosphor region '${region}' is not modelled in a box encapsulant: disperse the phosphor in the whole encapsulant ('encapsulant'), or choose a dome or a cylinder.` }];
+  }
+  const T = phosphor.thicknessMm;
+  const tLimit = LIMITS.phosphorThicknessMm;
+  if (T === undefined) {
+    return [{ path: 'phosphor.thicknessMm', message: `Phosphor layer thickness is needed for a ${region} layer (between ${tLimit.min} and ${tLimit.max} mm).` }];
+  }
+  const cup = body.kind === 'cup' ? body : null;
+  const H = chip.heightMm;
+  const a = chip.widthMm / 2;
+  const b = chip.lengthMm / 2;
+  if (region === 'floor' && !cup && enc.shape === 'dome') {
+    return [{
+      path: 'phosphor.region',
+      message: "Phosphor region 'floor' needs a cup or a cylinder encapsulant: a settled layer on a flat base would meet the dome's curved edge, which is not modelled."
+    }];
+  }
+  let fits: (t: number) => boolean;
+  let why: string;
+  if (region === 'conformal') {
+    why = cup ? 'the coated chip on the cup floor, below the rim' : `the coated chip inside the ${enc.shape}`;
+    fits = (t) => {
+      const rho2 = (a + t) ** 2 + (b + t) ** 2;
+      if (cup) return Math.sqrt(rho2) < cup.floorRadiusMm && H + t < cup.depthMm;
+      if (enc.shape === 'cylinder') return rho2 < enc.radiusMm ** 2 && H + t < enc.heightMm;
+      return rho2 / enc.radiusMm ** 2 + (H + t) ** 2 / enc.heightMm ** 2 < 1;
+    };
+  } else if (region === 'remote') {
+    if (enc.shape === 'dome') {
+      why = "a shell under the dome's surface, thinner than the dome" + (cup ? '' : ', clear of the chip');
+      fits = (t) => t < enc.radiusMm && t < enc.heightMm && (cup !== null || packageFitProblems(chip, { shape: 'dome', radiusMm: enc.radiusMm - t, heightMm: enc.heightMm - t }).length === 0);
+    } else {
+      const top = cup ? cup.depthMm : enc.heightMm;
+      why = `a plate at the top of the ${cup ? 'cup fill' : 'cylinder'}, above the chip`;
+      fits = (t) => t < top - H;
+    }
+  } else {
+    why = 'a settled layer thinner than the chip';
+    fits = (t) => t < H;
+  }
+  if (fits(T)) return [];
+  const max = largestFitting(fits, tLimit.max);
+  return [{
+    path: 'phosphor.thicknessMm',
+    message:
+      max > tLimit.min
+        ? `Phosphor layer thickness must be from ${tLimit.min} mm to below ${roundedDown(max)} mm for a ${region} layer here (${why}).`
+        : `Phosphor region '${region}' does not fit this package at any thickness from ${tLimit.min} mm (${why}).`
+  }];
+}

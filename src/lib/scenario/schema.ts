@@ -13,7 +13,7 @@ import { findMaterial, indexAt, userMaterialField } from '../materials/index';
 import type { Material } from '../materials/types';
 import { designWavelengthNm } from './resolve';
 import { LIMITS, MATERIAL_ID_PATTERN, type NumberLimit, rangeMessage } from './limits';
-import { packageFitProblems } from './package-fit';
+import { packageFitProblems, phosphorFitProblems } from './package-fit';
 
 export const SCENARIO_VERSION = 4;
 
@@ -207,17 +207,22 @@ const encapsulantSchema = z
   }, objectMessages('Encapsulant'))
   .strict();
 
-/** Traced phosphor regions (the scenario keeps only what the tracer can trace). */
-export const SCENARIO_PHOSPHOR_REGIONS = ['encapsulant'] as const;
+/** Phosphor regions: dispersed in the whole encapsulant, or a layer of it (trace/body-phosphor.ts). */
+export const SCENARIO_PHOSPHOR_REGIONS = ['encapsulant', 'conformal', 'remote', 'floor'] as const;
 
-/** An optional phosphor (version 4): a library phosphor dispersed in a region at a load. */
+/**
+ * An optional phosphor (version 4): a library phosphor in a region at a load. `thicknessMm` (added
+ * within version 4, optional, so earlier version-4 files read unchanged) is the layer's thickness,
+ * needed for the layer regions and kept but not used for 'encapsulant'.
+ */
 const phosphorSchema = z
   .object({
     id: z.string({ error: 'Phosphor must be a library phosphor id.' }).regex(MATERIAL_ID_PATTERN, { error: 'Phosphor must be a library phosphor id (lower-case letters, digits, dashes).' }),
     region: z.enum(SCENARIO_PHOSPHOR_REGIONS, { error: `Phosphor region must be one of: ${SCENARIO_PHOSPHOR_REGIONS.join(', ')}.` }),
     weightPercent: num('Phosphor load', LIMITS.phosphorWeightPercent),
     diameterUm: num('Phosphor particle diameter', LIMITS.phosphorDiameterUm),
-    quantumYield: num('Quantum yield', LIMITS.quantumYield)
+    quantumYield: num('Quantum yield', LIMITS.quantumYield),
+    thicknessMm: num('Phosphor layer thickness', LIMITS.phosphorThicknessMm).optional()
   }, objectMessages('Phosphor'))
   .strict();
 
@@ -361,6 +366,12 @@ function crossChecks(s: ObjectScenario, ctx: Ctx): void {
 
   for (const problem of packageFitProblems(s.chip, s.encapsulant, s.body, { kind: s.base.kind, finish: s.baseFinish })) {
     ctx.addIssue({ code: 'custom', path: problem.path.split('.'), message: problem.message });
+  }
+  // a package without encapsulant keeps its phosphor block for later (the tracer and the page say it needs one)
+  if (s.phosphor && s.encapsulant.shape !== 'none') {
+    for (const problem of phosphorFitProblems(s.chip, s.encapsulant, s.body, s.phosphor)) {
+      ctx.addIssue({ code: 'custom', path: problem.path.split('.'), message: problem.message });
+    }
   }
 
   if (s.emission.kind === 'table') {

@@ -33,6 +33,12 @@ export interface ChipBuild {
   bottom: { name: string; behaviour: Behaviour; absorbedBin: string };
   /** Behaviour of the top face (Fresnel, or textured). */
   top: Behaviour;
+  /**
+   * A medium bordering the sides below a height (a settled phosphor layer), 0 < heightMm < the chip's
+   * height: side faces below it border that medium, a side face crossing it is split in two there (its
+   * layer's box then names no faces: the layer finds its exit by its surface list).
+   */
+  below?: { medium: string; heightMm: number };
 }
 
 /** Builds the chip's media and surfaces (inputs checked by the caller; see package-spec.ts). */
@@ -59,18 +65,25 @@ export function chipParts(c: ChipBuild): ChipParts {
     const label = single ? 'chip' : layer.name;
     const upper = top ? 'chip top' : `${layer.name} / ${c.layers[i + 1].name}`;
     const sides = (['+x', '−x', '+y', '−y'] as const).map((s) => `${label} ${s}`);
-    const side = (name: string, axis: 0 | 1, sign: 1 | -1): SceneSurface => ({
+    const part = (name: string, axis: 0 | 1, sign: 1 | -1, zLow: number, zHigh: number, front: string): SceneSurface => ({
       name,
       shape:
         axis === 0
-          ? { kind: 'rect', axis: 0, at: sign * a, normalSign: sign, uMin: -b, uMax: b, vMin: z0, vMax: z1 }
-          : { kind: 'rect', axis: 1, at: sign * b, normalSign: sign, uMin: -a, uMax: a, vMin: z0, vMax: z1 },
-      front: c.around,
+          ? { kind: 'rect', axis: 0, at: sign * a, normalSign: sign, uMin: -b, uMax: b, vMin: zLow, vMax: zHigh }
+          : { kind: 'rect', axis: 1, at: sign * b, normalSign: sign, uMin: -a, uMax: a, vMin: zLow, vMax: zHigh },
+      front,
       behind: layer.name,
       behaviour: { kind: 'fresnel' },
       escapedBin: 'chip sides',
       legacyEscape: 'escapedChipSide'
     });
+    // A side face, or its two parts when the medium below a height meets it part-way up
+    const zSplit = c.below ? c.below.heightMm : -Infinity;
+    const split = zSplit > z0 && zSplit < z1;
+    const side = (name: string, axis: 0 | 1, sign: 1 | -1): SceneSurface[] =>
+      split
+        ? [part(`${name} in ${c.below!.medium}`, axis, sign, z0, zSplit, c.below!.medium), part(name, axis, sign, zSplit, z1, c.around)]
+        : [part(name, axis, sign, z0, z1, z1 <= zSplit ? c.below!.medium : c.around)];
     const topFace: SceneSurface = {
       name: upper,
       shape: { kind: 'rect', axis: 2, at: z1, normalSign: 1, uMin: -a, uMax: a, vMin: -b, vMax: b },
@@ -81,16 +94,17 @@ export function chipParts(c: ChipBuild): ChipParts {
     };
     // The top face first, then the sides: the order the medium around meets them in a tie
     if (top) surfaces.push(topFace);
-    surfaces.push(side(sides[0], 0, 1), side(sides[1], 0, -1), side(sides[2], 1, 1), side(sides[3], 1, -1));
+    const sideFaces = [...side(sides[0], 0, 1), ...side(sides[1], 0, -1), ...side(sides[2], 1, 1), ...side(sides[3], 1, -1)];
+    surfaces.push(...sideFaces);
     if (!top) surfaces.push(topFace);
     media.push({
       name: layer.name,
       role: 'chip',
       n: layer.n,
       absorptionPerMm: layer.absorptionPerMm,
-      box: { a, b, z0, z1, faces: [sides[0], sides[1], sides[2], sides[3], upper, below] }
+      box: split ? { a, b, z0, z1 } : { a, b, z0, z1, faces: [sides[0], sides[1], sides[2], sides[3], upper, below] }
     });
-    outerFaces.push(...sides);
+    outerFaces.push(...sideFaces.map((f) => f.name));
     if (top) outerFaces.unshift(upper);
     below = upper;
     z0 = z1;

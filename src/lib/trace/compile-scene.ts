@@ -96,7 +96,11 @@ export interface CompiledScene {
   /** Prepared profiles of the revolution surfaces, by the index packed in their records. */
   profiles: RevolutionProfile[];
   track: boolean;
-  /** Spectral rays and phosphor tables when some medium holds a phosphor; null otherwise (no wavelength is drawn). */
+  /**
+   * Spectral rays and phosphor tables when some medium holds a phosphor; null otherwise (no wavelength
+   * is drawn). In a spectral scene the ray loop rewrites the index slot of each dispersive medium in
+   * `media` whenever the ray's wavelength changes (medium-events.ts): after a run it holds the last ray's.
+   */
   spectral: SpectralTables | null;
   /** Ledger bin of each phosphor's heat (absorbed, not re-emitted), by phosphor index. */
   phosphorBins: number[];
@@ -214,7 +218,7 @@ export function compileScene(scene: SceneDescription): CompiledScene {
     } else {
       media[o + M_BIN] = NONE;
     }
-    media[o + M_BOUNDARY] = m.box ? BOUNDARY_BOX : BOUNDARY_LIST;
+    media[o + M_BOUNDARY] = m.box?.faces ? BOUNDARY_BOX : BOUNDARY_LIST;
   });
 
   // Surfaces
@@ -267,8 +271,8 @@ export function compileScene(scene: SceneDescription): CompiledScene {
       from === NONE ? NONE : media[from * MEDIUM_STRIDE + M_IS_CHIP] === 1 ? COUNTER_TIR_CHIP : to === outside ? COUNTER_TIR_OUTER : NONE;
     surfaces[o + S_TIR_FRONT] = tirFrom(front, behind);
     surfaces[o + S_TIR_BEHIND] = tirFrom(behind, front);
-    if (front !== NONE && !scene.media[front].box) lists[front].push(2 * i + SIDE_FRONT);
-    if (behind !== NONE && !scene.media[behind].box) lists[behind].push(2 * i + SIDE_BEHIND);
+    if (front !== NONE && !scene.media[front].box?.faces) lists[front].push(2 * i + SIDE_FRONT);
+    if (behind !== NONE && !scene.media[behind].box?.faces) lists[behind].push(2 * i + SIDE_BEHIND);
   });
 
   // Box media: their six faces, by the side the box lies on
@@ -279,7 +283,7 @@ export function compileScene(scene: SceneDescription): CompiledScene {
     media[o + M_BOX_B] = m.box.b;
     media[o + M_BOX_Z0] = m.box.z0;
     media[o + M_BOX_Z1] = m.box.z1;
-    m.box.faces.forEach((faceName, f) => {
+    m.box.faces?.forEach((faceName, f) => {
       const s = surfaceIndex.get(faceName);
       if (s === undefined) throw new Error(`scene: box medium '${m.name}' names unknown face '${faceName}'`);
       const front = surfaces[s * SURFACE_STRIDE + S_FRONT];
@@ -346,7 +350,14 @@ export function compileScene(scene: SceneDescription): CompiledScene {
     emitterRays,
     emitterSurface: em.surface === undefined ? NONE : surfaceOf(em.surface),
     profiles,
-    spectral: phosphors.length && scene.chipSpectrum ? buildSpectralTables(scene.chipSpectrum, phosphors) : null,
+    spectral:
+      phosphors.length && scene.chipSpectrum
+        ? buildSpectralTables(
+            scene.chipSpectrum,
+            phosphors,
+            scene.media.flatMap((m, i) => (m.indexRows ? [{ medium: i, rows: m.indexRows }] : []))
+          )
+        : null,
     phosphorBins,
     track: scene.polarization === 'track',
     finalExit: Uint8Array.from(scene.surfaces, (s) => (s.finalExit === true ? 1 : 0)),

@@ -10,7 +10,10 @@
  *   (Henyey–Greenstein, g(λ)); otherwise the phosphor absorbs it, and with probability QY it is
  *   re-emitted isotropically at a wavelength drawn from the phosphor's emission (it goes on from
  *   there, and may be re-absorbed by the same rule), else it is heat (ledger bin 'phosphor:<medium>').
- * - Refractive indices stay at the design wavelength (no per-ray dispersion yet).
+ * - Dispersion: every medium that gives its index over wavelength has it set at the ray's wavelength
+ *   whenever that changes (launch, re-emission), written into the compiled medium records the interface
+ *   events read, so Fresnel and refraction are per ray at no cost per event. Media without a table
+ *   (a typed index) keep their one index; so do metal mirrors and the Mie host index of the coefficients.
  * Allocation-free: module-scope typed arrays, small-integer returns.
  * Sources: free-path sampling and the scatter/absorb choice, L. Wang, S. L. Jacques, L. Zheng, "MCML",
  * Comput. Methods Programs Biomed. 47, 131 (1995), §3; direction update after a scattering angle,
@@ -25,7 +28,7 @@ import { ANGLE_BANDS, ANGLE_BAND_DEG, BATCHES, SPECTRUM_BINS, SPECTRUM_FROM_NM, 
 import * as layout from './scene-layout';
 
 // Module constants, not imported bindings (see trace-chunk.ts: getters under tsx are not always inlined)
-const { M_ABSORPTION, M_BIN, M_PHOSPHOR } = layout;
+const { M_ABSORPTION, M_BIN, M_INDEX, M_PHOSPHOR, MEDIUM_STRIDE } = layout;
 
 /** The current ray's [wavelength nm, converted (0/1), batch]. */
 export const photon = new Float64Array(3);
@@ -46,6 +49,10 @@ let quantumYield: Float64Array = new Float64Array(0);
 let chip: Float64Array = new Float64Array(0);
 let chipLine = true;
 let heatBins: number[] = [];
+// Dispersive media (compiled medium indices), their index tables on the grid, and the records they are written to
+let dispersive: Int32Array = new Int32Array(0);
+let indices: Float64Array = new Float64Array(0);
+let sceneMedia: Float64Array = new Float64Array(0);
 let tally: SpectralTally = createSpectralTally();
 const RAD_TO_DEG = 180 / Math.PI;
 
@@ -62,8 +69,28 @@ export function configureSpectral(scene: CompiledScene, into: SpectralTally): bo
   chip = t.chip;
   chipLine = t.chipLine;
   heatBins = scene.phosphorBins;
+  dispersive = t.dispersive;
+  indices = t.indices;
+  sceneMedia = scene.media;
   tally = into;
   return true;
+}
+
+/** Writes each dispersive medium's index at the ray's wavelength into the medium records (grid interpolation, ends held). */
+function indicesAtWavelength(): void {
+  const count = dispersive.length;
+  if (count === 0) return;
+  let f = (photon[0] - GRID_FROM_NM) / GRID_STEP_NM;
+  if (f < 0) f = 0;
+  else if (f > GRID_POINTS - 1) f = GRID_POINTS - 1;
+  const i = f | 0;
+  const j = i < GRID_POINTS - 1 ? i + 1 : i;
+  const w = f - i;
+  for (let k = 0; k < count; k++) {
+    const o = k * GRID_POINTS;
+    const a = indices[o + i];
+    sceneMedia[dispersive[k] * MEDIUM_STRIDE + M_INDEX] = w === 0 ? a : a + w * (indices[o + j] - a);
+  }
 }
 
 /** A new ray's wavelength from the chip spectrum; `rayIndex` picks its batch. */
@@ -76,6 +103,7 @@ export function launchWavelength(rayIndex: number): void {
   photon[1] = 0;
   photon[2] = rayIndex % BATCHES;
   tally.launchedInverseNm += 1 / photon[0];
+  indicesAtWavelength();
 }
 
 /** μs, μa, g of phosphor p at the ray's wavelength into c[0..2] (grid interpolation, ends held). */
@@ -179,6 +207,7 @@ export function phosphorFlight(ray: Float64Array, hit: Float64Array, media: Floa
   photon[0] = sampleQuantile(emission, p * QUANTILES, u[0]);
   photon[1] = 1;
   tally.conversions++;
+  indicesAtWavelength();
   isotropic(ray);
   return REDIRECTED;
 }

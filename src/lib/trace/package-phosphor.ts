@@ -2,18 +2,23 @@
  * A phosphor in a traced package: where it is, its per-wavelength coefficients (given as a table, or
  * computed from particles by Mie theory), its emission and quantum yield, and the chip spectrum the
  * spectral rays are drawn from. Checked once at the edge (validateTracePhosphor).
- * Regions traced today: 'encapsulant' (particles dispersed through the whole encapsulant).
+ * Regions: 'encapsulant' (particles dispersed through the whole encapsulant), or a layer of the
+ * encapsulant material holding them, of thickness T: 'conformal' (around the chip's top and sides),
+ * 'remote' (a plate at the top of the fill, or a shell under a dome's surface), 'floor' (settled on the
+ * floor around the chip). Geometry and fit rules: body-phosphor.ts, scenario/package-fit.ts.
  */
 import { particleCloud, type ParticleSize } from '../scatter/index';
 import { particleIndexAt, type Phosphor } from '../phosphors/index';
+import { LIMITS } from '../scenario/limits';
 
-/** Where a phosphor can sit; only 'encapsulant' is traced so far. */
+/** Where a phosphor can sit. */
 export const PHOSPHOR_REGIONS = ['encapsulant', 'conformal', 'remote', 'floor'] as const;
-export const TRACED_PHOSPHOR_REGIONS = ['encapsulant'] as const;
 export type PhosphorRegion = (typeof PHOSPHOR_REGIONS)[number];
 
 export interface TracePhosphor {
-  region: 'encapsulant';
+  region: PhosphorRegion;
+  /** Layer thickness T, mm: needed for 'conformal', 'remote' and 'floor'; not used for 'encapsulant'. */
+  thicknessMm?: number;
   /** [wavelength nm, μs 1/mm, μa 1/mm, g], sorted; linear between rows, ends held. */
   coefficients: [number, number, number, number][];
   /** Emission [wavelength nm, power per nm], sorted. */
@@ -83,8 +88,12 @@ function spectrumRows(field: string, rows: unknown): void {
 /** Checks a package's phosphor; throws a RangeError naming the field and its allowed range. */
 export function validateTracePhosphor(p: TracePhosphor): void {
   if (typeof p !== 'object' || p === null) throw new RangeError('phosphor must be an object');
-  if (!(TRACED_PHOSPHOR_REGIONS as readonly string[]).includes(p.region)) {
-    throw new RangeError(`phosphor.region must be one of: ${TRACED_PHOSPHOR_REGIONS.join(', ')} (got '${String(p.region)}')`);
+  if (!(PHOSPHOR_REGIONS as readonly string[]).includes(p.region)) {
+    throw new RangeError(`phosphor.region must be one of: ${PHOSPHOR_REGIONS.join(', ')} (got '${String(p.region)}')`);
+  }
+  const T = LIMITS.phosphorThicknessMm;
+  if (p.thicknessMm !== undefined && !(typeof p.thicknessMm === 'number' && p.thicknessMm >= T.min && p.thicknessMm <= T.max)) {
+    throw new RangeError(`phosphor.thicknessMm must be a number from ${T.min} to ${T.max} mm (got ${String(p.thicknessMm)})`);
   }
   sortedRows('phosphor.coefficients', p.coefficients, 4, (row, name) => {
     if (!(row[1] >= 0 && row[1] <= 1e4)) throw new RangeError(`${name}: mus_per_mm must be from 0 to 10000 1/mm (got ${row[1]})`);

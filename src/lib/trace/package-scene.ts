@@ -9,6 +9,8 @@
  * medium; the base then borders nothing the rays can reach again, as escape is final).
  * The cup body: see body-cup.ts; its floor is the base.
  * The chip: one box, or layers (body-chip.ts); its bottom is the base beneath it, or its own mirror.
+ * A phosphor: dispersed in the encapsulant medium, or a layer of its own (body-phosphor.ts). With the
+ * package's `dispersion`, each medium carries its index over wavelength for spectral rays.
  */
 
 /** A reflector as a surface behaviour: specular mirror (number or metal) or Lambertian. */
@@ -18,6 +20,7 @@ function reflector(m: TraceBase, finish: 'specular' | 'diffuse'): Behaviour {
 }
 import { chipParts } from './body-chip';
 import { cupSurfaces } from './body-cup';
+import { phosphorLayerName, withPhosphorLayer } from './body-phosphor';
 import { chipLayers, emitterHeightMm, type TraceBase, type TracePackage } from './package-spec';
 import type { Behaviour, SceneDescription, SceneMedium, SceneSurface } from './scene';
 
@@ -32,7 +35,8 @@ function encapsulantBoxSurfaces(s: number, h: number): SceneSurface[] {
     front: OUTSIDE,
     behind: ENCAPSULANT,
     behaviour: { kind: 'fresnel' },
-    escapedBin: 'box sides'
+    escapedBin: 'box sides',
+    finalExit: true
   });
   return [
     {
@@ -40,13 +44,19 @@ function encapsulantBoxSurfaces(s: number, h: number): SceneSurface[] {
       shape: { kind: 'rect', axis: 2, at: h, normalSign: 1, uMin: -s, uMax: s, vMin: -s, vMax: s },
       front: OUTSIDE,
       behind: ENCAPSULANT,
-      behaviour: { kind: 'fresnel' }
+      behaviour: { kind: 'fresnel' },
+      finalExit: true
     },
     side('box +x', 0, 1),
     side('box −x', 0, -1),
     side('box +y', 1, 1),
     side('box −y', 1, -1)
   ];
+}
+
+/** The medium with its index over wavelength, when the package gives one. */
+function withIndexRows(m: SceneMedium, rows: [number, number][] | null | undefined): SceneMedium {
+  return rows ? { ...m, indexRows: rows } : m;
 }
 
 /** The scene of a package (trusted input: check it first with validateTracePackage). */
@@ -58,26 +68,29 @@ export function packageScene(pkg: TracePackage): SceneDescription {
   const around = bare ? OUTSIDE : ENCAPSULANT;
   const base = reflector(pkg.base, pkg.baseFinish ?? 'specular');
   const layers = chipLayers(pkg.chip);
+  const ph = pkg.phosphor;
+  const region = ph && !bare && ph.region !== 'encapsulant' ? ph.region : null;
+  const layerMedium = region ? phosphorLayerName(region) : null;
+  const thicknessMm = ph?.thicknessMm ?? 0;
+  const disp = pkg.dispersion;
   const chip = chipParts({
     widthMm: pkg.chip.widthMm,
     lengthMm: pkg.chip.lengthMm,
     layers,
-    around,
+    around: region === 'conformal' ? layerMedium! : around,
     bottom: pkg.chip.mirror
       ? { name: 'chip mirror', behaviour: { kind: 'mirror', mirror: pkg.chip.mirror }, absorbedBin: 'chip mirror' }
       : { name: 'base under the chip', behaviour: base, absorbedBin: cup ? 'floor' : 'base' },
-    top: pkg.chip.topScatter ? { kind: 'textured', scatteredFraction: pkg.chip.topScatter } : { kind: 'fresnel' }
+    top: pkg.chip.topScatter ? { kind: 'textured', scatteredFraction: pkg.chip.topScatter } : { kind: 'fresnel' },
+    ...(region === 'floor' ? { below: { medium: layerMedium!, heightMm: thicknessMm } } : {})
   });
-  const media: SceneMedium[] = [...chip.media];
+  const media: SceneMedium[] = chip.media.map((m, i) => withIndexRows(m, disp?.chipLayers?.[i]));
   // A bare chip on the flat base: its box is all the outside meets (the base then borders nothing)
   const bareBox = bare && !cup;
-  const surfaces: SceneSurface[] = chip.surfaces.map((s) => (bareBox && chip.outerFaces.includes(s.name) ? { ...s, finalExit: true } : s));
-  const ph = pkg.phosphor;
+  let surfaces: SceneSurface[] = chip.surfaces.map((s) => (bareBox && chip.outerFaces.includes(s.name) ? { ...s, finalExit: true } : s));
+  const particles = ph ? { phosphor: { coefficients: ph.coefficients, emission: ph.emission, quantumYield: ph.quantumYield } } : {};
   if (!bare) {
-    media.push({
-      name: ENCAPSULANT, role: 'encapsulant', n: enc.n, absorptionPerMm: enc.absorptionPerMm,
-      ...(ph ? { phosphor: { coefficients: ph.coefficients, emission: ph.emission, quantumYield: ph.quantumYield } } : {})
-    });
+    media.push(withIndexRows({ name: ENCAPSULANT, role: 'encapsulant', n: enc.n, absorptionPerMm: enc.absorptionPerMm, ...(region ? {} : particles) }, disp?.encapsulant));
   }
   if (cup) {
     surfaces.push(
@@ -137,7 +150,19 @@ export function packageScene(pkg: TracePackage): SceneDescription {
       );
     }
   }
-  media.push({ name: OUTSIDE, role: 'outside', n: pkg.outsideN, absorptionPerMm: 0 });
+  if (region && layerMedium) {
+    // the layer is the encapsulant material holding the particles
+    media.push(withIndexRows({ name: layerMedium, role: 'encapsulant', n: enc.n, absorptionPerMm: enc.absorptionPerMm, ...particles }, disp?.encapsulant));
+    surfaces = withPhosphorLayer(surfaces, {
+      region,
+      thicknessMm,
+      medium: layerMedium,
+      host: ENCAPSULANT,
+      chip: pkg.chip,
+      base: { behaviour: base, absorbedBin: cup ? 'floor' : 'base' }
+    });
+  }
+  media.push(withIndexRows({ name: OUTSIDE, role: 'outside', n: pkg.outsideN, absorptionPerMm: 0 }, disp?.outside));
   return {
     media,
     surfaces,

@@ -6,7 +6,7 @@
  * dimensionless. Frame: z up, base plane z = 0, chip centred on the z axis, width along x, length along y.
  */
 import { LIMITS } from '../scenario/limits';
-import { packageFitProblems } from '../scenario/package-fit';
+import { packageFitProblems, phosphorFitProblems } from '../scenario/package-fit';
 import { validateTracePhosphor, type TracePhosphor } from './package-phosphor';
 
 /** Where rays start inside the chip. */
@@ -111,6 +111,23 @@ export interface TracePackage {
   body?: TraceBody;
   /** A phosphor (package-phosphor.ts): rays then carry their wavelength. Needs an encapsulant. */
   phosphor?: TracePhosphor;
+  /**
+   * Indices over wavelength, for a package whose rays carry their wavelength (with a phosphor): each
+   * ray then sees every index at its own wavelength. Absent (or null for a part): the part's `n` at
+   * every wavelength. Without a phosphor it is not used.
+   */
+  dispersion?: TraceDispersion;
+}
+
+/** Rows [wavelength nm, real index n], sorted by wavelength; linear between rows, the ends held. */
+export type IndexRows = [number, number][];
+
+export interface TraceDispersion {
+  /** One entry per chip layer, bottom to top (the single-box chip: one). */
+  chipLayers?: (IndexRows | null)[];
+  /** The encapsulant (and a phosphor layer of its material). */
+  encapsulant?: IndexRows | null;
+  outside?: IndexRows | null;
 }
 
 export interface TraceOptions {
@@ -235,18 +252,18 @@ export function validateTracePackage(p: TracePackage): void {
 
   requireObject('encapsulant', p.encapsulant);
   const enc = p.encapsulant;
-  if (p.phosphor !== undefined) {
-    validateTracePhosphor(p.phosphor);
-    const bare = p.body?.kind === 'cup' ? p.body.fill === 'none' : enc.shape === 'none';
-    if (bare) throw new RangeError("phosphor.region 'encapsulant' needs an encapsulant (the package has none)");
-  }
+  if (p.phosphor !== undefined) validateTracePhosphor(p.phosphor);
+  if (p.dispersion !== undefined) validateDispersion(p.dispersion, chipLayers(chip).length);
   if (p.body !== undefined) {
     requireObject('body', p.body);
     requireChoice('body.kind', p.body.kind, ['flat', 'cup']);
-    if (p.body.kind === 'cup') return validateCup(p, p.body);
+    if (p.body.kind === 'cup') {
+      validateCup(p, p.body);
+      return validatePhosphorFit(p);
+    }
   }
   requireChoice('encapsulant.shape', enc.shape, ['none', 'dome', 'cylinder', 'box']);
-  if (enc.shape === 'none') return;
+  if (enc.shape === 'none') return validatePhosphorFit(p);
   requireRange('encapsulant.radiusMm', enc.radiusMm, L.sizeMm.min, L.sizeMm.max);
   requireRange('encapsulant.heightMm', enc.heightMm, L.sizeMm.min, L.sizeMm.max);
   requireRange('encapsulant.n', enc.n, L.index.min, L.index.max);
@@ -254,6 +271,43 @@ export function validateTracePackage(p: TracePackage): void {
 
   // Chip fit: the same rules as the scenario schema
   const problem = packageFitProblems(chip, enc)[0];
+  if (problem) throw new RangeError(`${problem.path}: ${problem.message}`);
+  validatePhosphorFit(p);
+}
+
+function validateIndexRows(field: string, rows: unknown): void {
+  if (rows === null || rows === undefined) return;
+  const L = TRACE_LIMITS;
+  if (!Array.isArray(rows) || rows.length < 1 || rows.length > LIMITS.spectrumRows.max) {
+    throw new RangeError(`${field} must hold 1 to ${LIMITS.spectrumRows.max} rows [wavelength nm, n] (got ${show(rows)})`);
+  }
+  rows.forEach((row: unknown, i) => {
+    const f = `${field}[${i}]`;
+    if (!Array.isArray(row) || row.length !== 2) throw new RangeError(`${f} must be [wavelength nm, n]`);
+    requireRange(`${f} wavelength`, row[0], LIMITS.wavelengthNm.min, LIMITS.wavelengthNm.max);
+    requireRange(`${f} n`, row[1], L.index.min, L.index.max);
+    if (i > 0 && !(row[0] > (rows[i - 1] as number[])[0])) throw new RangeError(`${f} wavelength must be above the previous row's (rows sorted, no repeats)`);
+  });
+}
+
+function validateDispersion(d: TraceDispersion, layerCount: number): void {
+  requireObject('dispersion', d);
+  if (d.chipLayers !== undefined) {
+    if (!Array.isArray(d.chipLayers) || d.chipLayers.length !== layerCount) {
+      throw new RangeError(`dispersion.chipLayers must hold one entry per chip layer (${layerCount})`);
+    }
+    d.chipLayers.forEach((rows, i) => validateIndexRows(`dispersion.chipLayers[${i}]`, rows));
+  }
+  validateIndexRows('dispersion.encapsulant', d.encapsulant);
+  validateIndexRows('dispersion.outside', d.outside);
+}
+
+/** The phosphor's region fits the package (the scenario schema's rules); a cup's fill stands for the shape. */
+function validatePhosphorFit(p: TracePackage): void {
+  if (p.phosphor === undefined) return;
+  const body = p.body ?? { kind: 'flat' as const };
+  const enc = body.kind === 'cup' ? { ...p.encapsulant, shape: body.fill } : p.encapsulant;
+  const problem = phosphorFitProblems(p.chip, enc, body, p.phosphor)[0];
   if (problem) throw new RangeError(`${problem.path}: ${problem.message}`);
 }
 

@@ -15,6 +15,7 @@
  */
 import { colorOfSpectrum, colorSpectrum, type ColorSummary } from '../color/index';
 import { ANGLE_BANDS, ANGLE_BAND_DEG, BATCHES, SPECTRUM_BINS, SPECTRUM_FROM_NM, SPECTRUM_STEP_NM } from './spectral-tally';
+import { luminousBandWeights } from './luminous-bands';
 import type { Tally } from './tally';
 
 /** Bands with fewer escaped photons are too noisy for a colour. */
@@ -69,6 +70,8 @@ export interface PhosphorSummary {
   colorOverAngle: AngleColor[];
   /** Largest u′v′ distance of a band from the whole; null with fewer than two bands. */
   deltaUvPrime: number | null;
+  /** Lumens per photon of each 10° polar band over the whole's (luminous-bands.ts): photon far field → luminous. */
+  luminousBandWeights: number[];
   scatterEventsPerRay: number;
   conversionsPerRay: number;
 }
@@ -166,6 +169,7 @@ export function phosphorSummary(tally: Tally): PhosphorSummary | null {
     color,
     colorOverAngle,
     deltaUvPrime,
+    luminousBandWeights: luminousBandWeights(s),
     scatterEventsPerRay: n ? s.scatterEvents / n : 0,
     conversionsPerRay: n ? s.conversions / n : 0
   };

@@ -2,7 +2,9 @@
  * The spectral part of a compiled scene, built once per run from the scene's chip spectrum and its
  * phosphor media: each phosphor's μs, μa, g tabulated on one wavelength grid (GRID_FROM_NM..GRID_TO_NM
  * in GRID_STEP_NM steps, linear between the given rows, the first and last rows held beyond the ends),
- * its emission as a quantile table, its quantum yield; and the chip's quantile table.
+ * its emission as a quantile table, its quantum yield; the chip's quantile table; and the real index of
+ * each medium that gives one over wavelength (SceneMedium.indexRows) on the same grid, so each ray sees
+ * the indices at its own wavelength (dispersion).
  * The ray loop (medium-events.ts) reads these flat arrays only.
  */
 import { quantileTable, QUANTILES } from './spectral-sampler';
@@ -25,6 +27,31 @@ export interface SpectralTables {
   /** QUANTILES doubles per phosphor: its emission's quantile table. */
   emission: Float64Array;
   quantumYield: Float64Array;
+  /** Media whose index depends on wavelength (indices into the compiled scene's media). */
+  dispersive: Int32Array;
+  /** GRID_POINTS doubles per dispersive medium: its real index on the grid. */
+  indices: Float64Array;
+}
+
+/** A medium's index over wavelength, for the tables: its index in the scene and its rows [nm, n]. */
+export interface IndexTableInput {
+  medium: number;
+  rows: readonly (readonly [number, number])[];
+}
+
+/**
+ * Linear interpolation of rows [x, y] sorted by x, ends held, returning a row's own y exactly where x
+ * falls on it (so a grid point at a row's wavelength carries the library's value bit for bit).
+ */
+function rowValueAt(rows: readonly (readonly [number, number])[], x: number): number {
+  if (x <= rows[0][0]) return rows[0][1];
+  const last = rows.length - 1;
+  if (x >= rows[last][0]) return rows[last][1];
+  let i = 1;
+  while (rows[i][0] < x) i++;
+  if (rows[i][0] === x) return rows[i][1];
+  const f = (x - rows[i - 1][0]) / (rows[i][0] - rows[i - 1][0]);
+  return rows[i - 1][1] + f * (rows[i][1] - rows[i - 1][1]);
 }
 
 /** Linear interpolation in rows sorted by x (column `col`), ends held. */
@@ -39,7 +66,11 @@ export function interpolateHeld(rows: readonly (readonly number[])[], x: number,
   return rows[i - 1][col] + f * (rows[i][col] - rows[i - 1][col]);
 }
 
-export function buildSpectralTables(chipSpectrum: readonly (readonly [number, number])[], phosphors: readonly ScenePhosphor[]): SpectralTables {
+export function buildSpectralTables(
+  chipSpectrum: readonly (readonly [number, number])[],
+  phosphors: readonly ScenePhosphor[],
+  indexTables: readonly IndexTableInput[] = []
+): SpectralTables {
   const coefficients = new Float64Array(phosphors.length * PHOSPHOR_TABLE_STRIDE);
   const emission = new Float64Array(phosphors.length * QUANTILES);
   const quantumYield = new Float64Array(phosphors.length);
@@ -54,5 +85,17 @@ export function buildSpectralTables(chipSpectrum: readonly (readonly [number, nu
     emission.set(quantileTable(p.emission), i * QUANTILES);
     quantumYield[i] = p.quantumYield;
   });
-  return { chip: quantileTable(chipSpectrum), chipLine: chipSpectrum.length === 1, coefficients, emission, quantumYield };
+  const indices = new Float64Array(indexTables.length * GRID_POINTS);
+  indexTables.forEach((t, i) => {
+    for (let k = 0; k < GRID_POINTS; k++) indices[i * GRID_POINTS + k] = rowValueAt(t.rows, GRID_FROM_NM + k * GRID_STEP_NM);
+  });
+  return {
+    chip: quantileTable(chipSpectrum),
+    chipLine: chipSpectrum.length === 1,
+    coefficients,
+    emission,
+    quantumYield,
+    dispersive: Int32Array.from(indexTables.map((t) => t.medium)),
+    indices
+  };
 }

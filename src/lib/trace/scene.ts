@@ -103,11 +103,18 @@ export interface SceneMedium {
   /** Bulk absorption coefficient, 1/mm. */
   absorptionPerMm: number;
   /**
-   * When set, the medium is exactly this axis-aligned box [−a, a] × [−b, b] × [z0, z1] and `faces`
-   * names its six bounding surfaces (+x, −x, +y, −y, +z, −z): the ray loop then finds the exit by the
-   * slab method instead of testing each surface.
+   * When set, the medium is exactly this axis-aligned box [−a, a] × [−b, b] × [z0, z1] (a chip layer, where
+   * the emitter draws its points). With `faces` (its six bounding surfaces +x, −x, +y, −y, +z, −z) the ray
+   * loop finds the exit by the slab method; without (a side split in two by a settled layer) by its
+   * surface list, like any other medium.
    */
-  box?: { a: number; b: number; z0: number; z1: number; faces: [string, string, string, string, string, string] };
+  box?: { a: number; b: number; z0: number; z1: number; faces?: [string, string, string, string, string, string] };
+  /**
+   * Real index over wavelength [wavelength nm, n], sorted (linear between rows, ends held): in a scene
+   * of spectral rays each ray sees the index at its own wavelength; otherwise `n` is used. Absent: n at
+   * every wavelength.
+   */
+  indexRows?: [number, number][];
   /** Phosphor particles dispersed in this medium: scattering, absorption and conversion (medium-events.ts). */
   phosphor?: ScenePhosphor;
 }

@@ -156,9 +156,16 @@ export function intersectSpheroidCap(s: Float64Array, p: number, side: number, r
   const zc = s[p + 2];
   const qz = (ray[2] - zc) * scale;
   const vz = ray[5] * scale;
-  quadric[0] = dx * dx + dy * dy + vz * vz;
-  quadric[1] = px * dx + py * dy + qz * vz;
-  quadric[2] = px * px + py * py + qz * qz - R * R;
+  const A = dx * dx + dy * dy + vz * vz;
+  const B = px * dx + py * dy + qz * vz;
+  const C = px * px + py * py + qz * qz - R * R;
+  // From behind, a point clearly outside the spheroid (the medium behind a cap can reach below its base
+  // plane, as a cup's fill under a remote phosphor shell does) crosses the cap only after entering the
+  // spheroid: not when its line misses it or it moves away (quadricRoot would read that as roundoff)
+  if (side !== SIDE_FRONT && C > 1e-9 * R * R && (B >= 0 || B * B < A * C)) return false;
+  quadric[0] = A;
+  quadric[1] = B;
+  quadric[2] = C;
   quadricRoot(quadric, side);
   const t = quadric[3];
   if (!(t >= 0)) return false;

@@ -196,18 +196,16 @@ const FAST_MIRROR = 2;
 const F_KIND = 0;
 const F_SURFACE = 1;
 const F_TO = 2;
-const F_ETA_I = 3;
-const F_ETA_T = 4;
 /** Outward normal sign·ê_k: cos θi = sign·d_k. */
-const F_SIGN = 5;
-const F_AXIS = 6;
+const F_SIGN = 3;
+const F_AXIS = 4;
 /** The face's plane coordinate, where the ray is put on reaching it (as surfaceNormal does). */
-const F_AT = 7;
-const F_TIR_COUNTER = 8;
+const F_AT = 5;
+const F_TIR_COUNTER = 6;
 /** Mirror: reflectance, and the bin of what it absorbs. */
-const F_R = 9;
-const F_BIN = 10;
-const FACE_STRIDE = 11;
+const F_R = 7;
+const F_BIN = 8;
+const FACE_STRIDE = 9;
 const BOX_STRIDE = B_FACES + 6 * FACE_STRIDE;
 const boxTable = new Float64Array(MAX_FAST_BOXES * BOX_STRIDE);
 /** Per medium: offset of its record in boxTable + 1 when boxSteps walks it, else 0. */
@@ -280,8 +278,6 @@ function configureBoxFaces(): void {
       boxTable[q + F_KIND] = fresnel ? FAST_FRESNEL : FAST_MIRROR;
       boxTable[q + F_SURFACE] = entry >> 1;
       boxTable[q + F_TO] = to;
-      boxTable[q + F_ETA_I] = media[mo + M_INDEX];
-      boxTable[q + F_ETA_T] = to === NONE ? 1 : media[to * MEDIUM_STRIDE + M_INDEX];
       // surfaceNormal's normal facing the incident side is (front ? σ : −σ)·ê_k; the outward one its negative
       boxTable[q + F_SIGN] = side === SIDE_FRONT ? -surfaces[p + 2] : surfaces[p + 2];
       boxTable[q + F_AXIS] = surfaces[p];
@@ -688,8 +684,9 @@ function boxSteps(rayEvents: number, maxEvents: number): number {
     let R = boxTable[q + F_R];
     if (kind === FAST_FRESNEL) {
       fin[0] = sign * ray[j];
-      fin[1] = boxTable[q + F_ETA_I];
-      fin[2] = boxTable[q + F_ETA_T];
+      // the indices from the media records, which a spectral scene rewrites at each ray's wavelength
+      fin[1] = media[medium * MEDIUM_STRIDE + M_INDEX];
+      fin[2] = media[(boxTable[q + F_TO] | 0) * MEDIUM_STRIDE + M_INDEX];
       if (!fresnelRealAt(fin, fr)) {
         ray[j] = -ray[j];
         const c = boxTable[q + F_TIR_COUNTER] | 0;

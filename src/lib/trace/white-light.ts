@@ -9,7 +9,7 @@
  * a bisection guard; W. H. Press et al., Numerical Recipes, 3rd ed., §9.2–9.3).
  */
 import { emissionRows, findPhosphor, type Phosphor } from '../phosphors/index';
-import { coefficientsFromParticles, SILICONE_DENSITY_G_PER_CM3, type TracePhosphor } from './package-phosphor';
+import { coefficientsFromParticles, SILICONE_DENSITY_G_PER_CM3, type PhosphorRegion, type TracePhosphor } from './package-phosphor';
 import type { TracePackage } from './package-spec';
 import { phosphorSummary, type PhosphorSummary } from './phosphor-summary';
 import { traceSync } from './trace';
@@ -36,8 +36,15 @@ export function chipSpectrumRows(
   return emission.rows.map(([a, b]) => [a, b]);
 }
 
+/** Where the phosphor sits: the whole encapsulant (default), or a layer of thickness T mm (body-phosphor.ts). */
+export interface PhosphorPlacement {
+  region?: PhosphorRegion;
+  thicknessMm?: number;
+}
+
 /** A phosphor setting: particles of a library (or user) phosphor by load, or a measured coefficient table. */
-export type PhosphorSetting =
+export type PhosphorSetting = PhosphorPlacement &
+  (
   | {
       kind: 'particles';
       phosphor: Phosphor;
@@ -50,7 +57,8 @@ export type PhosphorSetting =
       /** Emission rows; default the phosphor's band model. */
       emission?: [number, number][];
     }
-  | { kind: 'table'; coefficients: [number, number, number, number][]; emission: [number, number][]; quantumYield: number };
+  | { kind: 'table'; coefficients: [number, number, number, number][]; emission: [number, number][]; quantumYield: number }
+  );
 
 /** The library phosphor by id, or a RangeError naming the field. */
 export function libraryPhosphor(id: string, field = 'phosphor'): Phosphor {
@@ -64,11 +72,15 @@ function emissionOf(p: Phosphor): [number, number][] {
   return emissionRows(p, 380, 830, 2);
 }
 
-/** The package with its encapsulant holding the phosphor. */
+/** The package with the phosphor in its region (the whole encapsulant, or a layer of it). */
 export function withPhosphor(pkg: TracePackage, setting: PhosphorSetting, chipSpectrum: [number, number][]): TracePackage {
   let phosphor: TracePhosphor;
+  const placement = {
+    region: setting.region ?? 'encapsulant',
+    ...(setting.region && setting.region !== 'encapsulant' && setting.thicknessMm !== undefined ? { thicknessMm: setting.thicknessMm } : {})
+  };
   if (setting.kind === 'table') {
-    phosphor = { region: 'encapsulant', coefficients: setting.coefficients, emission: setting.emission, quantumYield: setting.quantumYield, chipSpectrum };
+    phosphor = { ...placement, coefficients: setting.coefficients, emission: setting.emission, quantumYield: setting.quantumYield, chipSpectrum };
   } else {
     const coefficients = coefficientsFromParticles({
       phosphor: setting.phosphor,
@@ -78,7 +90,7 @@ export function withPhosphor(pkg: TracePackage, setting: PhosphorSetting, chipSp
       hostDensityGPerCm3: SILICONE_DENSITY_G_PER_CM3
     });
     phosphor = {
-      region: 'encapsulant',
+      ...placement,
       coefficients,
       emission: setting.emission ?? emissionOf(setting.phosphor),
       quantumYield: setting.quantumYield ?? setting.phosphor.quantumYield,

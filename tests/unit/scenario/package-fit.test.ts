@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { minEncapsulantRadiusMm, packageFitProblems } from '../../../src/lib/scenario/package-fit';
+import { minEncapsulantRadiusMm, packageFitProblems, phosphorFitProblems } from '../../../src/lib/scenario/package-fit';
 
 const chip = { widthMm: 1, lengthMm: 1, heightMm: 0.15, emitterZMm: 0.14 };
 
@@ -92,5 +92,44 @@ describe('packageFitProblems with a cup, layers and a base finish', () => {
   it('a diffuse base needs a plain reflectance', () => {
     expect(packageFitProblems(chip, flatFill, cup, { kind: 'metal', finish: 'diffuse' })[0].path).toBe('baseFinish');
     expect(packageFitProblems(chip, flatFill, cup, { kind: 'reflectance', finish: 'diffuse' })).toEqual([]);
+  });
+});
+
+describe('phosphorFitProblems(chip, encapsulant, body, phosphor)', () => {
+  const cup = { kind: 'cup' as const, floorRadiusMm: 1.3, topRadiusMm: 1.5, depthMm: 0.8 };
+  const flat = { kind: 'flat' as const };
+  const fill = { shape: 'flat' as const, radiusMm: 1, heightMm: 1 };
+  const dome = { shape: 'dome' as const, radiusMm: 2.5, heightMm: 2.5 };
+
+  it('the dispersed region fits any package with an encapsulant; none fits without one', () => {
+    expect(phosphorFitProblems(chip, dome, flat, { region: 'encapsulant' })).toEqual([]);
+    expect(phosphorFitProblems(chip, { ...dome, shape: 'none' }, flat, { region: 'encapsulant' })[0].path).toBe('phosphor.region');
+  });
+
+  it('a remote plate in a flat-filled cup must leave the chip below it: T < depth − H = 0.65 mm', () => {
+    expect(phosphorFitProblems(chip, fill, cup, { region: 'remote', thicknessMm: 0.6 })).toEqual([]);
+    const [p] = phosphorFitProblems(chip, fill, cup, { region: 'remote', thicknessMm: 0.7 });
+    expect(p.path).toBe('phosphor.thicknessMm');
+    expect(p.message).toMatch(/below 0\.649 mm for a remote layer here \(a plate at the top of the cup fill, above the chip\)/);
+  });
+
+  it('a floor layer must be thinner than the chip (H = 0.15 mm), and needs a cup or a cylinder', () => {
+    expect(phosphorFitProblems(chip, fill, cup, { region: 'floor', thicknessMm: 0.1 })).toEqual([]);
+    expect(phosphorFitProblems(chip, fill, cup, { region: 'floor', thicknessMm: 0.15 })[0].message).toMatch(/below 0\.149 mm for a floor layer/);
+    expect(phosphorFitProblems(chip, dome, flat, { region: 'floor', thicknessMm: 0.1 })[0].path).toBe('phosphor.region');
+  });
+
+  it('a conformal layer keeps the coated chip on the cup floor: half-diagonal (0.5 + T)·√2 < 1.3 mm gives T < 0.419 mm', () => {
+    expect(phosphorFitProblems(chip, fill, cup, { region: 'conformal', thicknessMm: 0.4 })).toEqual([]);
+    expect(phosphorFitProblems(chip, fill, cup, { region: 'conformal', thicknessMm: 0.45 })[0].message).toMatch(/below 0\.419 mm/);
+  });
+
+  it('a remote shell under the dome must be thinner than the dome and clear of the chip', () => {
+    expect(phosphorFitProblems(chip, dome, flat, { region: 'remote', thicknessMm: 1 })).toEqual([]);
+    expect(phosphorFitProblems(chip, dome, flat, { region: 'remote', thicknessMm: 2.4 })[0].path).toBe('phosphor.thicknessMm');
+  });
+
+  it('a layer region needs its thickness', () => {
+    expect(phosphorFitProblems(chip, dome, flat, { region: 'conformal' })[0].message).toMatch(/thickness is needed/);
   });
 });
