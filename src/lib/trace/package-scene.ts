@@ -48,7 +48,7 @@ export function packageScene(pkg: TracePackage): SceneDescription {
   if (!bare) {
     media.push({
       name: ENCAPSULANT, role: 'encapsulant', n: enc.n, absorptionPerMm: enc.absorptionPerMm,
-      ...(ph ? { phosphor: { coefficients: ph.coefficients, emission: ph.emission, quantumYield: ph.quantumYield } } : {})
+      ...(ph ? { phosphor: { coefficients: ph.coefficients, emission: ph.emission, quantumYield: ph.quantumYield, ...(ph.mixedWith?.length ? { mixedWith: ph.mixedWith } : {}) } } : {})
     });
   }
   if (cup) {

@@ -1,0 +1,185 @@
+/**
+ * The phosphor load(s) that reach a target colour.
+ * - One phosphor: the weight percent whose light has the target CCT (CCT falls as the load rises).
+ * - Two phosphors (a yellow or green one and a red one): the pair of weight percents whose light has the
+ *   target CCT and the target Duv (0: on the Planckian locus). Nested one-dimensional searches: for a
+ *   red load r, the main load y*(r) that meets the CCT (its isotherm); then r such that Duv(y*(r), r)
+ *   meets the target. Along the isotherm, red light pulls the chromaticity below the locus, so Duv
+ *   falls as r rises; each inner search starts from the last one's answer.
+ * Every evaluation traces with the same rays and seed (common random numbers), so two trials differ
+ * by the loads, not by fresh noise, and the monotone searches (monotone-root.ts) see a nearly smooth
+ * function. A target out of reach is a RangeError saying which limit stops it and where.
+ */
+import type { PhosphorSummary } from '../trace/phosphor-summary';
+import { MAX_TOTAL_WEIGHT_PERCENT } from './phosphor-mix';
+import { monotoneRoot, type MonotoneRoot } from './monotone-root';
+
+/** Traces the package with these loads (wt%, one per phosphor) — always the same rays and seed. */
+export type EvaluateLoads = (loads: readonly number[]) => Promise<PhosphorSummary>;
+
+export interface ColourTarget {
+  cctK: number;
+  /** Target Duv for a pair (default 0, the Planckian locus); ignored for one phosphor. */
+  duv?: number;
+}
+
+export interface LoadTrial {
+  loads: number[];
+  cctK: number | null;
+  duv: number | null;
+}
+
+export interface LoadsFound {
+  /** Weight percent of each phosphor, in the order given. */
+  loads: number[];
+  summary: PhosphorSummary;
+  trials: LoadTrial[];
+  /** Within the tolerances (CCT, and Duv for a pair). */
+  converged: boolean;
+}
+
+/** Tolerances and limits of the searches. */
+export const TARGET_SEARCH = {
+  /** CCT tolerance, K (or the trace's σ(CCT) when larger). */
+  toleranceK: 15,
+  /** Duv tolerance (or σ(Duv) when larger): about a quarter of a 4-step ellipse's size (common practice). */
+  toleranceDuv: 0.001,
+  minLoadPercent: 0.02,
+  firstLoadPercent: 8,
+  firstRedPercent: 0.5,
+  maxEvaluations: 48,
+  innerEvaluations: 12
+} as const;
+
+/** Residual "CCT − target" of a trace, ±Infinity beyond the locus' range (bluish: too little phosphor). */
+function cctResidual(s: PhosphorSummary, targetK: number): number {
+  const c = s.color;
+  if (c?.cctK != null) return c.cctK - targetK;
+  return c && c.x < 0.3 ? Infinity : -Infinity;
+}
+
+const fmtLoad = (w: number) => `${w.toFixed(2)} wt%`;
+
+/**
+ * @param evaluate traces at the given loads (one entry per phosphor: [main] or [main, red])
+ * @param names the phosphors' names, for messages
+ * @param onTrial called after each trace with the number of trials so far
+ * @throws RangeError when the target is out of reach, naming why
+ */
+export async function loadsForTarget(
+  evaluate: EvaluateLoads,
+  target: ColourTarget,
+  names: readonly string[],
+  onTrial: (trials: number) => void = () => {}
+): Promise<LoadsFound> {
+  const pair = names.length === 2;
+  const T = TARGET_SEARCH;
+  const trials: LoadTrial[] = [];
+  const cache = new Map<string, PhosphorSummary>();
+  const trace = async (loads: number[]): Promise<PhosphorSummary> => {
+    const key = loads.map((w) => w.toPrecision(12)).join(',');
+    const hit = cache.get(key);
+    if (hit) return hit;
+    if (trials.length >= T.maxEvaluations) throw new SearchBudget();
+    const s = await evaluate(loads);
+    cache.set(key, s);
+    trials.push({ loads: [...loads], cctK: s.color?.cctK ?? null, duv: s.color?.duv ?? null });
+    onTrial(trials.length);
+    return s;
+  };
+  let tolK: number = T.toleranceK;
+  const tolDuv = (s: PhosphorSummary | undefined) => Math.max(T.toleranceDuv, s?.color?.sigma.duv ?? 0);
+  const targetDuv = target.duv ?? 0;
+
+  // The main load for the CCT at a fixed red load (the isotherm), warm-started
+  let mainStart: number = T.firstLoadPercent;
+  const mainFor = async (red: number): Promise<{ root: MonotoneRoot; summary: PhosphorSummary }> => {
+    const hi = MAX_TOTAL_WEIGHT_PERCENT - red;
+    const root = await monotoneRoot(
+      async (y) => {
+        const s = await trace(pair ? [y, red] : [y]);
+        tolK = Math.max(T.toleranceK, s.color?.sigma.cctK ?? 0);
+        return cctResidual(s, target.cctK);
+      },
+      { lo: T.minLoadPercent, hi, start: Math.min(mainStart, hi), minStep: 0.05, tolerance: tolK, xTolerance: 1e-3, maxEvaluations: T.innerEvaluations, increasing: false }
+    );
+    const summary = await trace(pair ? [root.x, red] : [root.x]);
+    if (root.status === 'converged' || root.status === 'not converged') mainStart = root.x;
+    return { root, summary };
+  };
+
+  const cctOf = (s: PhosphorSummary) => (s.color?.cctK != null ? `${s.color.cctK.toFixed(0)} K` : 'no CCT (too far from the locus)');
+  const unreachableMain = (root: MonotoneRoot, s: PhosphorSummary, red: number): RangeError => {
+    const withRed = red > 0 ? ` with ${fmtLoad(red)} of ${names[1]}` : '';
+    return root.status === 'below'
+      ? new RangeError(`target CCT ${target.cctK} K is out of reach: even ${fmtLoad(root.x)} of ${names[0]}${withRed} gives ${cctOf(s)}, below the target`)
+      : new RangeError(`target CCT ${target.cctK} K is out of reach: ${fmtLoad(root.x)} of ${names[0]}${withRed} (the most allowed) still gives ${cctOf(s)}`);
+  };
+
+  try {
+    const first = await mainFor(0);
+    if (first.root.status === 'below' || first.root.status === 'above') throw unreachableMain(first.root, first.summary, 0);
+    if (!pair) {
+      const ok = first.root.status === 'converged';
+      return { loads: [first.root.x], summary: first.summary, trials, converged: ok };
+    }
+    // Duv along the isotherm against the red load
+    const duvAt0 = first.summary.color?.duv ?? null;
+    if (duvAt0 === null) throw new RangeError(`the trace at ${target.cctK} K has no Duv`);
+    if (duvAt0 < targetDuv - tolDuv(first.summary)) {
+      throw new RangeError(
+        `target Duv ${targetDuv} is out of reach: ${names[0]} alone gives Duv ${duvAt0.toFixed(4)} at ${target.cctK} K, already below it, and ${names[1]} only lowers Duv — choose a greener main phosphor or a lower target Duv`
+      );
+    }
+    let found = first;
+    let foundRed = 0;
+    const outer = await monotoneRoot(
+      async (red) => {
+        if (red === 0) return duvAt0 - targetDuv;
+        const m = await mainFor(red);
+        if (m.root.status === 'below') return -Infinity; // so much red that no main load is warm enough
+        if (m.root.status === 'above') return Infinity;
+        const d = m.summary.color?.duv;
+        if (d == null) return -Infinity;
+        if (Math.abs(d - targetDuv) < Math.abs((found.summary.color?.duv ?? Infinity) - targetDuv)) {
+          found = m;
+          foundRed = red;
+        }
+        return d - targetDuv;
+      },
+      { lo: 0, hi: MAX_TOTAL_WEIGHT_PERCENT / 2, start: T.firstRedPercent, minStep: 0.05, tolerance: tolDuv(first.summary), xTolerance: 1e-3, maxEvaluations: 10, increasing: false }
+    );
+    if (outer.status === 'above') {
+      throw new RangeError(`target Duv ${targetDuv} is out of reach: up to ${fmtLoad(outer.x)} of ${names[1]} the Duv at ${target.cctK} K stays above it`);
+    }
+    const ok = outer.status === 'converged' && found.root.status === 'converged';
+    return { loads: [found.root.x, foundRed], summary: found.summary, trials, converged: ok };
+  } catch (error) {
+    if (!(error instanceof SearchBudget)) throw error;
+    throw new RangeError(`the search did not settle within ${T.maxEvaluations} traces; try more rays (less noise) or a target nearer the phosphors' reach`);
+  }
+}
+
+/** Thrown inside the search when its trace budget is spent. */
+class SearchBudget extends Error {}
+
+/** What a phosphor load costs against the same package without phosphor. */
+export interface LoadCost {
+  /** 1 − photons out with phosphor / photons out without. */
+  photonCost: number;
+  /** 1 − watts out with phosphor / watts out without. */
+  energyCost: number;
+  /** Lumens per watt of chip light: LER × watts out / watts of chip light. */
+  lumensPerWattOfChip: number | null;
+}
+
+/**
+ * @param clearEfficiency escaped / launched of the package without phosphor (photons = watts there: no conversion)
+ */
+export function loadCost(s: PhosphorSummary, clearEfficiency: number): LoadCost {
+  return {
+    photonCost: clearEfficiency > 0 ? 1 - s.photonEfficiency / clearEfficiency : 0,
+    energyCost: clearEfficiency > 0 ? 1 - s.energyEfficiency / clearEfficiency : 0,
+    lumensPerWattOfChip: s.color ? s.color.lerLmPerW * s.energyEfficiency : null
+  };
+}
