@@ -14,8 +14,8 @@ export interface MonotoneRootOptions {
   start: number;
   /** Smallest step away from the start (also the step off `lo` when the start is lo = 0). */
   minStep: number;
-  /** Done when |f| ≤ tolerance. */
-  tolerance: number;
+  /** Done when |f(x)| ≤ tolerance, or ≤ tolerance(x) (read after f(x): a Monte Carlo trial's own σ). */
+  tolerance: number | ((x: number) => number);
   /** Done (not converged) when the bracket is narrower than this. */
   xTolerance: number;
   maxEvaluations: number;
@@ -46,7 +46,8 @@ export async function monotoneRoot(f: (x: number) => Promise<number>, o: Monoton
     if (Math.abs(gg) < Math.abs(best.gx)) best = { x: xx, gx: gg };
   };
   const sign = (v: number) => (o.increasing ? v : -v);
-  if (Math.abs(gx) <= o.tolerance) return { status: 'converged', x, fx: sign(gx), evaluations };
+  const within = (xx: number, gg: number) => Math.abs(gg) <= (typeof o.tolerance === 'number' ? o.tolerance : o.tolerance(xx));
+  if (within(x, gx)) return { status: 'converged', x, fx: sign(gx), evaluations };
   // Bracket: step away from the start, doubling, until g changes sign or the range ends
   let a: number, ga: number, b: number, gb: number;
   if (gx < 0) {
@@ -56,7 +57,7 @@ export async function monotoneRoot(f: (x: number) => Promise<number>, o: Monoton
       const next = Math.min(o.hi, Math.max(2 * a, a + o.minStep));
       const gn = await g(next);
       keep(next, gn);
-      if (Math.abs(gn) <= o.tolerance) return { status: 'converged', x: next, fx: sign(gn), evaluations };
+      if (within(next, gn)) return { status: 'converged', x: next, fx: sign(gn), evaluations };
       if (gn > 0) { b = next; gb = gn; break; }
       a = next; ga = gn;
       if (evaluations >= o.maxEvaluations) return { status: 'not converged', x: best.x, fx: sign(best.gx), evaluations };
@@ -68,7 +69,7 @@ export async function monotoneRoot(f: (x: number) => Promise<number>, o: Monoton
       const next = b / 2 < o.lo + o.minStep ? o.lo : b / 2;
       const gn = await g(next);
       keep(next, gn);
-      if (Math.abs(gn) <= o.tolerance) return { status: 'converged', x: next, fx: sign(gn), evaluations };
+      if (within(next, gn)) return { status: 'converged', x: next, fx: sign(gn), evaluations };
       if (gn < 0) { a = next; ga = gn; break; }
       b = next; gb = gn;
       if (evaluations >= o.maxEvaluations) return { status: 'not converged', x: best.x, fx: sign(best.gx), evaluations };
@@ -82,7 +83,7 @@ export async function monotoneRoot(f: (x: number) => Promise<number>, o: Monoton
     if (!(m > a && m < b)) m = 0.5 * (a + b);
     const gm = await g(m);
     keep(m, gm);
-    if (Math.abs(gm) <= o.tolerance) return { status: 'converged', x: m, fx: sign(gm), evaluations };
+    if (within(m, gm)) return { status: 'converged', x: m, fx: sign(gm), evaluations };
     if (gm < 0) {
       a = m; ga = gm;
       if (side === -1) gb /= 2;

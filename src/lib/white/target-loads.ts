@@ -76,8 +76,9 @@ export async function loadsForTarget(
   const T = TARGET_SEARCH;
   const trials: LoadTrial[] = [];
   const cache = new Map<string, PhosphorSummary>();
+  const keyOf = (loads: readonly number[]) => loads.map((w) => w.toPrecision(12)).join(',');
   const trace = async (loads: number[]): Promise<PhosphorSummary> => {
-    const key = loads.map((w) => w.toPrecision(12)).join(',');
+    const key = keyOf(loads);
     const hit = cache.get(key);
     if (hit) return hit;
     if (trials.length >= T.maxEvaluations) throw new SearchBudget();
@@ -87,7 +88,7 @@ export async function loadsForTarget(
     onTrial(trials.length);
     return s;
   };
-  let tolK: number = T.toleranceK;
+  const tolK = (s: PhosphorSummary | undefined) => Math.max(T.toleranceK, s?.color?.sigma.cctK ?? 0);
   const tolDuv = (s: PhosphorSummary | undefined) => Math.max(T.toleranceDuv, s?.color?.sigma.duv ?? 0);
   const targetDuv = target.duv ?? 0;
 
@@ -95,13 +96,11 @@ export async function loadsForTarget(
   let mainStart: number = T.firstLoadPercent;
   const mainFor = async (red: number): Promise<{ root: MonotoneRoot; summary: PhosphorSummary }> => {
     const hi = MAX_TOTAL_WEIGHT_PERCENT - red;
+    const at = (y: number) => (pair ? [y, red] : [y]);
     const root = await monotoneRoot(
-      async (y) => {
-        const s = await trace(pair ? [y, red] : [y]);
-        tolK = Math.max(T.toleranceK, s.color?.sigma.cctK ?? 0);
-        return cctResidual(s, target.cctK);
-      },
-      { lo: T.minLoadPercent, hi, start: Math.min(mainStart, hi), minStep: 0.05, tolerance: tolK, xTolerance: 1e-3, maxEvaluations: T.innerEvaluations, increasing: false }
+      async (y) => cctResidual(await trace(at(y)), target.cctK),
+      // Each trial is judged against its own σ(CCT): no finer than its noise (the trace is cached)
+      { lo: T.minLoadPercent, hi, start: Math.min(mainStart, hi), minStep: 0.05, tolerance: (y) => tolK(cache.get(keyOf(at(y)))), xTolerance: 1e-3, maxEvaluations: T.innerEvaluations, increasing: false }
     );
     const summary = await trace(pair ? [root.x, red] : [root.x]);
     if (root.status === 'converged' || root.status === 'not converged') mainStart = root.x;
@@ -109,6 +108,10 @@ export async function loadsForTarget(
   };
 
   const cctOf = (s: PhosphorSummary) => (s.color?.cctK != null ? `${s.color.cctK.toFixed(0)} K` : 'no CCT (too far from the locus)');
+  const offLocus = (s: PhosphorSummary, name: string): RangeError =>
+    new RangeError(
+      `target CCT ${target.cctK} K is out of reach for ${name} alone: its light crosses that isotherm too far from the Planckian locus (Duv ${s.color?.duv?.toFixed(3) ?? '—'}, beyond ±0.05 no CCT is defined) — mix in a red phosphor`
+    );
   const unreachableMain = (root: MonotoneRoot, s: PhosphorSummary, red: number): RangeError => {
     const withRed = red > 0 ? ` with ${fmtLoad(red)} of ${names[1]}` : '';
     return root.status === 'below'
@@ -116,41 +119,52 @@ export async function loadsForTarget(
       : new RangeError(`target CCT ${target.cctK} K is out of reach: ${fmtLoad(root.x)} of ${names[0]}${withRed} (the most allowed) still gives ${cctOf(s)}`);
   };
 
+  /** Duv − target of an inner result, ±Infinity when it did not reach the isotherm near the locus. */
+  const duvResidual = (m: { root: MonotoneRoot; summary: PhosphorSummary }): number => {
+    if (m.root.status === 'below') return -Infinity; // so much red that no main load is cool enough
+    if (m.root.status === 'above') return Infinity; // the CCT stays above the target: more red needed
+    const c = m.summary.color;
+    if (c?.cctK == null || c.duv == null) return (c?.duv ?? 1) > 0 ? Infinity : -Infinity;
+    return c.duv - targetDuv;
+  };
+
   try {
     const first = await mainFor(0);
-    if (first.root.status === 'below' || first.root.status === 'above') throw unreachableMain(first.root, first.summary, 0);
+    if (first.root.status === 'below' || (!pair && first.root.status === 'above')) throw unreachableMain(first.root, first.summary, 0);
     if (!pair) {
-      const ok = first.root.status === 'converged';
-      return { loads: [first.root.x], summary: first.summary, trials, converged: ok };
+      if (first.summary.color?.cctK == null) throw offLocus(first.summary, names[0]);
+      return { loads: [first.root.x], summary: first.summary, trials, converged: first.root.status === 'converged' };
     }
-    // Duv along the isotherm against the red load
-    const duvAt0 = first.summary.color?.duv ?? null;
-    if (duvAt0 === null) throw new RangeError(`the trace at ${target.cctK} K has no Duv`);
-    if (duvAt0 < targetDuv - tolDuv(first.summary)) {
+    // Duv along the isotherm against the red load; the main phosphor alone may not reach the isotherm at all
+    const at0 = duvResidual(first);
+    if (at0 < -tolDuv(first.summary)) {
       throw new RangeError(
-        `target Duv ${targetDuv} is out of reach: ${names[0]} alone gives Duv ${duvAt0.toFixed(4)} at ${target.cctK} K, already below it, and ${names[1]} only lowers Duv — choose a greener main phosphor or a lower target Duv`
+        `target Duv ${targetDuv} is out of reach: ${names[0]} alone gives Duv ${first.summary.color!.duv!.toFixed(4)} at ${target.cctK} K, already below it, and ${names[1]} only lowers Duv — choose a greener main phosphor or a lower target Duv`
       );
     }
     let found = first;
     let foundRed = 0;
+    let foundGap = Math.abs(at0);
+    const duvTol = Number.isFinite(at0) ? tolDuv(first.summary) : TARGET_SEARCH.toleranceDuv;
     const outer = await monotoneRoot(
       async (red) => {
-        if (red === 0) return duvAt0 - targetDuv;
+        if (red === 0) return at0;
         const m = await mainFor(red);
-        if (m.root.status === 'below') return -Infinity; // so much red that no main load is warm enough
-        if (m.root.status === 'above') return Infinity;
-        const d = m.summary.color?.duv;
-        if (d == null) return -Infinity;
-        if (Math.abs(d - targetDuv) < Math.abs((found.summary.color?.duv ?? Infinity) - targetDuv)) {
+        const r = duvResidual(m);
+        if (Math.abs(r) < foundGap) {
           found = m;
           foundRed = red;
+          foundGap = Math.abs(r);
         }
-        return d - targetDuv;
+        return r;
       },
-      { lo: 0, hi: MAX_TOTAL_WEIGHT_PERCENT / 2, start: T.firstRedPercent, minStep: 0.05, tolerance: tolDuv(first.summary), xTolerance: 1e-3, maxEvaluations: 10, increasing: false }
+      { lo: 0, hi: MAX_TOTAL_WEIGHT_PERCENT / 2, start: T.firstRedPercent, minStep: 0.05, tolerance: duvTol, xTolerance: 1e-3, maxEvaluations: 10, increasing: false }
     );
     if (outer.status === 'above') {
-      throw new RangeError(`target Duv ${targetDuv} is out of reach: up to ${fmtLoad(outer.x)} of ${names[1]} the Duv at ${target.cctK} K stays above it`);
+      throw new RangeError(`target Duv ${targetDuv} is out of reach: up to ${fmtLoad(outer.x)} of ${names[1]} the light at ${target.cctK} K stays above it`);
+    }
+    if (!Number.isFinite(foundGap)) {
+      throw new RangeError(`target ${target.cctK} K at Duv ${targetDuv} is out of reach: no pair of loads of ${names[0]} and ${names[1]} tried meets the isotherm near the locus`);
     }
     const ok = outer.status === 'converged' && found.root.status === 'converged';
     return { loads: [found.root.x, foundRed], summary: found.summary, trials, converged: ok };
