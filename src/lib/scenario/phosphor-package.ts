@@ -1,22 +1,34 @@
 /**
- * A scenario's optional phosphor block (version 4) as the tracer's phosphor setting, and the package
- * with it: the library phosphor by particles (Mie) at the scenario's load, size and quantum yield,
- * drawn from the scenario's chip emission.
+ * A scenario's optional phosphor block (version 4) as the tracer's phosphor, and the package with it:
+ * the library (or carried user) phosphor by particles (Mie) at the scenario's load, size and quantum
+ * yield, with the red phosphor mixed in when the block has one, drawn from the scenario's chip emission.
  */
 import { chipSpectrumRows, libraryPhosphor, withPhosphor, type PhosphorSetting } from '../trace/white-light';
 import type { TracePackage } from '../trace/package-spec';
+import { withMixture } from '../white/phosphor-mix';
+import { scenarioMixture } from '../white/scenario-mixture';
 import { resolveScenario, toTracePackage, type ResolvedScenario } from './resolve';
 import type { Scenario } from './schema';
 
-/** The scenario's phosphor setting, or null for a clear encapsulant. @throws RangeError for an unknown phosphor id */
+/**
+ * The scenario's main phosphor as a one-phosphor setting (a library phosphor), or null for a clear
+ * encapsulant. A red phosphor and a user phosphor are left to toWhitePackage.
+ * @throws RangeError for an unknown phosphor id
+ */
 export function phosphorSettingOf(scenario: Scenario): Extract<PhosphorSetting, { kind: 'particles' }> | null {
   const p = scenario.phosphor;
   if (!p) return null;
   return { kind: 'particles', phosphor: libraryPhosphor(p.id, 'Phosphor'), weightPercent: p.weightPercent, diameterUm: p.diameterUm, quantumYield: p.quantumYield };
 }
 
-/** The traced package with the scenario's phosphor (or `setting` instead), or the clear package when there is none. */
-export function toWhitePackage(scenario: Scenario, resolved: ResolvedScenario = resolveScenario(scenario), setting: PhosphorSetting | null = phosphorSettingOf(scenario)): TracePackage {
+/**
+ * The traced package with the scenario's phosphor block (main phosphor, user phosphor, red mixed in), or
+ * with `setting` instead when one is given (the command line's phosphor options), or the clear package.
+ */
+export function toWhitePackage(scenario: Scenario, resolved: ResolvedScenario = resolveScenario(scenario), setting?: PhosphorSetting | null): TracePackage {
   const pkg = toTracePackage(scenario, resolved);
-  return setting ? withPhosphor(pkg, setting, chipSpectrumRows(scenario.emission)) : pkg;
+  const chip = chipSpectrumRows(scenario.emission);
+  if (setting) return withPhosphor(pkg, setting, chip);
+  const mix = setting === null ? null : scenarioMixture(scenario.phosphor);
+  return mix ? withMixture(pkg, mix, chip) : pkg;
 }
