@@ -110,7 +110,7 @@ export async function loadsForTarget(
   const cctOf = (s: PhosphorSummary) => (s.color?.cctK != null ? `${s.color.cctK.toFixed(0)} K` : 'no CCT (too far from the locus)');
   const offLocus = (s: PhosphorSummary, name: string): RangeError =>
     new RangeError(
-      `target CCT ${target.cctK} K is out of reach for ${name} alone: its light crosses that isotherm too far from the Planckian locus (Duv ${s.color?.duv?.toFixed(3) ?? '—'}, beyond ±0.05 no CCT is defined) — mix in a red phosphor`
+      `target CCT ${target.cctK} K is out of reach for ${name} alone: its light meets that isotherm too far from the Planckian locus, where no CCT is defined (|Duv| > 0.05; nearest trial ${s.color?.cctK != null ? `${s.color.cctK.toFixed(0)} K` : 'no CCT'}, Duv ${s.color?.duv?.toFixed(3) ?? '—'}) — mix in a red phosphor`
     );
   const unreachableMain = (root: MonotoneRoot, s: PhosphorSummary, red: number): RangeError => {
     const withRed = red > 0 ? ` with ${fmtLoad(red)} of ${names[1]}` : '';
@@ -132,7 +132,9 @@ export async function loadsForTarget(
     const first = await mainFor(0);
     if (first.root.status === 'below' || (!pair && first.root.status === 'above')) throw unreachableMain(first.root, first.summary, 0);
     if (!pair) {
-      if (first.summary.color?.cctK == null) throw offLocus(first.summary, names[0]);
+      const c = first.summary.color;
+      // Not converged and far off: the trials straddle the isotherm where the light has no CCT (|Duv| > 0.05)
+      if (c?.cctK == null || (first.root.status !== 'converged' && Math.abs(c.cctK - target.cctK) > 3 * tolK(first.summary))) throw offLocus(first.summary, names[0]);
       return { loads: [first.root.x], summary: first.summary, trials, converged: first.root.status === 'converged' };
     }
     // Duv along the isotherm against the red load; the main phosphor alone may not reach the isotherm at all
