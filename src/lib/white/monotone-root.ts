@@ -1,6 +1,6 @@
 /**
  * The root of a monotone function of one variable on [lo, hi] from a warm start: bracket it by steps
- * that double away from the start, then narrow the bracket by Illinois regula falsi, falling back to
+ * that grow away from the start (by `growth`, squared at each step, at most doubling), then narrow the bracket by Illinois regula falsi, falling back to
  * bisection when a trial has no finite value (D. Dowell, P. Jarratt, BIT 11, 168 (1971); W. H. Press
  * et al., Numerical Recipes, 3rd ed., §9.2–9.3). Meant for Monte Carlo functions evaluated with common
  * random numbers: there the noise of nearby trials is correlated, so the function is monotone and
@@ -14,6 +14,8 @@ export interface MonotoneRootOptions {
   start: number;
   /** Smallest step away from the start (also the step off `lo` when the start is lo = 0). */
   minStep: number;
+  /** First bracketing factor (> 1; default 2): a warm start close to the root steps by less; it squares at each further step. */
+  growth?: number;
   /** Done when |f(x)| ≤ tolerance, or ≤ tolerance(x) (read after f(x): a Monte Carlo trial's own σ). */
   tolerance: number | ((x: number) => number);
   /** Done (not converged) when the bracket is narrower than this. */
@@ -50,11 +52,13 @@ export async function monotoneRoot(f: (x: number) => Promise<number>, o: Monoton
   if (within(x, gx)) return { status: 'converged', x, fx: sign(gx), evaluations };
   // Bracket: step away from the start, doubling, until g changes sign or the range ends
   let a: number, ga: number, b: number, gb: number;
+  let factor = Math.max(1.01, o.growth ?? 2);
   if (gx < 0) {
     a = x; ga = gx;
     for (;;) {
       if (a >= o.hi) return { status: 'above', x: a, fx: sign(ga), evaluations };
-      const next = Math.min(o.hi, Math.max(2 * a, a + o.minStep));
+      const next = Math.min(o.hi, Math.max(factor * a, a + o.minStep));
+      factor = Math.min(2, factor * factor);
       const gn = await g(next);
       keep(next, gn);
       if (within(next, gn)) return { status: 'converged', x: next, fx: sign(gn), evaluations };
@@ -66,7 +70,8 @@ export async function monotoneRoot(f: (x: number) => Promise<number>, o: Monoton
     b = x; gb = gx;
     for (;;) {
       if (b <= o.lo) return { status: 'below', x: b, fx: sign(gb), evaluations };
-      const next = b / 2 < o.lo + o.minStep ? o.lo : b / 2;
+      const next = b / factor < o.lo + o.minStep ? o.lo : b / factor;
+      factor = Math.min(2, factor * factor);
       const gn = await g(next);
       keep(next, gn);
       if (within(next, gn)) return { status: 'converged', x: next, fx: sign(gn), evaluations };
@@ -94,5 +99,7 @@ export async function monotoneRoot(f: (x: number) => Promise<number>, o: Monoton
       side = 1;
     }
   }
+  // Not settled: the best trial, or where the bracket closed when no trial had a finite value
+  if (!Number.isFinite(best.gx)) return { status: 'not converged', x: 0.5 * (a + b), fx: sign(best.gx), evaluations };
   return { status: 'not converged', x: best.x, fx: sign(best.gx), evaluations };
 }

@@ -10,6 +10,7 @@
  * by the loads, not by fresh noise, and the monotone searches (monotone-root.ts) see a nearly smooth
  * function. A target out of reach is a RangeError saying which limit stops it and where.
  */
+import { planckianUv, type PlanckianPoint } from '../color/index';
 import type { PhosphorSummary } from '../trace/phosphor-summary';
 import { MAX_TOTAL_WEIGHT_PERCENT } from './phosphor-mix';
 import { monotoneRoot, type MonotoneRoot } from './monotone-root';
@@ -47,15 +48,22 @@ export const TARGET_SEARCH = {
   minLoadPercent: 0.02,
   firstLoadPercent: 8,
   firstRedPercent: 0.5,
-  maxEvaluations: 48,
+  maxEvaluations: 64,
   innerEvaluations: 12
 } as const;
 
-/** Residual "CCT − target" of a trace, ±Infinity beyond the locus' range (bluish: too little phosphor). */
-function cctResidual(s: PhosphorSummary, targetK: number): number {
+/**
+ * Residual "CCT − target" of a trace. Where the light has no CCT (more than 0.05 from the locus), the
+ * side of the target's isotherm it lies on: the isotherm is the line through the Planckian point at the
+ * target, normal to the locus in CIE 1960 u, v (CIE 015:2018 §9.5); a point ahead of it along the
+ * locus' tangent dP/dT lies on the hotter side (+Infinity), a point behind on the cooler (−Infinity).
+ */
+function cctResidual(s: PhosphorSummary, targetK: number, isotherm: PlanckianPoint): number {
   const c = s.color;
   if (c?.cctK != null) return c.cctK - targetK;
-  return c && c.x < 0.3 ? Infinity : -Infinity;
+  if (!c) return Infinity;
+  const along = (c.uPrime - isotherm.u) * isotherm.duDT + ((2 * c.vPrime) / 3 - isotherm.v) * isotherm.dvDT;
+  return along > 0 ? Infinity : -Infinity;
 }
 
 const fmtLoad = (w: number) => `${w.toFixed(2)} wt%`;
@@ -91,26 +99,38 @@ export async function loadsForTarget(
   const tolK = (s: PhosphorSummary | undefined) => Math.max(T.toleranceK, s?.color?.sigma.cctK ?? 0);
   const tolDuv = (s: PhosphorSummary | undefined) => Math.max(T.toleranceDuv, s?.color?.sigma.duv ?? 0);
   const targetDuv = target.duv ?? 0;
+  const isotherm = planckianUv(target.cctK);
 
-  // The main load for the CCT at a fixed red load (the isotherm), warm-started
-  let mainStart: number = T.firstLoadPercent;
+  // The main load for the CCT at a fixed red load (the isotherm), warm-started: from the line through
+  // the last two solutions (y against r along the isotherm), or the last one, and then in small steps
+  const solved: { red: number; main: number }[] = [];
+  const mainStartFor = (red: number): number => {
+    if (!solved.length) return T.firstLoadPercent;
+    const [p, q] = solved.slice(-2);
+    if (!q || q.red === p.red) return solved[solved.length - 1].main;
+    const y = q.main + ((red - q.red) * (q.main - p.main)) / (q.red - p.red);
+    // Kept within a factor of two of the last solution: the isotherm is curved, the trials noisy
+    return Number.isFinite(y) ? Math.min(2 * q.main, Math.max(0.5 * q.main, y)) : q.main;
+  };
   const mainFor = async (red: number): Promise<{ root: MonotoneRoot; summary: PhosphorSummary }> => {
     const hi = MAX_TOTAL_WEIGHT_PERCENT - red;
+    const mainStart = mainStartFor(red);
+    const warm = solved.length > 0;
     const at = (y: number) => (pair ? [y, red] : [y]);
     const root = await monotoneRoot(
-      async (y) => cctResidual(await trace(at(y)), target.cctK),
+      async (y) => cctResidual(await trace(at(y)), target.cctK, isotherm),
       // Each trial is judged against its own σ(CCT): no finer than its noise (the trace is cached)
-      { lo: T.minLoadPercent, hi, start: Math.min(mainStart, hi), minStep: 0.05, tolerance: (y) => tolK(cache.get(keyOf(at(y)))), xTolerance: 1e-3, maxEvaluations: T.innerEvaluations, increasing: false }
+      { lo: T.minLoadPercent, hi, start: Math.min(mainStart, hi), minStep: 0.05, growth: warm ? 1.15 : 2, tolerance: (y) => tolK(cache.get(keyOf(at(y)))), xTolerance: 1e-3, maxEvaluations: T.innerEvaluations, increasing: false }
     );
     const summary = await trace(pair ? [root.x, red] : [root.x]);
-    if (root.status === 'converged' || root.status === 'not converged') mainStart = root.x;
+    if (root.status === 'converged') solved.push({ red, main: root.x });
     return { root, summary };
   };
 
   const cctOf = (s: PhosphorSummary) => (s.color?.cctK != null ? `${s.color.cctK.toFixed(0)} K` : 'no CCT (too far from the locus)');
   const offLocus = (s: PhosphorSummary, name: string): RangeError =>
     new RangeError(
-      `target CCT ${target.cctK} K is out of reach for ${name} alone: its light meets that isotherm too far from the Planckian locus, where no CCT is defined (|Duv| > 0.05; nearest trial ${s.color?.cctK != null ? `${s.color.cctK.toFixed(0)} K` : 'no CCT'}, Duv ${s.color?.duv?.toFixed(3) ?? '—'}) — mix in a red phosphor`
+      `target CCT ${target.cctK} K is out of reach for ${name} alone: its light does not come within 0.05 of the Planckian locus near that isotherm, and no CCT is defined beyond that (nearest trial ${s.color?.cctK != null ? `${s.color.cctK.toFixed(0)} K` : 'no CCT'}, Duv ${s.color?.duv?.toFixed(3) ?? '—'}) — mix in a red phosphor`
     );
   const unreachableMain = (root: MonotoneRoot, s: PhosphorSummary, red: number): RangeError => {
     const withRed = red > 0 ? ` with ${fmtLoad(red)} of ${names[1]}` : '';
@@ -124,12 +144,15 @@ export async function loadsForTarget(
     if (m.root.status === 'below') return -Infinity; // so much red that no main load is cool enough
     if (m.root.status === 'above') return Infinity; // the CCT stays above the target: more red needed
     const c = m.summary.color;
-    if (c?.cctK == null || c.duv == null) return (c?.duv ?? 1) > 0 ? Infinity : -Infinity;
+    // Off the isotherm (the inner search did not settle) or off the locus: only the Duv's side counts
+    const onIsotherm = c?.cctK != null && Math.abs(c.cctK - target.cctK) <= 3 * tolK(m.summary);
+    if (!onIsotherm || c?.duv == null) return (c?.duv ?? 1) > targetDuv ? Infinity : -Infinity;
     return c.duv - targetDuv;
   };
 
   try {
     const first = await mainFor(0);
+    if (!pair && first.root.status === 'above' && first.summary.color?.cctK == null) throw offLocus(first.summary, names[0]);
     if (first.root.status === 'below' || (!pair && first.root.status === 'above')) throw unreachableMain(first.root, first.summary, 0);
     if (!pair) {
       const c = first.summary.color;

@@ -49,7 +49,7 @@ describe('loads for a target colour', () => {
   });
 
   it('names why a target is out of reach: a green garnet alone never meets the 4000 K isotherm near the locus', async () => {
-    await expect(loadsForTarget(evaluator([green], 2000, 3), { cctK: 4000 }, ['green garnet'])).rejects.toThrow(/out of reach for green garnet alone: .*too far from the Planckian locus/);
+    await expect(loadsForTarget(evaluator([green], 2000, 3), { cctK: 4000 }, ['green garnet'])).rejects.toThrow(/out of reach for green garnet alone: its light does not come within 0.05 of the Planckian locus/);
   });
 
   it('names why a target is out of reach: a Duv above what the yellow gives alone (red only lowers Duv)', async () => {
