@@ -87,13 +87,18 @@ test('white light: a user phosphor from pasted tables — a bad row refused besi
   await page.getByRole('button', { name: 'Save this phosphor' }).click();
   await expect(page.getByText(/Saved 'Test amber'/)).toBeVisible();
   await expect(page.getByRole('combobox', { name: 'Phosphor', exact: true })).toHaveValue('user-test-amber');
-  await expect(page.getByTestId('cct').or(page.getByText(/Tracing/))).toBeVisible({ timeout: 60_000 });
+  await expect(page.getByText(/^Traced 40,000 rays/)).toBeVisible({ timeout: 90_000 });
+  await expect(page.locator('body')).not.toContainText('NaN');
+  await page.setViewportSize({ width: 1366, height: 900 });
+  await page.screenshot({ path: 'test-results/white-user-1366.png' });
+  await page.setViewportSize({ width: 390, height: 844 });
+  await page.screenshot({ path: 'test-results/white-user-phone.png', fullPage: true });
   // The link carries the phosphor in full: a fresh browser with no stored phosphors opens it
   const url = page.url();
   const other = await context.browser()!.newContext();
   const fresh = await other.newPage();
   await fresh.goto(url);
   await expect(fresh.getByRole('combobox', { name: 'Phosphor', exact: true })).toHaveValue('user-test-amber');
-  await expect(fresh.getByRole('option', { name: 'Test amber' })).toHaveCount(1);
+  await expect(fresh.getByRole('combobox', { name: 'Phosphor', exact: true }).getByRole('option', { name: 'Test amber' })).toHaveCount(1);
   await other.close();
 });
