@@ -35,4 +35,4 @@ export {
   type ResolvedBase,
   type ResolvedScenario
 } from './resolve';
-export { phosphorSettingOf, toWhitePackage } from './phosphor-package';
+export { toWhitePackage } from './phosphor-package';

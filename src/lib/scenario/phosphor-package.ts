@@ -3,23 +3,12 @@
  * the library (or carried user) phosphor by particles (Mie) at the scenario's load, size and quantum
  * yield, with the red phosphor mixed in when the block has one, drawn from the scenario's chip emission.
  */
-import { chipSpectrumRows, libraryPhosphor, withPhosphor, type PhosphorSetting } from '../trace/white-light';
+import { chipSpectrumRows, withPhosphor, type PhosphorSetting } from '../trace/white-light';
 import type { TracePackage } from '../trace/package-spec';
 import { withMixture } from '../white/phosphor-mix';
 import { scenarioMixture } from '../white/scenario-mixture';
 import { resolveScenario, toTracePackage, type ResolvedScenario } from './resolve';
 import type { Scenario } from './schema';
-
-/**
- * The scenario's main phosphor as a one-phosphor setting (a library phosphor), or null for a clear
- * encapsulant. A red phosphor and a user phosphor are left to toWhitePackage.
- * @throws RangeError for an unknown phosphor id
- */
-export function phosphorSettingOf(scenario: Scenario): Extract<PhosphorSetting, { kind: 'particles' }> | null {
-  const p = scenario.phosphor;
-  if (!p) return null;
-  return { kind: 'particles', phosphor: libraryPhosphor(p.id, 'Phosphor'), weightPercent: p.weightPercent, diameterUm: p.diameterUm, quantumYield: p.quantumYield };
-}
 
 /**
  * The traced package with the scenario's phosphor block (main phosphor, user phosphor, red mixed in), or
