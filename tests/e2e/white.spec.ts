@@ -30,7 +30,7 @@ test('white light: colour, charts, bad input beside the field, load for 4000 K',
 
   await page.getByRole('button', { name: 'Find the load', exact: true }).click();
   const answer = page.getByTestId('load-answer');
-  await expect(answer).toContainText(/wt% Yttrium|wt% .+ gives \d{4} ± \d+ K/, { timeout: 150_000 });
+  await expect(answer).toContainText(/wt% .+ gives \d{4} ± \d+ K/, { timeout: 150_000 });
   await expect(answer).toContainText(/\d+\.\d % of the photons and \d+\.\d % of the optical watts/);
   await page.screenshot({ path: 'test-results/white-page-load.png', fullPage: true });
 });
