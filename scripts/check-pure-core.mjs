@@ -7,7 +7,7 @@ import { join } from 'node:path';
 
 const coreRoots = ['src/lib/optics', 'src/lib/trace', 'src/lib/materials', 'src/lib/scenario', 'src/lib/photometry',
   'src/lib/decisions', 'src/lib/export', 'src/lib/sweeps', 'src/lib/materials-user', 'src/lib/variants', 'src/lib/color',
-  'src/lib/scatter', 'src/lib/phosphors', 'src/lib/optic-design', 'src/lib/optic-trace', 'src/lib/runs', 'src/lib/format'];
+  'src/lib/scatter', 'src/lib/phosphors', 'src/lib/optic-design', 'src/lib/optic-trace', 'src/lib/runs', 'src/lib/format', 'src/lib/white'];
 // Chart dataset builders are pure too; chart.ts is the one file that draws (Chart.js and the DOM).
 const pureRoots = [...coreRoots, 'src/lib/charts'];
 const drawingGlue = new Set(['src/lib/charts/chart.ts']);

@@ -9,12 +9,13 @@ import * as variants from './commands/variants';
 import * as color from './commands/color';
 import * as mie from './commands/mie';
 import * as phosphorLoad from './commands/phosphor-load';
+import * as phosphorSweep from './commands/phosphor-sweep';
 import * as compare from './commands/compare';
 import * as optic from './commands/optic';
 
 type Command = { summary: string; help: string; run: (argv: string[]) => Promise<void> | void };
 
-const commands: Record<string, Command> = { escape, stack, dome, material, trace, claim, compare, variants, color, mie, 'phosphor-load': phosphorLoad, optic };
+const commands: Record<string, Command> = { escape, stack, dome, material, trace, claim, compare, variants, color, mie, 'phosphor-load': phosphorLoad, 'phosphor-sweep': phosphorSweep, optic };
 
 function usage(): string {
   const lines = ['outcouple — LED package light extraction from the command line', '', 'Commands:'];

@@ -285,7 +285,7 @@ describe('main(argv) under generated argv', () => {
     await checkAsync(
       'cli command word',
       fc.asyncProperty(fc.oneof(fc.string({ maxLength: 20 }), fc.constantFrom('__proto__', 'constructor', 'toString', 'hasOwnProperty', LONG)), async (word) => {
-        fc.pre(!['escape', 'stack', 'dome', 'material', 'trace', 'claim', 'color', 'mie', 'variants', 'compare', 'optic', 'phosphor-load', 'help', '--help', '-h', ''].includes(word));
+        fc.pre(!['escape', 'stack', 'dome', 'material', 'trace', 'claim', 'color', 'mie', 'variants', 'compare', 'optic', 'phosphor-load', 'phosphor-sweep', 'help', '--help', '-h', ''].includes(word));
         const r = await runMain([word]);
         expect(r.code, `word ${JSON.stringify(word.slice(0, 40))}: ${r.stderr.slice(0, 200)}`).toBe(2);
         expect(r.stderr.startsWith('outcouple: unknown command') && r.stderr.indexOf('\n') === r.stderr.length - 1).toBe(true);

@@ -4,7 +4,7 @@ import { packageScene } from '../../lib/trace/package-scene';
 import { partShares } from '../../lib/trace/part-shares';
 import { traceSync } from '../../lib/trace/trace';
 import { defaultThreads, traceParallel, MAX_THREADS } from '../../lib/trace/node/node-pool';
-import { LIMITS, phosphorSettingOf, toWhitePackage } from '../../lib/scenario';
+import { LIMITS, toWhitePackage } from '../../lib/scenario';
 import { farFieldCsv, lumensPerChipWatt, luminousBinIntensities, packageOpening, traceIes, whiteFluxNote } from '../../lib/export';
 import { CliError } from '../cli-error';
 import { integerOption, numberOption, parseOptions, stringOption, truncate, type OptionSpec } from '../options';
@@ -52,13 +52,13 @@ export async function run(argv: string[]): Promise<void> {
   if (positionals.length) throw new CliError(`trace: unexpected argument '${truncate(positionals[0])}'`);
   const { scenario, resolved } = scenarioFromOptions(values);
   // Phosphor options win over the scenario's phosphor block
-  const setting = phosphorFromOptions(values) ?? phosphorSettingOf(scenario);
+  const setting = phosphorFromOptions(values) ?? undefined;
   const pkg = toWhitePackage(scenario, resolved, setting);
   checkPhosphorFit(pkg);
   const { rays, seed } = scenario.trace;
   const name = scenario.name;
   const threads = integerOption(values, 'threads', 1, MAX_THREADS, defaultThreads());
-  const maxEvents = integerOption(values, 'max-events', LIMITS.maxEvents.min, LIMITS.maxEvents.max, setting ? 10000 : 1000);
+  const maxEvents = integerOption(values, 'max-events', LIMITS.maxEvents.min, LIMITS.maxEvents.max, pkg.phosphor ? 10000 : 1000);
   const iesPath = stringOption(values, 'ies');
   const csvPath = stringOption(values, 'csv');
   const lumensGiven = values.lumens !== undefined;

@@ -35,5 +35,5 @@ export {
   type ResolvedBase,
   type ResolvedScenario
 } from './resolve';
-export { phosphorSettingOf, toWhitePackage } from './phosphor-package';
+export { phosphorPlacementOf, toWhitePackage } from './phosphor-package';
 export { indexRowsOf, scenarioDispersion, withDispersion } from './package-dispersion';

@@ -78,6 +78,8 @@ export const LIMITS = {
   quantumYield: { min: 0, max: 1, unit: '' },
   /** Target correlated colour temperature of a load search. */
   targetCctK: { min: 2000, max: 10000, unit: 'K' },
+  /** Target Duv of a two-phosphor load search (CCT and Duv are defined within ±0.05 of the Planckian locus). */
+  targetDuv: { min: -0.02, max: 0.02, unit: '' },
   /** Peak and FWHM of a Gaussian phosphor emission given on the command line (FWHM down to 0.1 nm for line-like tests). */
   phosphorEmissionFwhmNm: { min: 0.1, max: 500, unit: 'nm' }
 } as const satisfies Record<string, NumberLimit>;

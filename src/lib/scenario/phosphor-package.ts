@@ -1,29 +1,30 @@
 /**
- * A scenario's optional phosphor block (version 4) as the tracer's phosphor setting, and the package
- * with it: the library phosphor by particles (Mie) at the scenario's load, size and quantum yield,
- * drawn from the scenario's chip emission.
+ * A scenario's optional phosphor block (version 4) as the tracer's phosphor, and the package with it:
+ * the library (or carried user) phosphor by particles (Mie) at the scenario's load, size and quantum
+ * yield, with the red phosphor mixed in when the block has one, drawn from the scenario's chip emission.
  */
-import { chipSpectrumRows, libraryPhosphor, withPhosphor, type PhosphorSetting } from '../trace/white-light';
+import { chipSpectrumRows, withPhosphor, type PhosphorPlacement, type PhosphorSetting } from '../trace/white-light';
 import type { TracePackage } from '../trace/package-spec';
 import { withDispersion } from './package-dispersion';
+import { withMixture } from '../white/phosphor-mix';
+import { scenarioMixture } from '../white/scenario-mixture';
 import { resolveScenario, toTracePackage, type ResolvedScenario } from './resolve';
 import type { Scenario } from './schema';
 
-/** The scenario's phosphor setting, or null for a clear encapsulant. @throws RangeError for an unknown phosphor id */
-export function phosphorSettingOf(scenario: Scenario): Extract<PhosphorSetting, { kind: 'particles' }> | null {
-  const p = scenario.phosphor;
-  if (!p) return null;
-  return {
-    kind: 'particles', phosphor: libraryPhosphor(p.id, 'Phosphor'), weightPercent: p.weightPercent, diameterUm: p.diameterUm, quantumYield: p.quantumYield,
-    region: p.region, ...(p.thicknessMm !== undefined ? { thicknessMm: p.thicknessMm } : {})
-  };
+/** The scenario phosphor block's placement: its region and, for a layer, its thickness. */
+export function phosphorPlacementOf(phosphor: NonNullable<Scenario['phosphor']>): PhosphorPlacement {
+  return { region: phosphor.region, ...(phosphor.thicknessMm !== undefined ? { thicknessMm: phosphor.thicknessMm } : {}) };
 }
 
 /**
- * The traced package with the scenario's phosphor (or `setting` instead) and its media's dispersion
- * (each ray sees the indices at its own wavelength), or the clear package when there is none.
+ * The traced package with the scenario's phosphor block (main phosphor, user phosphor, red mixed in, in
+ * its region), or with `setting` instead when one is given (the command line's phosphor options), or the
+ * clear package; with a phosphor, its media's dispersion too (each ray sees the indices at its own wavelength).
  */
-export function toWhitePackage(scenario: Scenario, resolved: ResolvedScenario = resolveScenario(scenario), setting: PhosphorSetting | null = phosphorSettingOf(scenario)): TracePackage {
+export function toWhitePackage(scenario: Scenario, resolved: ResolvedScenario = resolveScenario(scenario), setting?: PhosphorSetting | null): TracePackage {
   const pkg = toTracePackage(scenario, resolved);
-  return setting ? withPhosphor(withDispersion(pkg, scenario, resolved), setting, chipSpectrumRows(scenario.emission)) : pkg;
+  const chip = chipSpectrumRows(scenario.emission);
+  if (setting) return withPhosphor(withDispersion(pkg, scenario, resolved), setting, chip);
+  const mix = setting === null ? null : scenarioMixture(scenario.phosphor);
+  return mix && scenario.phosphor ? withMixture(withDispersion(pkg, scenario, resolved), mix, chip, phosphorPlacementOf(scenario.phosphor)) : pkg;
 }

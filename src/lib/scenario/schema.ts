@@ -11,6 +11,8 @@
 import { z } from 'zod';
 import { findMaterial, indexAt, userMaterialField } from '../materials/index';
 import type { Material } from '../materials/types';
+import { validateUserPhosphor } from '../phosphors/user-phosphor';
+import { findPhosphor } from '../phosphors/index';
 import { designWavelengthNm } from './resolve';
 import { LIMITS, MATERIAL_ID_PATTERN, type NumberLimit, rangeMessage } from './limits';
 import { packageFitProblems, phosphorFitProblems } from './package-fit';
@@ -210,19 +212,45 @@ const encapsulantSchema = z
 /** Phosphor regions: dispersed in the whole encapsulant, or a layer of it (trace/body-phosphor.ts). */
 export const SCENARIO_PHOSPHOR_REGIONS = ['encapsulant', 'conformal', 'remote', 'floor'] as const;
 
+/** A user phosphor carried in full (like a user material), checked by validateUserPhosphor. */
+const userPhosphorField = (where: string) =>
+  z.unknown().transform((raw, ctx) => {
+    const r = validateUserPhosphor(raw);
+    if (r.ok) return r.phosphor;
+    ctx.addIssue({ code: 'custom', path: [r.field], message: `${where}: ${r.message}.` });
+    return z.NEVER;
+  });
+
+const phosphorIdField = z.string({ error: 'Phosphor must be a library phosphor id.' }).regex(MATERIAL_ID_PATTERN, { error: 'Phosphor must be a library phosphor id (lower-case letters, digits, dashes).' });
+
+/** A second phosphor mixed into the same region (a red beside a yellow or green one). */
+const redPhosphorSchema = z
+  .object({
+    id: phosphorIdField,
+    weightPercent: num('Red phosphor load', LIMITS.phosphorWeightPercent),
+    diameterUm: num('Red phosphor particle diameter', LIMITS.phosphorDiameterUm),
+    quantumYield: num('Red phosphor quantum yield', LIMITS.quantumYield),
+    /** The user phosphor named by `id`, carried in full. */
+    user: userPhosphorField('Red user phosphor').optional()
+  }, objectMessages('Red phosphor'))
+  .strict();
+
 /**
- * An optional phosphor (version 4): a library phosphor in a region at a load. `thicknessMm` (added
- * within version 4, optional, so earlier version-4 files read unchanged) is the layer's thickness,
- * needed for the layer regions and kept but not used for 'encapsulant'.
+ * An optional phosphor (version 4): a library phosphor in a region at a load; optionally a user phosphor
+ * carried in full (`user`, its id equal to `id`) and a red phosphor mixed in (`red`). `thicknessMm`
+ * (added within version 4, optional, so earlier version-4 files read unchanged) is the layer's
+ * thickness, needed for the layer regions and kept but not used for 'encapsulant'.
  */
 const phosphorSchema = z
   .object({
-    id: z.string({ error: 'Phosphor must be a library phosphor id.' }).regex(MATERIAL_ID_PATTERN, { error: 'Phosphor must be a library phosphor id (lower-case letters, digits, dashes).' }),
+    id: phosphorIdField,
     region: z.enum(SCENARIO_PHOSPHOR_REGIONS, { error: `Phosphor region must be one of: ${SCENARIO_PHOSPHOR_REGIONS.join(', ')}.` }),
     weightPercent: num('Phosphor load', LIMITS.phosphorWeightPercent),
     diameterUm: num('Phosphor particle diameter', LIMITS.phosphorDiameterUm),
     quantumYield: num('Quantum yield', LIMITS.quantumYield),
-    thicknessMm: num('Phosphor layer thickness', LIMITS.phosphorThicknessMm).optional()
+    thicknessMm: num('Phosphor layer thickness', LIMITS.phosphorThicknessMm).optional(),
+    user: userPhosphorField('User phosphor').optional(),
+    red: redPhosphorSchema.optional()
   }, objectMessages('Phosphor'))
   .strict();
 
@@ -326,6 +354,15 @@ function checkIndexInRange(ctx: Ctx, path: (string | number)[], field: string, m
 }
 
 /** Checks that span more than one field: materials exist, the emitter is inside the chip, the chip fits. */
+/** A phosphor id names a library phosphor, or the user phosphor carried beside it. */
+function checkPhosphorId(ctx: Ctx, path: string[], field: string, p: { id: string; user?: { id: string } }): void {
+  if (p.user) {
+    if (p.user.id !== p.id) ctx.addIssue({ code: 'custom', path: [...path, 'id'], message: `${field} '${p.id}' must be the id of the user phosphor carried with it ('${p.user.id}').` });
+  } else if (MATERIAL_ID_PATTERN.test(p.id) && !findPhosphor(p.id)) {
+    ctx.addIssue({ code: 'custom', path: [...path, 'id'], message: `${field} '${p.id}' is not in the phosphor library.` });
+  }
+}
+
 function crossChecks(s: ObjectScenario, ctx: Ctx): void {
   if (s.chip.medium.kind === 'material') checkMaterial(ctx, ['chip', 'medium', 'id'], 'Chip material', s.chip.medium.id, false);
   if (s.encapsulant.medium.kind === 'material')
@@ -335,6 +372,10 @@ function crossChecks(s: ObjectScenario, ctx: Ctx): void {
   if (s.encapsulant.medium.kind === 'user')
     checkUserMaterial(ctx, ['encapsulant', 'medium', 'material'], 'Encapsulant material', s.encapsulant.medium.material);
   if (s.outside.kind === 'user') checkUserMaterial(ctx, ['outside', 'material'], 'Outside medium material', s.outside.material);
+  if (s.phosphor) {
+    checkPhosphorId(ctx, ['phosphor'], 'Phosphor', s.phosphor);
+    if (s.phosphor.red) checkPhosphorId(ctx, ['phosphor', 'red'], 'Red phosphor', s.phosphor.red);
+  }
 
   const wl = designWavelengthNm(s.emission);
   // A library id that is not in the library was reported above; here it has no material to check.

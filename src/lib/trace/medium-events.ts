@@ -14,6 +14,10 @@
  *   whenever that changes (launch, re-emission), written into the compiled medium records the interface
  *   events read, so Fresnel and refraction are per ray at no cost per event. Media without a table
  *   (a typed index) keep their one index; so do metal mirrors and the Mie host index of the coefficients.
+ * - A medium may mix particle kinds (a yellow and a red phosphor): μs and μa are the kinds' sums, and
+ *   the uniform number that chose scatter or absorb also picks the kind by its share of μs or μa at
+ *   the ray's wavelength (independent scatterers; no extra number is drawn), so a red phosphor absorbs
+ *   the yellow light it sees by its own table, and each kind re-emits by its own QY and emission.
  * Allocation-free: module-scope typed arrays, small-integer returns.
  * Sources: free-path sampling and the scatter/absorb choice, L. Wang, S. L. Jacques, L. Zheng, "MCML",
  * Comput. Methods Programs Biomed. 47, 131 (1995), §3; direction update after a scattering angle,
@@ -21,7 +25,7 @@
  */
 import { sampleHenyeyGreenstein } from '../scatter/henyey-greenstein';
 import type { CompiledScene } from './compile-scene';
-import { GRID_FROM_NM, GRID_POINTS, GRID_STEP_NM, PHOSPHOR_TABLE_STRIDE } from './phosphor-tables';
+import { GRID_FROM_NM, GRID_POINTS, GRID_STEP_NM, MAX_MIXED_KINDS, PHOSPHOR_TABLE_STRIDE } from './phosphor-tables';
 import { uniformsInto } from './rng';
 import { QUANTILES, sampleQuantile } from './spectral-sampler';
 import { ANGLE_BANDS, ANGLE_BAND_DEG, BATCHES, SPECTRUM_BINS, SPECTRUM_FROM_NM, SPECTRUM_STEP_NM, createSpectralTally, type SpectralTally } from './spectral-tally';
@@ -43,6 +47,10 @@ export const ENDED = 2;
 
 const u = new Float64Array(2);
 const c = new Float64Array(3);
+/** μs, μa, g of each kind of a mixture at the ray's wavelength. */
+const kinds = new Float64Array(3 * MAX_MIXED_KINDS);
+let partStart: Int32Array = new Int32Array(0);
+let partCount: Int32Array = new Int32Array(0);
 let coefficients: Float64Array = new Float64Array(0);
 let emission: Float64Array = new Float64Array(0);
 let quantumYield: Float64Array = new Float64Array(0);
@@ -64,6 +72,8 @@ export function configureSpectral(scene: CompiledScene, into: SpectralTally): bo
   const t = scene.spectral;
   if (!t) return false;
   coefficients = t.coefficients;
+  partStart = t.partStart;
+  partCount = t.partCount;
   emission = t.emission;
   quantumYield = t.quantumYield;
   chip = t.chip;
@@ -163,8 +173,28 @@ function isotropic(ray: Float64Array): void {
  * towards a boundary at distance hit[0]. Moves the ray and returns AT_BOUNDARY, REDIRECTED or ENDED.
  */
 export function phosphorFlight(ray: Float64Array, hit: Float64Array, media: Float64Array, o: number, bins: Float64Array): number {
-  const p = media[o + M_PHOSPHOR] | 0;
-  coefficientsAt(p);
+  const m = media[o + M_PHOSPHOR] | 0;
+  const first = partStart[m];
+  const count = partCount[m];
+  coefficientsAt(first);
+  if (count > 1) {
+    // A mixture: keep each kind's coefficients, sum μs and μa (g is picked per kind below)
+    kinds[0] = c[0];
+    kinds[1] = c[1];
+    kinds[2] = c[2];
+    let mus = c[0];
+    let mua = c[1];
+    for (let k = 1; k < count; k++) {
+      coefficientsAt(first + k);
+      kinds[3 * k] = c[0];
+      kinds[3 * k + 1] = c[1];
+      kinds[3 * k + 2] = c[2];
+      mus += c[0];
+      mua += c[1];
+    }
+    c[0] = mus;
+    c[1] = mua;
+  }
   const mut = c[0] + c[1];
   let t = hit[0];
   let inside = false;
@@ -190,17 +220,32 @@ export function phosphorFlight(ray: Float64Array, hit: Float64Array, media: Floa
   ray[2] += t * ray[5];
   if (!inside) return AT_BOUNDARY;
   uniformsInto(u, 1);
-  if (u[0] * mut < c[0]) {
-    // Scattering: Henyey–Greenstein polar angle, uniform azimuth
+  let pick = u[0] * mut;
+  let p = first;
+  if (pick < c[0]) {
+    // Scattering by the kind whose share of μs the number falls in: Henyey–Greenstein polar angle, uniform azimuth
+    let g = c[2];
+    if (count > 1) {
+      let k = 0;
+      while (k < count - 1 && pick >= kinds[3 * k]) pick -= kinds[3 * k++];
+      g = kinds[3 * k + 2];
+    }
     uniformsInto(u, 2);
-    turn(ray, sampleHenyeyGreenstein(c[2], u[0]), 2 * Math.PI * u[1]);
+    turn(ray, sampleHenyeyGreenstein(g, u[0]), 2 * Math.PI * u[1]);
     tally.scatterEvents++;
     return REDIRECTED;
+  }
+  if (count > 1) {
+    // Absorbed by the kind whose share of μa the number falls in
+    pick -= c[0];
+    let k = 0;
+    while (k < count - 1 && pick >= kinds[3 * k + 1]) pick -= kinds[3 * k++ + 1];
+    p = first + k;
   }
   // Absorbed by the phosphor: re-emitted with probability QY, else heat
   uniformsInto(u, 1);
   if (!(u[0] < quantumYield[p])) {
-    bins[heatBins[p]]++;
+    bins[heatBins[m]]++;
     return ENDED;
   }
   uniformsInto(u, 1);

@@ -10,6 +10,7 @@
 import { particleCloud, type ParticleSize } from '../scatter/index';
 import { particleIndexAt, type Phosphor } from '../phosphors/index';
 import { LIMITS } from '../scenario/limits';
+import { MAX_MIXED_KINDS } from './phosphor-tables';
 
 /** Where a phosphor can sit. */
 export const PHOSPHOR_REGIONS = ['encapsulant', 'conformal', 'remote', 'floor'] as const;
@@ -24,9 +25,14 @@ export interface TracePhosphor {
   /** Emission [wavelength nm, power per nm], sorted. */
   emission: [number, number][];
   quantumYield: number;
+  /** Other particle kinds mixed into the same region (a red beside a yellow), each with its own tables. */
+  mixedWith?: TracePhosphorPart[];
   /** Chip emission [wavelength nm, power per nm] (one row: a line). */
   chipSpectrum: [number, number][];
 }
+
+/** One more particle kind of a mixture: its coefficients, emission and quantum yield. */
+export type TracePhosphorPart = Pick<TracePhosphor, 'coefficients' | 'emission' | 'quantumYield'>;
 
 /** Host density of a silicone encapsulant, g/cm³ (common practice: 1.0–1.2). */
 export const SILICONE_DENSITY_G_PER_CM3 = 1.1;
@@ -77,6 +83,14 @@ function sortedRows(field: string, rows: unknown, width: number, check: (row: nu
   });
 }
 
+function coefficientRows(field: string, rows: unknown): void {
+  sortedRows(field, rows, 4, (row, name) => {
+    if (!(row[1] >= 0 && row[1] <= 1e4)) throw new RangeError(`${name}: mus_per_mm must be from 0 to 10000 1/mm (got ${row[1]})`);
+    if (!(row[2] >= 0 && row[2] <= 1e4)) throw new RangeError(`${name}: mua_per_mm must be from 0 to 10000 1/mm (got ${row[2]})`);
+    if (!(row[3] > -1 && row[3] < 1)) throw new RangeError(`${name}: g must lie in (−1, 1) (got ${row[3]})`);
+  });
+}
+
 function spectrumRows(field: string, rows: unknown): void {
   sortedRows(field, rows, 2, (row, name) => {
     if (!(row[1] >= 0)) throw new RangeError(`${name}: value must be ≥ 0 (got ${row[1]})`);
@@ -95,14 +109,23 @@ export function validateTracePhosphor(p: TracePhosphor): void {
   if (p.thicknessMm !== undefined && !(typeof p.thicknessMm === 'number' && p.thicknessMm >= T.min && p.thicknessMm <= T.max)) {
     throw new RangeError(`phosphor.thicknessMm must be a number from ${T.min} to ${T.max} mm (got ${String(p.thicknessMm)})`);
   }
-  sortedRows('phosphor.coefficients', p.coefficients, 4, (row, name) => {
-    if (!(row[1] >= 0 && row[1] <= 1e4)) throw new RangeError(`${name}: mus_per_mm must be from 0 to 10000 1/mm (got ${row[1]})`);
-    if (!(row[2] >= 0 && row[2] <= 1e4)) throw new RangeError(`${name}: mua_per_mm must be from 0 to 10000 1/mm (got ${row[2]})`);
-    if (!(row[3] > -1 && row[3] < 1)) throw new RangeError(`${name}: g must lie in (−1, 1) (got ${row[3]})`);
-  });
+  coefficientRows('phosphor.coefficients', p.coefficients);
   spectrumRows('phosphor.emission', p.emission);
   spectrumRows('phosphor.chipSpectrum', p.chipSpectrum);
-  if (!(typeof p.quantumYield === 'number' && p.quantumYield >= 0 && p.quantumYield <= 1)) {
-    throw new RangeError(`phosphor.quantumYield must be a number from 0 to 1 (got ${String(p.quantumYield)})`);
+  quantumYieldOf('phosphor.quantumYield', p.quantumYield);
+  if (p.mixedWith !== undefined) {
+    if (!Array.isArray(p.mixedWith) || p.mixedWith.length > MAX_MIXED_KINDS - 1) {
+      throw new RangeError(`phosphor.mixedWith must be a list of at most ${MAX_MIXED_KINDS - 1} particle kinds`);
+    }
+    p.mixedWith.forEach((k, i) => {
+      const f = `phosphor.mixedWith[${i}]`;
+      coefficientRows(`${f}.coefficients`, k.coefficients);
+      spectrumRows(`${f}.emission`, k.emission);
+      quantumYieldOf(`${f}.quantumYield`, k.quantumYield);
+    });
   }
+}
+
+function quantumYieldOf(field: string, q: unknown): void {
+  if (!(typeof q === 'number' && q >= 0 && q <= 1)) throw new RangeError(`${field} must be a number from 0 to 1 (got ${String(q)})`);
 }

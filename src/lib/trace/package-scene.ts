@@ -88,7 +88,9 @@ export function packageScene(pkg: TracePackage): SceneDescription {
   // A bare chip on the flat base: its box is all the outside meets (the base then borders nothing)
   const bareBox = bare && !cup;
   let surfaces: SceneSurface[] = chip.surfaces.map((s) => (bareBox && chip.outerFaces.includes(s.name) ? { ...s, finalExit: true } : s));
-  const particles = ph ? { phosphor: { coefficients: ph.coefficients, emission: ph.emission, quantumYield: ph.quantumYield } } : {};
+  const particles = ph
+    ? { phosphor: { coefficients: ph.coefficients, emission: ph.emission, quantumYield: ph.quantumYield, ...(ph.mixedWith?.length ? { mixedWith: ph.mixedWith } : {}) } }
+    : {};
   if (!bare) {
     media.push(withIndexRows({ name: ENCAPSULANT, role: 'encapsulant', n: enc.n, absorptionPerMm: enc.absorptionPerMm, ...(region ? {} : particles) }, disp?.encapsulant));
   }

@@ -1,6 +1,6 @@
 /**
  * The spectral part of a compiled scene, built once per run from the scene's chip spectrum and its
- * phosphor media: each phosphor's μs, μa, g tabulated on one wavelength grid (GRID_FROM_NM..GRID_TO_NM
+ * phosphor media: each phosphor's (each particle kind's, for a mixture) μs, μa, g tabulated on one wavelength grid (GRID_FROM_NM..GRID_TO_NM
  * in GRID_STEP_NM steps, linear between the given rows, the first and last rows held beyond the ends),
  * its emission as a quantile table, its quantum yield; the chip's quantile table; and the real index of
  * each medium that gives one over wavelength (SceneMedium.indexRows) on the same grid, so each ray sees
@@ -8,7 +8,7 @@
  * The ray loop (medium-events.ts) reads these flat arrays only.
  */
 import { quantileTable, QUANTILES } from './spectral-sampler';
-import type { ScenePhosphor } from './scene';
+import type { ScenePhosphor, ScenePhosphorPart } from './scene';
 
 export const GRID_FROM_NM = 300;
 export const GRID_TO_NM = 900;
@@ -16,13 +16,21 @@ export const GRID_STEP_NM = 1;
 export const GRID_POINTS = (GRID_TO_NM - GRID_FROM_NM) / GRID_STEP_NM + 1;
 /** Per phosphor: μs, μa, g over the grid (three runs of GRID_POINTS). */
 export const PHOSPHOR_TABLE_STRIDE = 3 * GRID_POINTS;
+/** Most particle kinds mixed in one medium (the ray loop's scratch holds this many). */
+export const MAX_MIXED_KINDS = 4;
 
 export interface SpectralTables {
   /** Quantile table of the chip's emission (QUANTILES entries). */
   chip: Float64Array;
   /** True when the chip emits one line (no number is drawn for its wavelength). */
   chipLine: boolean;
-  /** PHOSPHOR_TABLE_STRIDE doubles per phosphor. */
+  /**
+   * Per phosphor medium (index the medium record holds): its first particle kind and how many kinds it
+   * mixes. The tables below are per particle kind.
+   */
+  partStart: Int32Array;
+  partCount: Int32Array;
+  /** PHOSPHOR_TABLE_STRIDE doubles per particle kind. */
   coefficients: Float64Array;
   /** QUANTILES doubles per phosphor: its emission's quantile table. */
   emission: Float64Array;
@@ -68,9 +76,19 @@ export function interpolateHeld(rows: readonly (readonly number[])[], x: number,
 
 export function buildSpectralTables(
   chipSpectrum: readonly (readonly [number, number])[],
-  phosphors: readonly ScenePhosphor[],
+  mediumPhosphors: readonly ScenePhosphor[],
   indexTables: readonly IndexTableInput[] = []
 ): SpectralTables {
+  const partStart = new Int32Array(mediumPhosphors.length);
+  const partCount = new Int32Array(mediumPhosphors.length);
+  const phosphors: ScenePhosphorPart[] = [];
+  mediumPhosphors.forEach((m, i) => {
+    partStart[i] = phosphors.length;
+    const kinds = [m, ...(m.mixedWith ?? [])];
+    if (kinds.length > MAX_MIXED_KINDS) throw new RangeError(`a phosphor medium mixes at most ${MAX_MIXED_KINDS} particle kinds (got ${kinds.length})`);
+    partCount[i] = kinds.length;
+    phosphors.push(...kinds);
+  });
   const coefficients = new Float64Array(phosphors.length * PHOSPHOR_TABLE_STRIDE);
   const emission = new Float64Array(phosphors.length * QUANTILES);
   const quantumYield = new Float64Array(phosphors.length);
@@ -92,6 +110,8 @@ export function buildSpectralTables(
   return {
     chip: quantileTable(chipSpectrum),
     chipLine: chipSpectrum.length === 1,
+    partStart,
+    partCount,
     coefficients,
     emission,
     quantumYield,

@@ -130,7 +130,16 @@ export interface ScenePhosphor {
   emission: [number, number][];
   /** Probability that an absorbed photon is re-emitted, [0, 1]. */
   quantumYield: number;
+  /**
+   * Other particle kinds mixed into the same medium (a yellow and a red phosphor together), each with
+   * its own coefficients, emission and quantum yield; the medium's coefficients are the sums, and an
+   * event is credited to a kind by its share of μs or μa at the ray's wavelength (medium-events.ts).
+   */
+  mixedWith?: ScenePhosphorPart[];
 }
+
+/** One particle kind of a phosphor mixture. */
+export type ScenePhosphorPart = Omit<ScenePhosphor, 'mixedWith'>;
 
 /** Which summary count of the older fixed ledger an escape through this surface also adds to. */
 export type LegacyEscape = 'escapedChipTop' | 'escapedChipSide' | 'escapedDome' | 'escapedCylinderTop' | 'escapedCylinderSide';
