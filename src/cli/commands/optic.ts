@@ -2,7 +2,7 @@ import { readFileSync, statSync, writeFileSync } from 'node:fs';
 import { exportJsonReplacer } from '../../lib/export/number-text';
 import { profileCsv } from '../../lib/optic-design/profile-csv';
 import { opticIes, packageRayFile, parseRayFile, runOptic, type OpticSource } from '../../lib/optic-trace';
-import { designWavelengthNm, toWhitePackage } from '../../lib/scenario';
+import { designWavelengthNm, LIMITS, toWhitePackage } from '../../lib/scenario';
 import type { TracePackage } from '../../lib/trace/package-spec';
 import { CliError } from '../cli-error';
 import { choiceOption, integerOption, numberOption, parseOptions, stringOption, truncate, type OptionSpec, type ParsedValues } from '../options';
@@ -15,18 +15,18 @@ export const help = `outcouple optic — a beam optic over the package, designed
 Optic
   --type reflector|lens|tir           required
   --shape paraboloid|cpc|aspheric|plano-convex   reflector: paraboloid (default) or cpc; lens: aspheric (default) or plano-convex
-  --exit-diameter D                   exit aperture, mm, (0, 1000] (default 20)
-  --height H                          top of the optic above the source plane, mm, (0, 1000] (default 12)
+  --exit-diameter D                   exit aperture, mm, ${LIMITS.opticSizeMm.min} to ${LIMITS.opticSizeMm.max} (default 20)
+  --height H                          top of the optic above the source plane, mm, ${LIMITS.opticSizeMm.min} to ${LIMITS.opticSizeMm.max} (default 12)
   --material M                        lens or TIR material from the library, or an index (default pmma)
-  --target-beam DEG                   full beam angle wanted, (0, 180]: sizes a CPC, checked against the étendue limit
+  --target-beam DEG                   full beam angle wanted, ${LIMITS.targetBeamDeg.min} to ${LIMITS.targetBeamDeg.max}: sizes a CPC, checked against the étendue limit
   --reflectance R | --metal al|ag|au  reflector mirror, [0, 1] (default 0.92), or a library metal
-  --gap G                             clearance between the source plane and the optic, mm, [0, height) (default 0.2)
+  --gap G                             clearance between the source plane and the optic, mm, ${LIMITS.opticGapMm.min} to ${LIMITS.opticGapMm.max}, below the height (default 0.2)
 Source (default package)
   --source package                    the scenario's package traced with the optic (the demo package, or --scenario
                                       FILE.json, plus the package options of outcouple trace --help, its phosphor
                                       included; --shape-enc and --enc-height stand for the encapsulant's --shape
                                       and --height, which name the optic here)
-  --source lambertian:WxL | lambertian:disc:D    an idealised flat Lambertian source, mm, (0, 100]
+  --source lambertian:WxL | lambertian:disc:D    an idealised flat Lambertian source, mm, ${LIMITS.lambertianSourceMm.min} to ${LIMITS.lambertianSourceMm.max}
   --source rays:FILE.csv              a ray file (x_mm,y_mm,z_mm,dx,dy,dz,wavelength_nm,weight)
   --wavelength NM                     idealised source's wavelength for the material, 360 to 830 (default 550)
 Run and output
@@ -107,7 +107,8 @@ function sourceOption(values: ParsedValues): { source: OpticSource; name: string
   const rect = /^lambertian:([0-9.eE+-]+)(?:x([0-9.eE+-]+))?$/.exec(text);
   const size = (s: string) => {
     const v = Number(s);
-    if (!(Number.isFinite(v) && v > 0 && v <= 100)) throw new CliError(`--source: the Lambertian source's size must be in (0, 100] mm (got ${truncate(s)})`);
+    const L = LIMITS.lambertianSourceMm;
+    if (!(Number.isFinite(v) && v >= L.min && v <= L.max)) throw new CliError(`--source: the Lambertian source's size must be from ${L.min} to ${L.max} mm (got ${truncate(s)})`);
     return v;
   };
   if (disc) return { source: { kind: 'lambertian', shape: 'disc', widthMm: size(disc[1]) }, name: `Lambertian disc ${disc[1]} mm` };
@@ -143,17 +144,17 @@ export async function run(argv: string[]): Promise<void> {
   const type = choiceOption(values, 'type', ['reflector', 'lens', 'tir'] as const, 'tir');
   const shapes = { reflector: ['paraboloid', 'cpc'], lens: ['aspheric', 'plano-convex'], tir: ['tir'] } as const;
   const shape = choiceOption(values, 'shape', shapes[type], shapes[type][0]);
-  const exitDiameterMm = numberOption(values, 'exit-diameter', 1e-3, 1000, 20);
-  const heightMm = numberOption(values, 'height', 1e-3, 1000, 12);
-  const gapMm = numberOption(values, 'gap', 0, 1000, 0.2);
-  const targetBeamDeg = values['target-beam'] === undefined ? undefined : numberOption(values, 'target-beam', 1e-3, 180);
+  const exitDiameterMm = numberOption(values, 'exit-diameter', LIMITS.opticSizeMm.min, LIMITS.opticSizeMm.max, 20);
+  const heightMm = numberOption(values, 'height', LIMITS.opticSizeMm.min, LIMITS.opticSizeMm.max, 12);
+  const gapMm = numberOption(values, 'gap', LIMITS.opticGapMm.min, LIMITS.opticGapMm.max, 0.2);
+  const targetBeamDeg = values['target-beam'] === undefined ? undefined : numberOption(values, 'target-beam', LIMITS.targetBeamDeg.min, LIMITS.targetBeamDeg.max);
   if (values.reflectance !== undefined && values.metal !== undefined) throw new CliError('give either --reflectance or --metal, not both');
-  const reflectance = numberOption(values, 'reflectance', 0, 1, 0.92);
+  const reflectance = numberOption(values, 'reflectance', LIMITS.reflectance.min, LIMITS.reflectance.max, 0.92);
   const metal = stringOption(values, 'metal');
   if (metal !== undefined && !['al', 'ag', 'au'].includes(metal)) throw new CliError(`--metal must be al, ag or au (got ${truncate(metal)})`);
   const material = stringOption(values, 'material') ?? 'pmma';
-  const rays = integerOption(values, 'rays', 1000, 1e8, 1_000_000);
-  const seed = integerOption(values, 'seed', 0, 4294967295, 1);
+  const rays = integerOption(values, 'rays', LIMITS.opticRays.min, LIMITS.opticRays.max, 1_000_000);
+  const seed = integerOption(values, 'seed', LIMITS.seed.min, LIMITS.seed.max, 1);
   const lumens = numberOption(values, 'lumens', 1e-6, 1e7, 1000);
   const wavelengthNm = numberOption(values, 'wavelength', 360, 830, 550);
   const { source, name } = sourceOption(values);

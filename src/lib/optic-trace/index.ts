@@ -7,4 +7,3 @@ export * from './ray-file';
 export * from './package-rays';
 export * from './optic-ies';
 export * from './ray-paths';
-export * from './beam-limits';

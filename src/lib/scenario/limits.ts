@@ -81,7 +81,18 @@ export const LIMITS = {
   /** Target Duv of a two-phosphor load search (CCT and Duv are defined within ±0.05 of the Planckian locus). */
   targetDuv: { min: -0.02, max: 0.02, unit: '' },
   /** Peak and FWHM of a Gaussian phosphor emission given on the command line (FWHM down to 0.1 nm for line-like tests). */
-  phosphorEmissionFwhmNm: { min: 0.1, max: 500, unit: 'nm' }
+  phosphorEmissionFwhmNm: { min: 0.1, max: 500, unit: 'nm' },
+
+  /** Beam optics: an optic's exit diameter and its height above the source plane. */
+  opticSizeMm: { min: 0.5, max: 1000, unit: 'mm' },
+  /** Beam optics: clearance between the source plane and the optic. */
+  opticGapMm: { min: 0, max: 100, unit: 'mm' },
+  /** Beam optics: the full beam angle asked of an optic. */
+  targetBeamDeg: { min: 0.1, max: 180, unit: '°' },
+  /** Beam optics: side (or diameter) of an idealised flat Lambertian source. */
+  lambertianSourceMm: { min: 0.01, max: 100, unit: 'mm' },
+  /** Beam optics: rays traced per optic from the command line (the page offers a few fixed counts). */
+  opticRays: { min: 1_000, max: 100_000_000, unit: 'rays', integer: true }
 } as const satisfies Record<string, NumberLimit>;
 
 export type LimitName = keyof typeof LIMITS;

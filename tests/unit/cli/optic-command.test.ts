@@ -42,7 +42,7 @@ describe('outcouple optic', () => {
       [['--type', 'prism'], /--type must be one of reflector, lens, tir/],
       [['--exit-diameter', '20'], /--type is required/],
       [['--type', 'lens', '--source', 'rays:/nonexistent/file.csv'], /--source rays: cannot read/],
-      [['--type', 'lens', '--source', 'lambertian:0x1'], /--source: the Lambertian source's size must be in \(0, 100\] mm/],
+      [['--type', 'lens', '--source', 'lambertian:0x1'], /--source: the Lambertian source's size must be from 0\.01 to 100 mm/],
       // the package source takes the scenario's options and messages; the encapsulant's --height is --enc-height here
       [['--type', 'lens', '--source', 'package', '--enc-height', '-1'], /outcouple optic: --enc-height: Encapsulant height must be between/],
       [['--type', 'lens', '--source', 'package', '--n-chip', 'abc'], /outcouple optic: --n-chip: Chip index n must be between/]
