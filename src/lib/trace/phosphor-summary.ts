@@ -30,18 +30,10 @@ export interface SpectrumBin {
   photons: number;
 }
 
-export interface ColorWithSigma {
-  x: number;
-  y: number;
-  uPrime: number;
-  vPrime: number;
-  cctK: number | null;
-  duv: number | null;
-  ra: number | null;
+/** The colour of the escaped light (colorOfSpectrum's figures, R9 alone) with its Monte Carlo σ (batch means). */
+export interface ColorWithSigma extends Pick<ColorSummary, 'x' | 'y' | 'uPrime' | 'vPrime' | 'cctK' | 'duv' | 'ra' | 'lerLmPerW' | 'warnings'> {
   r9: number | null;
-  lerLmPerW: number;
   sigma: { x: number; y: number; cctK: number | null; duv: number | null; ra: number | null };
-  warnings: string[];
 }
 
 export interface AngleColor {
