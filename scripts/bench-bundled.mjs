@@ -155,6 +155,8 @@ async function main() {
     if (old !== 'none') {
       const oldRoot = join(dir, 'old');
       execSync(`mkdir -p "${oldRoot}" && git -C "${repo}" archive ${old} src/lib | tar -x -C "${oldRoot}"`);
+      // a newer commit's tracer also imports its data files and packages
+      execSync(`(git -C "${repo}" archive ${old} data 2>/dev/null | tar -x -C "${oldRoot}") || true; ln -s "${join(repo, 'node_modules')}" "${join(oldRoot, 'node_modules')}"`);
       builds.push({ label: old, url: await bundle(esbuild, oldRoot, dir, 'old') });
     }
     const libs = await Promise.all(builds.map((b) => import(b.url)));
