@@ -10,8 +10,9 @@
  *   node scripts/bench-bundled.mjs --rays 500000 --rounds 5 --old <commit>|none
  *   node scripts/bench-bundled.mjs --only dome --one-thread  # packages whose name holds 'dome', one thread
  *
- * The older tracer is taken from git (`git archive <commit> src/lib`) and knows only the packages of
- * its time: the flip chip and the cup rows are timed for the current tracer alone.
+ * The older tracer is taken from git (`git archive <commit> src/lib`, with that commit's data/ and this tree's
+ * node_modules for a newer commit's imports); the flip chip and the cup rows are timed for the current tracer
+ * alone (the default 39aaaae does not know them).
  */
 import { execSync } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';

@@ -67,8 +67,7 @@ import { seedChunk, uniformAt, uniformsInto } from './rng';
 import { useRevolutionProfiles } from './revolution-shape';
 import { launchSourceRay } from './source-launch';
 import * as layout from './scene-layout';
-import { intersectSurface, intersectRect, intersectDisc, intersectCylinder, intersectFrustum, intersectSpheroidCap, surfaceNormal } from './shape-intersect';
-import { intersectRevolutionShape } from './revolution-shape';
+import { intersectSurface, surfaceNormal } from './shape-intersect';
 import { POLAR_BINS, type Tally } from './tally';
 
 // The layout's constants as module constants: under tsx (command line, bench) an imported binding is a
@@ -104,12 +103,7 @@ const {
   M_LIST_START,
   M_PHOSPHOR,
   NONE,
-  SHAPE_CYLINDER,
-  SHAPE_DISC,
-  SHAPE_FRUSTUM,
   SHAPE_RECT,
-  SHAPE_REVOLUTION,
-  SHAPE_SPHEROID_CAP,
   SIDE_FRONT,
   SURFACE_STRIDE,
   S_B,
@@ -221,32 +215,6 @@ let fastBoxes = false;
 /** Set by boxSteps when the ray ended inside (absorbed in the box or at its mirror: counted). */
 let boxEnded = false;
 
-// The list media the tight list loop (listSteps) walks (not the outside, no phosphor), in a table of
-// its own: per medium its surface count, then per bounding surface its shape kind, the offset of its
-// shape's parameters in the surface records, its side and its bounds entry (L_STRIDE integers each).
-const MAX_LIST_ENTRIES = 256;
-const L_SHAPE = 0;
-const L_P = 1;
-const L_SIDE = 2;
-const L_ENTRY = 3;
-/** LIST_FRESNEL, LIST_MIRROR or LIST_GENERAL: which event listSteps runs itself at this surface. */
-const L_KIND = 4;
-/** The medium across the surface, and its total internal reflection counter (or NONE). */
-const L_TO = 5;
-const L_TIR_COUNTER = 6;
-const L_STRIDE = 7;
-/** Any behaviour: the general surface event. */
-const LIST_GENERAL = 0;
-/** A plain Fresnel interface (or a textured one with s = 0, which draws nothing more). */
-const LIST_FRESNEL = 1;
-/** A specular mirror of a fixed reflectance. */
-const LIST_MIRROR = 2;
-const listTable = new Int32Array(MAX_LIST_ENTRIES * (L_STRIDE + 1));
-/** Per medium: offset of its block in listTable + 1 when listSteps walks it, else 0. */
-const listOf = new Int32Array(MAX_FAST_MEDIA);
-/** Set by listSteps when the ray ended in its medium or at a surface (counted). */
-let listEnded = false;
-
 function configure(scene: CompiledScene, tally?: Tally): void {
   media = scene.media;
   surfaces = scene.surfaces;
@@ -272,43 +240,6 @@ function configure(scene: CompiledScene, tally?: Tally): void {
   sourceSurface = scene.emitterSurface;
   useRevolutionProfiles(scene.profiles, scene.surfaceNames.length);
   configureBoxFaces();
-  configureLists();
-}
-
-/** Fills listTable / listOf: each list medium but the outside, without phosphor, while the table holds them. */
-function configureLists(): void {
-  const nm = media.length / MEDIUM_STRIDE;
-  listOf.fill(0);
-  if (!fastBoxes) return;
-  let at = 0;
-  for (let m = 0; m < nm; m++) {
-    const mo = m * MEDIUM_STRIDE;
-    if (m === outside || (media[mo + M_BOUNDARY] | 0) === BOUNDARY_BOX || media[mo + M_PHOSPHOR] >= 0) continue;
-    const start = media[mo + M_LIST_START] | 0;
-    const count = media[mo + M_LIST_COUNT] | 0;
-    if (at + 1 + count * L_STRIDE > listTable.length) break;
-    listOf[m] = at + 1;
-    listTable[at++] = count;
-    for (let i = start; i < start + count; i++) {
-      const entry = bounds[i];
-      const o = (entry >> 1) * SURFACE_STRIDE;
-      listTable[at + L_SHAPE] = surfaces[o + S_SHAPE] | 0;
-      listTable[at + L_P] = o + S_P;
-      listTable[at + L_SIDE] = entry & 1;
-      listTable[at + L_ENTRY] = entry;
-      const behaviour = surfaces[o + S_BEHAVIOUR] | 0;
-      const front = (entry & 1) === SIDE_FRONT;
-      listTable[at + L_KIND] =
-        behaviour === BEHAVIOUR_FRESNEL || (behaviour === BEHAVIOUR_TEXTURED && !(surfaces[o + S_B] > 0))
-          ? LIST_FRESNEL
-          : behaviour === BEHAVIOUR_MIRROR && surfaces[o + S_B] >= 0
-            ? LIST_MIRROR
-            : LIST_GENERAL;
-      listTable[at + L_TO] = surfaces[o + (front ? S_BEHIND : S_FRONT)] | 0;
-      listTable[at + L_TIR_COUNTER] = surfaces[o + (front ? S_TIR_FRONT : S_TIR_BEHIND)] | 0;
-      at += L_STRIDE;
-    }
-  }
 }
 
 /**
@@ -787,103 +718,6 @@ function boxSteps(rayEvents: number, maxEvents: number): number {
 }
 
 /**
- * nearestBoundary's list search over the list medium at listTable offset `lo`, by the table's shape
- * kinds: returns the table offset of the nearest surface ahead (distance in hit[0]) or NONE.
- */
-function listSearch(lo: number): number {
-  let best = NONE;
-  let tBest = Infinity;
-  const end = lo + 1 + listTable[lo] * L_STRIDE;
-  for (let i = lo + 1; i < end; i += L_STRIDE) {
-    const p = listTable[i + L_P];
-    const side = listTable[i + L_SIDE];
-    let met = false;
-    switch (listTable[i + L_SHAPE]) {
-      case SHAPE_RECT:
-        met = intersectRect(surfaces, p, side, ray, hit);
-        break;
-      case SHAPE_DISC:
-        met = intersectDisc(surfaces, p, side, ray, hit);
-        break;
-      case SHAPE_CYLINDER:
-        met = intersectCylinder(surfaces, p, side, ray, hit);
-        break;
-      case SHAPE_FRUSTUM:
-        met = intersectFrustum(surfaces, p, side, ray, hit);
-        break;
-      case SHAPE_SPHEROID_CAP:
-        met = intersectSpheroidCap(surfaces, p, side, ray, hit);
-        break;
-      case SHAPE_REVOLUTION:
-        met = intersectRevolutionShape(surfaces, p, side, ray, hit);
-        break;
-    }
-    if (met && hit[0] < tBest) {
-      tBest = hit[0];
-      best = i;
-    }
-  }
-  hit[0] = tBest;
-  return best;
-}
-
-/**
- * The ray's steps inside list media (an encapsulant, a cup's fill) in one tight loop: the nearest of the
- * medium's surfaces (from listTable) → Beer–Lambert flight → the general surface event, the same
- * numbers drawn in the same order and the same events counted as runRays's general steps would.
- * Returns the ray's event count; hands the ray back to the general loop, without having started the
- * step, when it finds no surface ahead or reaches the event cap, and after the step that takes it
- * into a medium listSteps does not walk; listEnded is set when it ended (counted).
- */
-function listSteps(rayEvents: number, maxEvents: number): number {
-  listEnded = false;
-  let lo = listOf[medium] - 1;
-  for (;;) {
-    const best = listSearch(lo);
-    if (best === NONE || rayEvents === maxEvents) return rayEvents;
-    rayEvents++;
-    if (!flight()) {
-      listEnded = true;
-      return rayEvents;
-    }
-    const entry = listTable[best + L_ENTRY];
-    const kind = listTable[best + L_KIND];
-    if (kind === LIST_GENERAL || (track && kind === LIST_MIRROR)) {
-      if (!surfaceEvent(entry)) {
-        listEnded = true;
-        return rayEvents;
-      }
-    } else {
-      // surfaceEvent's steps for the two common behaviours (a mirror in 'average' mode only)
-      const o = (entry >> 1) * SURFACE_STRIDE;
-      lastSurface = entry >> 1;
-      const axis = surfaceNormal(surfaces, o, entry & 1, ray, normal);
-      if (kind === LIST_MIRROR) {
-        // mirrorEvent of a fixed reflectance
-        uniformAt(u, 0);
-        if (!(u[0] < surfaces[o + S_B])) {
-          bins[surfaces[o + S_BIN_ABSORBED] | 0]++;
-          listEnded = true;
-          return rayEvents;
-        }
-        if (axis >= 0) ray[3 + axis] = -ray[3 + axis];
-        else reflectDirection(direction, direction, normal);
-      } else {
-        const to = listTable[best + L_TO];
-        const outcome = interfaceEvent(medium, to);
-        if (outcome === TIR) {
-          const c = listTable[best + L_TIR_COUNTER];
-          if (c !== NONE) counters[c]++;
-        }
-        if (outcome === TRANSMITTED) medium = to;
-      }
-    }
-    lo = listOf[medium] - 1;
-    if (lo < 0) return rayEvents;
-  }
-}
-
-/**
  * The ray loop proper: launches `rays` rays and follows each to its end, counting fates in `bins`.
  * Kept apart from the tally bookkeeping so the optimised loop never meets code it has not yet run.
  */
@@ -898,12 +732,6 @@ function runRays(rays: number, maxEvents: number, histogram: Float64Array, onPro
       if (fastBoxes && boxOf[medium] !== 0) {
         rayEvents = boxSteps(rayEvents, maxEvents);
         if (boxEnded) break;
-      }
-      // In an encapsulant: the list loop, until the ray leaves it or needs the general step
-      if (listOf[medium] !== 0) {
-        rayEvents = listSteps(rayEvents, maxEvents);
-        if (listEnded) break;
-        if (boxOf[medium] !== 0) continue;
       }
       // Left a convex package for good (SceneSurface.finalExit): nothing to search
       if (medium === outside && lastSurface >= 0 && finalExit[lastSurface] === 1) {
