@@ -10,8 +10,9 @@
  *   node scripts/bench-bundled.mjs --rays 500000 --rounds 5 --old <commit>|none
  *   node scripts/bench-bundled.mjs --only dome --one-thread  # packages whose name holds 'dome', one thread
  *
- * The older tracer is taken from git (`git archive <commit> src/lib`) and knows only the packages of
- * its time: the flip chip and the cup rows are timed for the current tracer alone.
+ * The older tracer is taken from git (`git archive <commit> src/lib`, with that commit's data/ and this tree's
+ * node_modules for a newer commit's imports); the flip chip and the cup rows are timed for the current tracer
+ * alone (the default 39aaaae does not know them).
  */
 import { execSync } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
@@ -155,6 +156,8 @@ async function main() {
     if (old !== 'none') {
       const oldRoot = join(dir, 'old');
       execSync(`mkdir -p "${oldRoot}" && git -C "${repo}" archive ${old} src/lib | tar -x -C "${oldRoot}"`);
+      // a newer commit's tracer also imports its data files and packages
+      execSync(`(git -C "${repo}" archive ${old} data 2>/dev/null | tar -x -C "${oldRoot}") || true; ln -s "${join(repo, 'node_modules')}" "${join(oldRoot, 'node_modules')}"`);
       builds.push({ label: old, url: await bundle(esbuild, oldRoot, dir, 'old') });
     }
     const libs = await Promise.all(builds.map((b) => import(b.url)));

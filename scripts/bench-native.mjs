@@ -139,6 +139,8 @@ async function main() {
     if (old !== 'none') {
       const oldRoot = join(dir, 'old');
       execSync(`mkdir -p "${oldRoot}" && git -C "${repo}" archive ${old} src/lib package.json | tar -x -C "${oldRoot}"`);
+      // a newer commit's tracer also imports its data files and packages
+      execSync(`(git -C "${repo}" archive ${old} data 2>/dev/null | tar -x -C "${oldRoot}") || true; ln -s "${join(repo, 'node_modules')}" "${join(oldRoot, 'node_modules')}"`);
       runners.push(jsRunner(`tsx ${old}`, await tsImport(join(oldRoot, 'src/lib/trace/index.ts'), import.meta.url)));
       runners.push(jsRunner(`bundled ${old}`, await bundle(esbuild, oldRoot, join(dir, 'old.mjs'))));
     }
