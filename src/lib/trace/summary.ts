@@ -164,6 +164,22 @@ function farField(histogram: Float64Array, escaped: number): TraceSummary['farFi
 const PART_KINDS: readonly LedgerPart['kind'][] = ['escaped', 'medium', 'surface', 'lost', 'phosphor'];
 
 /** The named ledger of a tally, with fractions of `launched`. */
+/** A ledger bin in words, for tables: "escaped through the dome", "absorbed in GaN", "phosphor heat in …". */
+export function ledgerPartLabel(p: Pick<LedgerPart, 'kind' | 'part'>): string {
+  switch (p.kind) {
+    case 'escaped':
+      return `escaped through the ${p.part}`;
+    case 'medium':
+      return `absorbed in the ${p.part}`;
+    case 'surface':
+      return `absorbed at the ${p.part}`;
+    case 'phosphor':
+      return `phosphor heat in the ${p.part}`;
+    case 'lost':
+      return `lost (${p.part})`;
+  }
+}
+
 function ledgerParts(parts: Record<string, number>, inv: number): LedgerPart[] {
   return Object.entries(parts).map(([bin, count]) => {
     const colon = bin.indexOf(':');

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { summarize } from '../../../src/lib/trace/summary';
+import { ledgerPartLabel, summarize } from '../../../src/lib/trace/summary';
 import { POLAR_BINS, createTally } from '../../../src/lib/trace/tally';
 import { assertInDelta } from '../../support/assert';
 
@@ -95,5 +95,15 @@ describe('summarize(tally)', () => {
     expect(s.farField.bins.every((b) => b.relativeIntensity === 0)).toBe(true);
     expect(Number.isNaN(s.stderr)).toBe(false);
     expect(summarize(createTally()).extraction).toBe(0);
+  });
+});
+
+describe('ledgerPartLabel', () => {
+  it('names each kind of ledger bin in words for the tables', () => {
+    expect(ledgerPartLabel({ kind: 'escaped', part: 'dome' })).toBe('escaped through the dome');
+    expect(ledgerPartLabel({ kind: 'medium', part: 'GaN' })).toBe('absorbed in the GaN');
+    expect(ledgerPartLabel({ kind: 'surface', part: 'base' })).toBe('absorbed at the base');
+    expect(ledgerPartLabel({ kind: 'phosphor', part: 'encapsulant' })).toBe('phosphor heat in the encapsulant');
+    expect(ledgerPartLabel({ kind: 'lost', part: 'event cap' })).toBe('lost (event cap)');
   });
 });
