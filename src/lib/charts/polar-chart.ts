@@ -43,6 +43,13 @@ function arc(radius: number, lower: boolean): ChartPoint[] {
   return pts;
 }
 
+/** The smallest of 1, 1.2, 1.5, 2, 2.5, 3, 4, 5, 6, 8 × 10^k at or above x (x > 0): axis ends that read as round numbers. */
+export function niceCeil(x: number): number {
+  const p = 10 ** Math.floor(Math.log10(x));
+  for (const f of [1, 1.2, 1.5, 2, 2.5, 3, 4, 5, 6, 8, 10]) if (f * p >= x * (1 - 1e-12)) return Number((f * p).toPrecision(12));
+  return 10 * p;
+}
+
 /**
  * Builds the polar far-field chart. Only the upper half plane is drawn when every angle lies within
  * ±90° of the normal; otherwise the whole circle. An empty or all-zero input gives the guides only,
@@ -90,7 +97,7 @@ export function polarChart(input: PolarSeriesInput[], opts: PolarChartOptions): 
     });
   }
 
-  const m = AXIS_REACH * R;
+  const m = niceCeil(AXIS_REACH * R);
   const rows: (string | number)[][] = [];
   input.forEach((s) => {
     const n = Math.min(s.thetaRad.length, s.intensity.length);

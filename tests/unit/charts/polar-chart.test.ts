@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { polarChart } from '../../../src/lib/charts/polar-chart';
+import { niceCeil, polarChart } from '../../../src/lib/charts/polar-chart';
 import { assertInDelta } from '../../support/assert';
 
 const N = 37;
@@ -19,8 +19,9 @@ describe('polarChart', () => {
   it('draws the upper half plane only when all angles are within ±90°, with equal axis ranges', () => {
     const spec = polarChart([{ label: 'a', thetaRad: theta, intensity: theta.map(() => 2) }], { title: 'F', intensityLabel: 'I (W/sr)' });
     expect(spec.kind).toBe('polar');
-    expect(spec.x).toMatchObject({ min: -2.4, max: 2.4 });
-    expect(spec.y).toMatchObject({ min: 0, max: 2.4 });
+    // the axis reaches 1.2 × the maximum, rounded up to a round number (2.4 → 2.5)
+    expect(spec.x).toMatchObject({ min: -2.5, max: 2.5 });
+    expect(spec.y).toMatchObject({ min: 0, max: 2.5 });
     const full = polarChart([{ label: 'b', thetaRad: [0, Math.PI], intensity: [1, 1] }], { title: 'F', intensityLabel: 'I' });
     expect(full.y.min).toBe(-1.2);
   });
@@ -38,7 +39,13 @@ describe('polarChart', () => {
     const spec = polarChart([{ label: 'a', thetaRad: [0, 0.1, NaN], intensity: [NaN, -1, 1] }], { title: 'F', intensityLabel: 'I' });
     expect(spec.series.filter((s) => s.role !== 'guide')[0].points).toHaveLength(0);
     expect(spec.ariaLabel).toBe('F: no intensity to draw yet.');
-    expect(spec.x.max).toBeCloseTo(1.2, 12);
+    expect(spec.x.max).toBe(1.2);
+  });
+});
+
+describe('niceCeil', () => {
+  it('rounds up to 1, 1.2, 1.5, 2, 2.5, 3, 4, 5, 6 or 8 × 10^k', () => {
+    expect([0.9, 1, 1.2, 2.4, 3.1, 7, 95_281.8 * 1.2].map(niceCeil)).toEqual([1, 1, 1.2, 2.5, 4, 8, 120_000]);
   });
 });
 
