@@ -102,3 +102,17 @@ test('white light: a user phosphor from pasted tables — a bad row refused besi
   await expect(fresh.getByRole('combobox', { name: 'Phosphor', exact: true }).getByRole('option', { name: 'Test amber' })).toHaveCount(1);
   await other.close();
 });
+
+test('the precise trace (400 000 rays) brings σ(CCT) near 20 K and says how long it took', async ({ page }) => {
+  test.setTimeout(180_000);
+  await page.goto('/white');
+  await page.locator('html[data-ready="true"]').waitFor({ state: 'attached' });
+  await page.getByLabel('Rays traced').selectOption('400000');
+  await expect(page.getByText(/^Traced 400,000 rays in \d+\.\d+ s/)).toBeVisible({ timeout: 120_000 });
+  const cct = await page.getByTestId('cct').innerText();
+  const sigma = Number(/± (\d+) K/.exec(cct)?.[1]);
+  // σ(CCT) ∝ 1/√rays: ≈ 20 K at 320 000 rays for the demo at ≈ 5000 K; the batch-means σ is itself
+  // uncertain by about 25 % (8 batches), so allow up to 35 K
+  expect(sigma).toBeGreaterThan(0);
+  expect(sigma).toBeLessThan(35);
+});
