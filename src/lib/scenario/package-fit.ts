@@ -172,7 +172,7 @@ export function packageFitProblems(chip: FitChip, enc: FitEncapsulant, body: Fit
       message:
         enc.shape === 'dome'
           ? `Encapsulant radius must be more than ${above(minR)} (${why}) and at most ${max}.`
-          : `Encapsulant radius must be more than ${why} (${above(minR)}) and at most ${max}.`
+          : `${enc.shape === 'box' ? 'Box half side' : 'Encapsulant radius'} must be more than ${why} (${above(minR)}) and at most ${max}.`
     });
   }
   return problems;

@@ -37,7 +37,7 @@ describe('packageFitProblems(chip, encapsulant)', () => {
   it("a square box (R its half side) must reach past half the chip's longer side and rise above the chip", () => {
     const long = { ...chip, lengthMm: 1.4 };
     expect(minEncapsulantRadiusMm(long, { shape: 'box', radiusMm: 1, heightMm: 1 })).toBe(0.7);
-    expect(packageFitProblems(long, { shape: 'box', radiusMm: 0.7, heightMm: 1 })[0].message).toMatch(/half the chip's longer side \(0\.7\d* mm\)/);
+    expect(packageFitProblems(long, { shape: 'box', radiusMm: 0.7, heightMm: 1 })[0].message).toMatch(/^Box half side must be more than half the chip's longer side \(0\.7\d* mm\)/);
     expect(packageFitProblems(long, { shape: 'box', radiusMm: 0.71, heightMm: 1 })).toEqual([]);
     expect(packageFitProblems(long, { shape: 'box', radiusMm: 1, heightMm: 0.1 })[0].path).toBe('encapsulant.heightMm');
   });
