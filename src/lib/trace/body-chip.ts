@@ -6,6 +6,9 @@
  */
 import type { Behaviour, SceneMedium, SceneSurface } from './scene';
 
+/** The convex solid the chip's outer faces bound (SceneSurface.convexSolid). */
+const CHIP_SOLID = 'chip';
+
 export interface ChipLayerSpec {
   /** Medium name of the layer (unique in the scene). */
   name: string;
@@ -74,6 +77,7 @@ export function chipParts(c: ChipBuild): ChipParts {
       front,
       behind: layer.name,
       behaviour: { kind: 'fresnel' },
+      convexSolid: CHIP_SOLID,
       escapedBin: 'chip sides',
       legacyEscape: 'escapedChipSide'
     });
@@ -90,7 +94,7 @@ export function chipParts(c: ChipBuild): ChipParts {
       front: top ? c.around : c.layers[i + 1].name,
       behind: layer.name,
       behaviour: top ? c.top : { kind: 'fresnel' },
-      ...(top ? { legacyEscape: 'escapedChipTop' as const } : {})
+      ...(top ? { legacyEscape: 'escapedChipTop' as const, convexSolid: CHIP_SOLID } : {})
     };
     // The top face first, then the sides: the order the medium around meets them in a tie
     if (top) surfaces.push(topFace);

@@ -28,6 +28,7 @@ import {
   M_BOX_FACES,
   M_BOX_Z0,
   M_BOX_Z1,
+  M_CONVEX_COUNT,
   M_INDEX,
   M_IS_CHIP,
   M_LIST_COUNT,
@@ -106,6 +107,11 @@ export interface CompiledScene {
   phosphorBins: number[];
   /** 1 for each surface whose escapes are final (SceneSurface.finalExit), by surface index. */
   finalExit: Uint8Array;
+  /**
+   * By surface index: the medium whose list starts with this surface among the M_CONVEX_COUNT faces of
+   * a convex solid (SceneSurface.convexSolid), or NONE.
+   */
+  convexOf: Int32Array;
   /** True when some medium absorbs (each ray then draws an optical depth). */
   absorbing: boolean;
   binNames: string[];
@@ -293,12 +299,19 @@ export function compileScene(scene: SceneDescription): CompiledScene {
     });
   });
 
-  // Bounds lists, one run per medium
+  // Bounds lists, one run per medium; first in each, the faces of the first convex solid it sees from
+  // without (SceneSurface.convexSolid), each marked with the medium whose search may skip it
   const flat: number[] = [];
+  const convexOf = new Int32Array(ns).fill(NONE);
   lists.forEach((list, i) => {
+    const solidOf = (entry: number) => ((entry & 1) === SIDE_FRONT ? (scene.surfaces[entry >> 1].convexSolid ?? null) : null);
+    const solid = list.map(solidOf).find((name) => name !== null) ?? null;
+    const faces = solid === null ? [] : list.filter((entry) => solidOf(entry) === solid);
+    for (const entry of faces) convexOf[entry >> 1] = i;
     media[i * MEDIUM_STRIDE + M_LIST_START] = flat.length;
     media[i * MEDIUM_STRIDE + M_LIST_COUNT] = list.length;
-    flat.push(...list);
+    media[i * MEDIUM_STRIDE + M_CONVEX_COUNT] = faces.length;
+    flat.push(...faces, ...list.filter((entry) => !faces.includes(entry)));
   });
 
   const em = scene.emitter;
@@ -361,6 +374,7 @@ export function compileScene(scene: SceneDescription): CompiledScene {
     phosphorBins,
     track: scene.polarization === 'track',
     finalExit: Uint8Array.from(scene.surfaces, (s) => (s.finalExit === true ? 1 : 0)),
+    convexOf,
     absorbing,
     binNames,
     binGroups,

@@ -53,7 +53,12 @@ export const M_BOX_Z1 = 12;
 export const M_BOX_FACES = 13;
 /** 1 when the medium is a chip layer (its faces' total internal reflections count as chip TIR). */
 export const M_IS_CHIP = 19;
-export const MEDIUM_STRIDE = 20;
+/**
+ * List media: how many entries, at the start of the list, are faces of one convex solid seen from
+ * without (SceneSurface.convexSolid); the search skips them right after the ray met one of them.
+ */
+export const M_CONVEX_COUNT = 20;
+export const MEDIUM_STRIDE = 21;
 
 // Surface record
 export const S_SHAPE = 0;

@@ -98,6 +98,7 @@ const {
   M_BOX_FACES,
   M_BOX_Z0,
   M_BOX_Z1,
+  M_CONVEX_COUNT,
   M_INDEX,
   M_LIST_COUNT,
   M_LIST_START,
@@ -152,6 +153,7 @@ let media: Float64Array = new Float64Array(0);
 let surfaces: Float64Array = new Float64Array(0);
 let bounds: Int32Array = new Int32Array(0);
 let finalExit: Uint8Array = new Uint8Array(0);
+let convexOf: Int32Array = new Int32Array(0);
 let bins = new Float64Array(2);
 let outside = 0;
 let emitterOffset = 0;
@@ -220,6 +222,7 @@ function configure(scene: CompiledScene, tally?: Tally): void {
   surfaces = scene.surfaces;
   bounds = scene.bounds;
   finalExit = scene.finalExit;
+  convexOf = scene.convexOf;
   if (bins.length !== scene.binNames.length) bins = new Float64Array(scene.binNames.length);
   bins.fill(0);
   counters.fill(0);
@@ -361,8 +364,10 @@ function nearestBoundary(): number {
   }
   let best = NONE;
   let tBest = Infinity;
-  const start = media[o + M_LIST_START] | 0;
+  let start = media[o + M_LIST_START] | 0;
   const end = start + (media[o + M_LIST_COUNT] | 0);
+  // Standing on a face of the convex solid the list starts with, heading away: none of its faces is ahead
+  if (lastSurface >= 0 && convexOf[lastSurface] === medium) start += media[o + M_CONVEX_COUNT] | 0;
   for (let i = start; i < end; i++) {
     const entry = bounds[i];
     if (intersectSurface(surfaces, (entry >> 1) * SURFACE_STRIDE, entry & 1, ray, hit) && hit[0] < tBest) {
@@ -759,6 +764,8 @@ function runRays(rays: number, maxEvents: number, histogram: Float64Array, onPro
         const outcome = phosphorFlight(ray, hit, media, medium * MEDIUM_STRIDE, bins);
         if (outcome === ENDED) break;
         if (outcome === REDIRECTED) {
+          // scattered off the surface it last met (it meets another before any escape)
+          lastSurface = NONE;
           if (track) redrawPolarization();
           continue;
         }
@@ -822,6 +829,7 @@ export function recordSceneRays(scene: CompiledScene, chunkIndex: number, rays: 
           break;
         }
         if (outcome === REDIRECTED) {
+          lastSurface = NONE;
           if (track) redrawPolarization();
           sink.point(ray[0], ray[1], ray[2], NONE);
           continue;
