@@ -59,13 +59,25 @@ export function fresnelReal(cosThetaI: number, etaI: number, etaT: number, out: 
  * formulas live here, fresnelReal hands its arguments over.
  */
 export function fresnelRealAt(inp: Float64Array, out: Float64Array): boolean {
-  let cosI = inp[0];
+  const cosI = inp[0];
   const etaI = inp[1];
   const etaT = inp[2];
   if (!(cosI >= -COS_SLACK && cosI <= 1 + COS_SLACK)) throwCos(cosI);
-  cosI = cosI > 1 ? 1 : cosI < 0 ? 0 : cosI;
   if (!(etaI > 0 && etaI < Infinity)) throwEta('etaI', etaI);
   if (!(etaT > 0 && etaT < Infinity)) throwEta('etaT', etaT);
+  return fresnelRealTrusted(inp, out);
+}
+
+/**
+ * {@link fresnelRealAt} without its checks, for a caller that has checked the indices once (the ray
+ * tracer's scene compile) and passes a cosine of a unit vector (clamped here to [0, 1]). Small, so the
+ * tracer's bounce loop inlines it together with its random-number step.
+ */
+export function fresnelRealTrusted(inp: Float64Array, out: Float64Array): boolean {
+  let cosI = inp[0];
+  const etaI = inp[1];
+  const etaT = inp[2];
+  cosI = cosI > 1 ? 1 : cosI < 0 ? 0 : cosI;
 
   // Index matched: no interface
   if (etaI === etaT) {

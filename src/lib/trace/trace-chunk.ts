@@ -53,7 +53,7 @@
  * surface, §11.3); G. Marsaglia, "Choosing a point from the surface of a sphere", Ann. Math. Stat. 43,
  * 645 (1972) (isotropic directions).
  */
-import { fresnelRealAt, MIRROR_AMPLITUDES_LENGTH, mirrorAmplitudesAt } from '../optics/fresnel';
+import { fresnelRealTrusted, MIRROR_AMPLITUDES_LENGTH, mirrorAmplitudesAt } from '../optics/fresnel';
 import { reflectDirection, refractDirectionAt } from '../optics/snell';
 import { boxExit } from './box-exit';
 import { compileScene, type CompiledScene } from './compile-scene';
@@ -422,7 +422,7 @@ function interfaceEvent(from: number, to: number): number {
   fin[1] = etaI;
   fin[2] = etaT;
   // Handle total internal reflection
-  if (!fresnelRealAt(fin, fr)) {
+  if (!fresnelRealTrusted(fin, fr)) {
     reflectDirection(direction, direction, normal);
     return TIR;
   }
@@ -451,7 +451,7 @@ function axisFaceEvent(k: number, from: number, to: number): number {
   fin[1] = etaI;
   fin[2] = etaT;
   // Handle total internal reflection
-  if (!fresnelRealAt(fin, fr)) {
+  if (!fresnelRealTrusted(fin, fr)) {
     ray[j] = -ray[j];
     return TIR;
   }
@@ -692,7 +692,7 @@ function boxSteps(rayEvents: number, maxEvents: number): number {
       // the indices from the media records, which a spectral scene rewrites at each ray's wavelength
       fin[1] = media[medium * MEDIUM_STRIDE + M_INDEX];
       fin[2] = media[(boxTable[q + F_TO] | 0) * MEDIUM_STRIDE + M_INDEX];
-      if (!fresnelRealAt(fin, fr)) {
+      if (!fresnelRealTrusted(fin, fr)) {
         ray[j] = -ray[j];
         const c = boxTable[q + F_TIR_COUNTER] | 0;
         if (c !== NONE) counters[c]++;

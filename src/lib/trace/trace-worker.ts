@@ -5,9 +5,11 @@
  * event loop (through a MessageChannel, which has no timer clamp) so a 'cancel' can stop the job.
  */
 import { chunkPlan, raysInChunk } from './chunk-plan';
+import { compileScene } from './compile-scene';
+import { packageScene } from './package-scene';
 import { validateTracePackage } from './package-spec';
 import { createTally } from './tally';
-import { traceChunk, traceSceneChunk } from './trace-chunk';
+import { traceSceneChunk } from './trace-chunk';
 import type { TraceReply, TraceRequest } from './trace-messages';
 
 const scope = self as unknown as {
@@ -42,8 +44,9 @@ async function run(msg: Extract<TraceRequest, { type: 'run' }>): Promise<void> {
   const plan = chunkPlan(msg.rays);
   const tally = createTally();
   const report = reporter(msg.id);
+  const scene = compileScene(packageScene(msg.pkg));
   for (let c = msg.from; c < msg.to; c++) {
-    traceChunk(msg.pkg, c, raysInChunk(plan, c), msg.seed, tally, msg.maxEvents, report.inChunk);
+    traceSceneChunk(scene, c, raysInChunk(plan, c), msg.seed, tally, msg.maxEvents, report.inChunk);
     report.chunkDone(raysInChunk(plan, c));
     await yieldToEvents();
     if (cancelled.delete(msg.id)) return;

@@ -4,8 +4,10 @@
  */
 import { chunkPlan, raysInChunk } from './chunk-plan';
 import { DEFAULT_MAX_EVENTS, validateTraceOptions, validateTracePackage, type TraceOptions, type TracePackage } from './package-spec';
+import { compileScene } from './compile-scene';
+import { packageScene } from './package-scene';
 import { createTally, type Tally } from './tally';
-import { traceChunk } from './trace-chunk';
+import { traceSceneChunk } from './trace-chunk';
 
 export { chunkPlan } from './chunk-plan';
 
@@ -24,10 +26,12 @@ export function traceSync(
   const maxEvents = options.maxEvents ?? DEFAULT_MAX_EVENTS;
   const plan = chunkPlan(options.rays);
   const tally = createTally();
+  // compiled once for the run: its chunks trace as on fresh compiles (tests/unit/trace/trace.test.ts)
+  const scene = compileScene(packageScene(pkg));
   let done = 0;
   for (let i = 0; i < plan.chunkCount; i++) {
     const n = raysInChunk(plan, i);
-    traceChunk(pkg, i, n, options.seed, tally, maxEvents);
+    traceSceneChunk(scene, i, n, options.seed, tally, maxEvents);
     done += n;
     onProgress?.(done, plan.rays);
   }

@@ -6,7 +6,9 @@ import { parentPort } from 'node:worker_threads';
 import { chunkPlan, raysInChunk } from '../chunk-plan';
 import { validateTracePackage } from '../package-spec';
 import { createTally } from '../tally';
-import { traceChunk } from '../trace-chunk';
+import { compileScene } from '../compile-scene';
+import { packageScene } from '../package-scene';
+import { traceSceneChunk } from '../trace-chunk';
 import type { TraceReply, TraceRequest } from '../trace-messages';
 
 const port = parentPort;
@@ -19,7 +21,8 @@ port.on('message', (msg: TraceRequest) => {
     validateTracePackage(msg.pkg);
     const plan = chunkPlan(msg.rays);
     const tally = createTally();
-    for (let c = msg.from; c < msg.to; c++) traceChunk(msg.pkg, c, raysInChunk(plan, c), msg.seed, tally, msg.maxEvents);
+    const scene = compileScene(packageScene(msg.pkg));
+    for (let c = msg.from; c < msg.to; c++) traceSceneChunk(scene, c, raysInChunk(plan, c), msg.seed, tally, msg.maxEvents);
     reply = { type: 'done', id: msg.id, tally };
   } catch (error) {
     reply = { type: 'error', id: msg.id, message: error instanceof Error ? error.message : String(error) };
