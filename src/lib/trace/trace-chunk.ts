@@ -64,10 +64,10 @@ import { DEFAULT_MAX_EVENTS, type TracePackage } from './package-spec';
 import { packageScene } from './package-scene';
 import { TRACK_TIR, TRACK_TRANSMITTED, launchPolarization, trackedInterface, trackedMirror } from './polarization';
 import { seedChunk, uniformAt, uniformsInto } from './rng';
-import { useRevolutionProfiles } from './revolution-shape';
 import { launchSourceRay } from './source-launch';
 import * as layout from './scene-layout';
-import { intersectSurface, surfaceNormal } from './shape-intersect';
+import { intersectCylinder, intersectDisc, intersectFrustum, intersectRect, intersectSpheroidCap, surfaceNormal } from './shape-intersect';
+import { intersectRevolutionShape, useRevolutionProfiles } from './revolution-shape';
 import { POLAR_BINS, type Tally } from './tally';
 
 // The layout's constants as module constants: under tsx (command line, bench) an imported binding is a
@@ -104,7 +104,12 @@ const {
   M_LIST_START,
   M_PHOSPHOR,
   NONE,
+  SHAPE_CYLINDER,
+  SHAPE_DISC,
+  SHAPE_FRUSTUM,
   SHAPE_RECT,
+  SHAPE_REVOLUTION,
+  SHAPE_SPHEROID_CAP,
   SIDE_FRONT,
   SURFACE_STRIDE,
   S_B,
@@ -370,7 +375,32 @@ function nearestBoundary(): number {
   if (lastSurface >= 0 && convexOf[lastSurface] === medium) start += media[o + M_CONVEX_COUNT] | 0;
   for (let i = start; i < end; i++) {
     const entry = bounds[i];
-    if (intersectSurface(surfaces, (entry >> 1) * SURFACE_STRIDE, entry & 1, ray, hit) && hit[0] < tBest) {
+    const o = (entry >> 1) * SURFACE_STRIDE;
+    const side = entry & 1;
+    const p = o + S_P;
+    // intersectSurface's dispatch, here so the inlining budget goes to the shapes
+    let met = false;
+    switch (surfaces[o + S_SHAPE] | 0) {
+      case SHAPE_RECT:
+        met = intersectRect(surfaces, p, side, ray, hit);
+        break;
+      case SHAPE_DISC:
+        met = intersectDisc(surfaces, p, side, ray, hit);
+        break;
+      case SHAPE_CYLINDER:
+        met = intersectCylinder(surfaces, p, side, ray, hit);
+        break;
+      case SHAPE_FRUSTUM:
+        met = intersectFrustum(surfaces, p, side, ray, hit);
+        break;
+      case SHAPE_SPHEROID_CAP:
+        met = intersectSpheroidCap(surfaces, p, side, ray, hit);
+        break;
+      case SHAPE_REVOLUTION:
+        met = intersectRevolutionShape(surfaces, p, side, ray, hit);
+        break;
+    }
+    if (met && hit[0] < tBest) {
       tBest = hit[0];
       best = entry;
     }
