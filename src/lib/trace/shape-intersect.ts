@@ -11,16 +11,17 @@
  *   front the other one, t = (−B − √(B² − AC))/A (whatever the sign of A), each in its
  *   cancellation-free form; then the z range of the shape. A ray standing on the surface has that
  *   root at 0 only if it is crossing, never when it has just crossed.
- * Each function writes the distance (mm) to hit[0] and returns true on a hit.
+ * Each function writes the distance (mm) to hit[0] and returns true on a hit; the tracer's list search
+ * dispatches on the shape kind itself (trace-chunk.ts).
  * Sources: T. L. Kay, J. T. Kajiya, SIGGRAPH '86 (planes, slabs); W. H. Press et al., Numerical
  * Recipes, 3rd ed., §5.6 (stable quadratic roots).
  */
-import { intersectRevolutionShape, revolutionNormal } from './revolution-shape';
+import { revolutionNormal } from './revolution-shape';
 import * as layout from './scene-layout';
 
 // The layout's constants as module constants: under tsx (command line, bench) an imported binding is a
 // getter, which the optimiser does not always inline in a large function (measured: 3× slower loop)
-const { SHAPE_CYLINDER, SHAPE_DISC, SHAPE_FRUSTUM, SHAPE_RECT, SHAPE_REVOLUTION, SHAPE_SPHEROID_CAP, SIDE_FRONT, S_P, S_SHAPE } = layout;
+const { SHAPE_CYLINDER, SHAPE_DISC, SHAPE_FRUSTUM, SHAPE_RECT, SHAPE_REVOLUTION, SIDE_FRONT, S_P, S_SHAPE } = layout;
 
 /** Rect: axis, at, normalSign, uMin, uMax, vMin, vMax from offset p. */
 export function intersectRect(s: Float64Array, p: number, side: number, ray: Float64Array, hit: Float64Array): boolean {
@@ -172,30 +173,6 @@ export function intersectSpheroidCap(s: Float64Array, p: number, side: number, r
   if (!(ray[2] + t * ray[5] >= zc)) return false;
   hit[0] = t;
   return true;
-}
-
-/**
- * Intersects the surface record at offset o from `side` (SIDE_FRONT / SIDE_BEHIND); see the file comment.
- * @param s surface records; @param o record offset
- */
-export function intersectSurface(s: Float64Array, o: number, side: number, ray: Float64Array, hit: Float64Array): boolean {
-  const p = o + S_P;
-  switch (s[o + S_SHAPE] | 0) {
-    case SHAPE_RECT:
-      return intersectRect(s, p, side, ray, hit);
-    case SHAPE_DISC:
-      return intersectDisc(s, p, side, ray, hit);
-    case SHAPE_CYLINDER:
-      return intersectCylinder(s, p, side, ray, hit);
-    case SHAPE_FRUSTUM:
-      return intersectFrustum(s, p, side, ray, hit);
-    case SHAPE_SPHEROID_CAP:
-      return intersectSpheroidCap(s, p, side, ray, hit);
-    case SHAPE_REVOLUTION:
-      return intersectRevolutionShape(s, p, side, ray, hit);
-    default:
-      return false;
-  }
 }
 
 /**

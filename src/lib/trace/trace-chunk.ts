@@ -378,7 +378,7 @@ function nearestBoundary(): number {
     const o = (entry >> 1) * SURFACE_STRIDE;
     const side = entry & 1;
     const p = o + S_P;
-    // intersectSurface's dispatch, here so the inlining budget goes to the shapes
+    // The dispatch by shape kind, here rather than in a function of its own: the inlining budget then goes to the shape tests
     let met = false;
     switch (surfaces[o + S_SHAPE] | 0) {
       case SHAPE_RECT:
