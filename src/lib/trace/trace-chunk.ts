@@ -212,7 +212,12 @@ const F_TIR_COUNTER = 6;
 /** Mirror: reflectance, and the bin of what it absorbs. */
 const F_R = 7;
 const F_BIN = 8;
-const FACE_STRIDE = 9;
+/**
+ * Fresnel face: η = n(from)/n(to), as the Fresnel step computes it, when the indices stay fixed for the
+ * run; NaN when a spectral scene rewrites them per ray, or when they match (no interface).
+ */
+const F_ETA = 9;
+const FACE_STRIDE = 10;
 const BOX_STRIDE = B_FACES + 6 * FACE_STRIDE;
 const boxTable = new Float64Array(MAX_FAST_BOXES * BOX_STRIDE);
 /** Per medium: offset of its record in boxTable + 1 when boxSteps walks it, else 0. */
@@ -293,6 +298,9 @@ function configureBoxFaces(): void {
       boxTable[q + F_TIR_COUNTER] = surfaces[o + (side === SIDE_FRONT ? S_TIR_FRONT : S_TIR_BEHIND)];
       boxTable[q + F_R] = plainMirror ? surfaces[o + S_B] : 0;
       boxTable[q + F_BIN] = surfaces[o + S_BIN_ABSORBED];
+      const etaI = media[mo + M_INDEX];
+      const etaT = media[to * MEDIUM_STRIDE + M_INDEX];
+      boxTable[q + F_ETA] = fresnel && !spectral && etaI !== etaT ? etaI / etaT : NaN;
     }
   }
 }
@@ -718,7 +726,17 @@ function boxSteps(rayEvents: number, maxEvents: number): number {
     // generator inlined here
     let R = boxTable[q + F_R];
     if (kind === FAST_FRESNEL) {
-      fin[0] = sign * ray[j];
+      const cosI = sign * ray[j];
+      // Total internal reflection decided by fresnelRealTrusted's test, sin²θt = η²(1 − cos²θi) ≥ 1, with
+      // η known beforehand (NaN: not known, the comparison fails and the Fresnel step decides)
+      const eta = boxTable[q + F_ETA];
+      if (eta * eta * (1 - cosI * cosI) >= 1) {
+        ray[j] = -ray[j];
+        const c = boxTable[q + F_TIR_COUNTER] | 0;
+        if (c !== NONE) counters[c]++;
+        continue;
+      }
+      fin[0] = cosI;
       // the indices from the media records, which a spectral scene rewrites at each ray's wavelength
       fin[1] = media[medium * MEDIUM_STRIDE + M_INDEX];
       fin[2] = media[(boxTable[q + F_TO] | 0) * MEDIUM_STRIDE + M_INDEX];
