@@ -29,6 +29,7 @@ import {
   M_BOX_Z0,
   M_BOX_Z1,
   M_CONVEX_COUNT,
+  M_CONVEX_REST,
   M_INDEX,
   M_IS_CHIP,
   M_LIST_COUNT,
@@ -311,7 +312,16 @@ export function compileScene(scene: SceneDescription): CompiledScene {
     media[i * MEDIUM_STRIDE + M_LIST_START] = flat.length;
     media[i * MEDIUM_STRIDE + M_LIST_COUNT] = list.length;
     media[i * MEDIUM_STRIDE + M_CONVEX_COUNT] = faces.length;
-    flat.push(...faces, ...list.filter((entry) => !faces.includes(entry)));
+    media[i * MEDIUM_STRIDE + M_CONVEX_REST] = faces.length > 0 && scene.media[i].convexAroundSolid === true ? 1 : 0;
+    // Around a convex solid in a convex region, a plane reaching beyond the region (the base) is searched
+    // last: the first surface met is then the exit (SceneMedium.convexAroundSolid)
+    const rest = list.filter((entry) => !faces.includes(entry));
+    const beyond = (entry: number) => {
+      const shape = scene.surfaces[entry >> 1].shape;
+      return shape.kind === 'disc' && shape.rOuter === Infinity;
+    };
+    const ordered = scene.media[i].convexAroundSolid === true ? [...rest.filter((e) => !beyond(e)), ...rest.filter(beyond)] : rest;
+    flat.push(...faces, ...ordered);
   });
 
   const em = scene.emitter;

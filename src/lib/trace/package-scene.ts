@@ -92,7 +92,15 @@ export function packageScene(pkg: TracePackage): SceneDescription {
     ? { phosphor: { coefficients: ph.coefficients, emission: ph.emission, quantumYield: ph.quantumYield, ...(ph.mixedWith?.length ? { mixedWith: ph.mixedWith } : {}) } }
     : {};
   if (!bare) {
-    media.push(withIndexRows({ name: ENCAPSULANT, role: 'encapsulant', n: enc.n, absorptionPerMm: enc.absorptionPerMm, ...(region ? {} : particles) }, disp?.encapsulant));
+    // a dome, cylinder or box on the base, or a cup filled flat, is one convex region around the chip
+    // (a dome on a cup's rim only when it spans the rim; a phosphor layer or plate adds surfaces inside)
+    const convex = !region && (cup ? cup.fill === 'flat' || enc.radiusMm >= cup.topRadiusMm : true);
+    media.push(
+      withIndexRows(
+        { name: ENCAPSULANT, role: 'encapsulant', n: enc.n, absorptionPerMm: enc.absorptionPerMm, ...(region ? {} : particles), ...(convex ? { convexAroundSolid: true } : {}) },
+        disp?.encapsulant
+      )
+    );
   }
   if (cup) {
     surfaces.push(

@@ -58,7 +58,9 @@ export const M_IS_CHIP = 19;
  * without (SceneSurface.convexSolid); the search skips them right after the ray met one of them.
  */
 export const M_CONVEX_COUNT = 20;
-export const MEDIUM_STRIDE = 21;
+/** 1 when the rest of the list bounds a convex region (SceneMedium.convexAroundSolid). */
+export const M_CONVEX_REST = 21;
+export const MEDIUM_STRIDE = 22;
 
 // Surface record
 export const S_SHAPE = 0;

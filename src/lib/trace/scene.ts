@@ -117,6 +117,14 @@ export interface SceneMedium {
   indexRows?: [number, number][];
   /** Phosphor particles dispersed in this medium: scattering, absorption and conversion (medium-events.ts). */
   phosphor?: ScenePhosphor;
+  /**
+   * The builder's promise that, but for the faces of the convex solid it sees from without
+   * (SceneSurface.convexSolid: the chip), the medium's surfaces bound one convex region (a dome or a
+   * cylinder on the base, a cup filled flat). A ray that has just left that solid is inside the region
+   * heading out, and crosses its boundary exactly once: the first surface it meets is the nearest, so
+   * that search stops there. A speed hint only. Default false.
+   */
+  convexAroundSolid?: boolean;
 }
 
 /**

@@ -99,6 +99,7 @@ const {
   M_BOX_Z0,
   M_BOX_Z1,
   M_CONVEX_COUNT,
+  M_CONVEX_REST,
   M_INDEX,
   M_LIST_COUNT,
   M_LIST_START,
@@ -379,8 +380,13 @@ function nearestBoundary(): number {
   let tBest = Infinity;
   let start = media[o + M_LIST_START] | 0;
   const end = start + (media[o + M_LIST_COUNT] | 0);
-  // Standing on a face of the convex solid the list starts with, heading away: none of its faces is ahead
-  if (lastSurface >= 0 && convexOf[lastSurface] === medium) start += media[o + M_CONVEX_COUNT] | 0;
+  // Standing on a face of the convex solid the list starts with, heading away: none of its faces is ahead,
+  // and where the rest bounds a convex region the first surface met is its one exit
+  let firstMet = false;
+  if (lastSurface >= 0 && convexOf[lastSurface] === medium) {
+    start += media[o + M_CONVEX_COUNT] | 0;
+    firstMet = media[o + M_CONVEX_REST] === 1;
+  }
   for (let i = start; i < end; i++) {
     const entry = bounds[i];
     const o = (entry >> 1) * SURFACE_STRIDE;
@@ -411,6 +417,7 @@ function nearestBoundary(): number {
     if (met && hit[0] < tBest) {
       tBest = hit[0];
       best = entry;
+      if (firstMet) break;
     }
   }
   hit[0] = tBest;
