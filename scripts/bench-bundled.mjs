@@ -58,12 +58,17 @@ function packages(flipChip) {
   ];
 }
 
-/** Traces chunks [first, first + count) of a run and returns [launched, escaped, events]. */
+/**
+ * Traces chunks [first, first + count) of a run and returns [launched, escaped, events]: as the tracer's
+ * own runs do, on one scene compiled for the run where the bundle has the scene model, else package by chunk.
+ */
 function traceChunks(lib, pkg, first, count, rays, seed) {
   const tally = lib.createTally();
+  const scene = lib.compileScene ? lib.compileScene(lib.packageScene(pkg)) : null;
   for (let i = first; i < first + count; i++) {
     const n = Math.min(CHUNK_RAYS, rays - i * CHUNK_RAYS);
-    lib.traceChunk(pkg, i, n, seed, tally);
+    if (scene) lib.traceSceneChunk(scene, i, n, seed, tally);
+    else lib.traceChunk(pkg, i, n, seed, tally);
   }
   return [tally.launched, tally.escaped, tally.events];
 }
