@@ -306,10 +306,46 @@ function configureBoxFaces(): void {
   }
 }
 
-/** Starts a ray in the emitting medium (or from a source, see source-launch.ts): position, direction, polarisation, optical depth. */
+/**
+ * Starts a ray in the emitting medium (or from a source, see source-launch.ts): position, direction
+ * (isotropic, or a beam down for slab references), polarisation, optical depth. One function, once per
+ * ray: too large for the engine to inline into the ray loop, whose inlining budget then goes to the
+ * per-event functions.
+ */
 function launch(): void {
   if (sourceKind >= EMIT_LAMBERTIAN_RECT) launchSourceRay(ray, sourceKind, sourceParams, sourceRays);
-  else launchFromChip();
+  else {
+    const o = emitterOffset;
+    // Position on the emitting plane or in the volume of the emitting box, then (isotropic) a first pair
+    const isotropic = emitterDirection === DIRECTION_ISOTROPIC;
+    const n = volumeEmission ? 3 : 2;
+    uniformsInto(u, isotropic ? n + 2 : n);
+    ray[0] = (u[0] - 0.5) * 2 * media[o + M_BOX_A];
+    ray[1] = (u[1] - 0.5) * 2 * media[o + M_BOX_B];
+    if (volumeEmission) {
+      const z0 = media[o + M_BOX_Z0];
+      ray[2] = z0 + u[2] * (media[o + M_BOX_Z1] - z0);
+    } else {
+      ray[2] = emitterZ[0];
+    }
+    // Isotropic direction without trigonometry (Marsaglia 1972): (a, b) uniform in the unit disc,
+    // s = a² + b²; then (2a√(1 − s), 2b√(1 − s), 1 − 2s) is uniform on the sphere
+    if (isotropic) {
+      let a = 2 * u[n] - 1;
+      let b = 2 * u[n + 1] - 1;
+      let s = a * a + b * b;
+      while (s >= 1) {
+        uniformsInto(u, 2);
+        a = 2 * u[0] - 1;
+        b = 2 * u[1] - 1;
+        s = a * a + b * b;
+      }
+      const k = 2 * Math.sqrt(1 - s);
+      ray[3] = k * a;
+      ray[4] = k * b;
+      ray[5] = 1 - 2 * s;
+    } else launchDirection();
+  }
   if (track) redrawPolarization();
   // Optical depth to absorption, τ ~ Exp(1) by inverse transform (1 − u ∈ (0, 1]); none if nothing absorbs
   if (absorbing) {
@@ -318,40 +354,6 @@ function launch(): void {
   } else ray[6] = Infinity;
   medium = emitterMedium;
   lastSurface = sourceSurface;
-}
-
-/** Position and direction (isotropic, or a beam down for slab references) of a ray from the emitting chip layer. */
-function launchFromChip(): void {
-  const o = emitterOffset;
-  // Position on the emitting plane or in the volume of the emitting box, then (isotropic) a first pair
-  const isotropic = emitterDirection === DIRECTION_ISOTROPIC;
-  const n = volumeEmission ? 3 : 2;
-  uniformsInto(u, isotropic ? n + 2 : n);
-  ray[0] = (u[0] - 0.5) * 2 * media[o + M_BOX_A];
-  ray[1] = (u[1] - 0.5) * 2 * media[o + M_BOX_B];
-  if (volumeEmission) {
-    const z0 = media[o + M_BOX_Z0];
-    ray[2] = z0 + u[2] * (media[o + M_BOX_Z1] - z0);
-  } else {
-    ray[2] = emitterZ[0];
-  }
-  // Isotropic direction without trigonometry (Marsaglia 1972): (a, b) uniform in the unit disc,
-  // s = a² + b²; then (2a√(1 − s), 2b√(1 − s), 1 − 2s) is uniform on the sphere
-  if (isotropic) {
-    let a = 2 * u[n] - 1;
-    let b = 2 * u[n + 1] - 1;
-    let s = a * a + b * b;
-    while (s >= 1) {
-      uniformsInto(u, 2);
-      a = 2 * u[0] - 1;
-      b = 2 * u[1] - 1;
-      s = a * a + b * b;
-    }
-    const k = 2 * Math.sqrt(1 - s);
-    ray[3] = k * a;
-    ray[4] = k * b;
-    ray[5] = 1 - 2 * s;
-  } else launchDirection();
 }
 
 /** A launch direction other than isotropic: straight down, or cosine-weighted about −z. */
@@ -454,16 +456,8 @@ function interfaceEvent(from: number, to: number): number {
   // A roundoff hit at t ≈ 0 can graze from the wrong side: treat as grazing incidence
   if (cosI < 0) cosI = 0;
   else if (cosI > 1) cosI = 1;
-  if (track) {
-    trackArgs[0] = cosI;
-    trackArgs[1] = etaI;
-    trackArgs[2] = etaT;
-    uniformAt(u, 0);
-    trackArgs[3] = u[0];
-    const code = trackedInterface(direction, normal, trackArgs);
-    return code === TRACK_TRANSMITTED ? TRANSMITTED : code === TRACK_TIR ? TIR : REFLECTED;
-  }
   fin[0] = cosI;
+  if (track) return trackedInterfaceEvent(from, to);
   fin[1] = etaI;
   fin[2] = etaT;
   // Handle total internal reflection
@@ -479,6 +473,17 @@ function interfaceEvent(from: number, to: number): number {
   }
   refractDirectionAt(direction, direction, normal, fin);
   return TRANSMITTED;
+}
+
+/** interfaceEvent in 'track' mode, with cos θi in fin[0]: the ray's field decides (polarization.ts). */
+function trackedInterfaceEvent(from: number, to: number): number {
+  trackArgs[0] = fin[0];
+  trackArgs[1] = media[from * MEDIUM_STRIDE + M_INDEX];
+  trackArgs[2] = media[to * MEDIUM_STRIDE + M_INDEX];
+  uniformAt(u, 0);
+  trackArgs[3] = u[0];
+  const code = trackedInterface(direction, normal, trackArgs);
+  return code === TRACK_TRANSMITTED ? TRANSMITTED : code === TRACK_TIR ? TIR : REFLECTED;
 }
 
 /**
