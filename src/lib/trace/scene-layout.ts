@@ -58,7 +58,7 @@ export const M_IS_CHIP = 19;
  * without (SceneSurface.convexSolid); the search skips them right after the ray met one of them.
  */
 export const M_CONVEX_COUNT = 20;
-/** 1 when the rest of the list bounds a convex region (SceneMedium.convexAroundSolid). */
+/** 1 when the rest of the list bounds a convex region around the medium (SceneMedium.convexAroundSolid). */
 export const M_CONVEX_REST = 21;
 export const MEDIUM_STRIDE = 22;
 

@@ -120,9 +120,9 @@ export interface SceneMedium {
   /**
    * The builder's promise that, but for the faces of the convex solid it sees from without
    * (SceneSurface.convexSolid: the chip), the medium's surfaces bound one convex region (a dome or a
-   * cylinder on the base, a cup filled flat). A ray that has just left that solid is inside the region
-   * heading out, and crosses its boundary exactly once: the first surface it meets is the nearest, so
-   * that search stops there. A speed hint only. Default false.
+   * cylinder on the base, a cup filled flat). A ray in the medium is inside that region and crosses its
+   * boundary exactly once ahead: the first of those surfaces it meets is the region's exit, so the search
+   * (having tested the solid's faces first) stops there. A speed hint only. Default false.
    */
   convexAroundSolid?: boolean;
 }

@@ -382,13 +382,12 @@ function nearestBoundary(): number {
   let tBest = Infinity;
   let start = media[o + M_LIST_START] | 0;
   const end = start + (media[o + M_LIST_COUNT] | 0);
-  // Standing on a face of the convex solid the list starts with, heading away: none of its faces is ahead,
-  // and where the rest bounds a convex region the first surface met is its one exit
-  let firstMet = false;
-  if (lastSurface >= 0 && convexOf[lastSurface] === medium) {
-    start += media[o + M_CONVEX_COUNT] | 0;
-    firstMet = media[o + M_CONVEX_REST] === 1;
-  }
+  // The list starts with the faces of a convex solid seen from without: standing on one of them, heading
+  // away, none of them is ahead. Where the rest bounds a convex region around the ray, the first of the
+  // rest it meets is the region's one exit: the search ends there (the solid's faces are searched before).
+  const rest = start + (media[o + M_CONVEX_COUNT] | 0);
+  const exitFirst = media[o + M_CONVEX_REST] === 1;
+  if (lastSurface >= 0 && convexOf[lastSurface] === medium) start = rest;
   for (let i = start; i < end; i++) {
     const entry = bounds[i];
     const o = (entry >> 1) * SURFACE_STRIDE;
@@ -416,10 +415,12 @@ function nearestBoundary(): number {
         met = intersectRevolutionShape(surfaces, p, side, ray, hit);
         break;
     }
-    if (met && hit[0] < tBest) {
-      tBest = hit[0];
-      best = entry;
-      if (firstMet) break;
+    if (met) {
+      if (hit[0] < tBest) {
+        tBest = hit[0];
+        best = entry;
+      }
+      if (exitFirst && i >= rest) break;
     }
   }
   hit[0] = tBest;
