@@ -313,14 +313,16 @@ export function compileScene(scene: SceneDescription): CompiledScene {
     media[i * MEDIUM_STRIDE + M_LIST_COUNT] = list.length;
     media[i * MEDIUM_STRIDE + M_CONVEX_COUNT] = faces.length;
     media[i * MEDIUM_STRIDE + M_CONVEX_REST] = faces.length > 0 && scene.media[i].convexAroundSolid === true ? 1 : 0;
-    // Around a convex solid in a convex region, a plane reaching beyond the region (the base) is searched
-    // last: the first surface met is then the exit (SceneMedium.convexAroundSolid)
+    // Around a convex solid in a convex region the first of the rest met is the exit (SceneMedium.convexAroundSolid):
+    // the flat pieces first (the cheapest tests), then the curved ones, and a plane reaching beyond the
+    // region (the base) last, where it is met only when nothing else is
     const rest = list.filter((entry) => !faces.includes(entry));
-    const beyond = (entry: number) => {
+    const rank = (entry: number) => {
       const shape = scene.surfaces[entry >> 1].shape;
-      return shape.kind === 'disc' && shape.rOuter === Infinity;
+      if (shape.kind === 'disc' && shape.rOuter === Infinity) return 2;
+      return shape.kind === 'disc' || shape.kind === 'rect' ? 0 : 1;
     };
-    const ordered = scene.media[i].convexAroundSolid === true ? [...rest.filter((e) => !beyond(e)), ...rest.filter(beyond)] : rest;
+    const ordered = scene.media[i].convexAroundSolid === true ? [0, 1, 2].flatMap((r) => rest.filter((e) => rank(e) === r)) : rest;
     flat.push(...faces, ...ordered);
   });
 
