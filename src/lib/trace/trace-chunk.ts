@@ -9,14 +9,19 @@
  * - Geometry by medium: a ray knows its medium and meets only the surfaces bounding it (a box
  *   medium — a chip layer — by the slab method, any other by the nearest of its surface list). No
  *   surface ahead is a geometry error, counted, never hidden; in the outside medium it is an escape
- *   (see below).
+ *   (see below). The list search takes two exact shortcuts its builders vouch for: a ray that has just
+ *   met a face of the convex solid the list starts with (the chip) skips that solid's faces, and where
+ *   the rest of the list bounds one convex region around the ray (a dome on the base, a flat-filled
+ *   cup) the first of the rest it meets is the region's one exit (scene.ts: convexSolid,
+ *   convexAroundSolid).
  * - Inside the chip: most events happen there (about 2 total internal reflections per ray of about 5
  *   events), so while a ray is in a box medium whose faces are plain Fresnel interfaces or a mirror
  *   of fixed reflectance (no phosphor) boxSteps runs the same steps in a loop of its own — box exit,
  *   flight, face event (inline in 'average' mode, the general event functions in 'track' mode) —
- *   from a table of those boxes it keeps itself, drawing the same numbers in the same order and
- *   counting the same events; it hands the ray back to the general loop when it leaves the boxes or
- *   meets any other face.
+ *   from a table of those boxes it keeps itself (with each face's η when the run's indices are
+ *   fixed, so total internal reflection is decided without a division), drawing the same numbers in
+ *   the same order and counting the same events; it hands the ray back to the general loop when it
+ *   leaves the boxes or meets any other face.
  * - Bulk absorption by Beer–Lambert: each ray draws one optical depth τ ~ Exp(1) at launch and spends
  *   α·t of it on every segment of length t; it is absorbed where the total reaches τ. The same as a
  *   fresh exponential free path per segment (the exponential is memoryless), at one logarithm per ray.
@@ -43,8 +48,10 @@
  * declines to inline a call — and the bundle's loop runs out of inlining budget, so the core helpers
  * it calls with arrays (fresnelRealAt, refractDirectionAt) hold their formulas themselves rather than
  * forward numbers. The flight and the surface event are separate functions so each is optimised with
- * its own inlining budget, and so is boxSteps (the chip's loop: box exit, Fresnel and one draw site
- * inlined, which is what its budget holds).
+ * its own inlining budget, and so is boxSteps (the chip's loop: box exit, the unchecked Fresnel step
+ * and one draw site inlined, which is what its budget holds). The list search dispatches on the shape
+ * kind itself, so its budget goes to the shape tests; launch is one function too large to inline, so
+ * the ray loop's budget goes to the per-event functions.
  * Drawing: recordSceneRays runs the same steps in a loop of its own and reports each ray's path, so
  * the traced run pays nothing for it (ray-paths.ts). It takes the general steps only (no boxSteps, no
  * finalExit shortcut), which give the same fates by construction.
