@@ -30,6 +30,7 @@ import {
   M_BOX_Z1,
   M_CONVEX_COUNT,
   M_CONVEX_REST,
+  M_CONVEX_SPHERE,
   M_INDEX,
   M_IS_CHIP,
   M_LIST_COUNT,
@@ -168,6 +169,33 @@ function absorbs(s: SceneSurface): boolean {
  * consistent (unknown medium, duplicate name, a box face that does not bound its box medium): those
  * are builder mistakes, not user input.
  */
+/**
+ * [x, y, z, r²] of a sphere around rect faces: the centre and half diagonal of their corners' bounding
+ * box, the radius raised by 1e-9 of itself so that roundoff never puts a face outside; r² = ∞ when there
+ * are none or one is not a rect.
+ */
+function boundingSphere(shapes: Shape[]): [number, number, number, number] {
+  const lo = [Infinity, Infinity, Infinity];
+  const hi = [-Infinity, -Infinity, -Infinity];
+  for (const sh of shapes) {
+    if (sh.kind !== 'rect') return [0, 0, 0, Infinity];
+    // the rect's plane coordinate, then its two in-plane axes in order (as intersectRect reads them)
+    const iu = sh.axis === 0 ? 1 : 0;
+    const iv = sh.axis === 2 ? 1 : 2;
+    for (const [k, a, b] of [
+      [sh.axis, sh.at, sh.at],
+      [iu, sh.uMin, sh.uMax],
+      [iv, sh.vMin, sh.vMax]
+    ]) {
+      lo[k] = Math.min(lo[k], a);
+      hi[k] = Math.max(hi[k], b);
+    }
+  }
+  if (!shapes.length) return [0, 0, 0, Infinity];
+  const r = Math.hypot((hi[0] - lo[0]) / 2, (hi[1] - lo[1]) / 2, (hi[2] - lo[2]) / 2) * (1 + 1e-9);
+  return [(lo[0] + hi[0]) / 2, (lo[1] + hi[1]) / 2, (lo[2] + hi[2]) / 2, r * r];
+}
+
 export function compileScene(scene: SceneDescription): CompiledScene {
   const mediumIndex = new Map<string, number>();
   scene.media.forEach((m, i) => {
@@ -313,6 +341,7 @@ export function compileScene(scene: SceneDescription): CompiledScene {
     media[i * MEDIUM_STRIDE + M_LIST_COUNT] = list.length;
     media[i * MEDIUM_STRIDE + M_CONVEX_COUNT] = faces.length;
     media[i * MEDIUM_STRIDE + M_CONVEX_REST] = faces.length > 0 && scene.media[i].convexAroundSolid === true ? 1 : 0;
+    media.set(boundingSphere(faces.map((entry) => scene.surfaces[entry >> 1].shape)), i * MEDIUM_STRIDE + M_CONVEX_SPHERE);
     // Around a convex solid in a convex region the first of the rest met is the exit (SceneMedium.convexAroundSolid):
     // the flat pieces first (the cheapest tests), then the curved ones, and a plane reaching beyond the
     // region (the base) last, where it is met only when nothing else is

@@ -60,7 +60,12 @@ export const M_IS_CHIP = 19;
 export const M_CONVEX_COUNT = 20;
 /** 1 when the rest of the list bounds a convex region around the medium (SceneMedium.convexAroundSolid). */
 export const M_CONVEX_REST = 21;
-export const MEDIUM_STRIDE = 22;
+/**
+ * A sphere holding that convex solid: centre x, y, z and radius² (mm; ∞ when its faces are not all
+ * rects): a ray whose line misses it meets none of the solid's faces.
+ */
+export const M_CONVEX_SPHERE = 22;
+export const MEDIUM_STRIDE = 26;
 
 // Surface record
 export const S_SHAPE = 0;

@@ -178,8 +178,9 @@ export interface SceneSurface {
    * The name of a convex solid this surface is a face of, the solid lying behind it (the normal points
    * out of it), e.g. 'chip' on the chip's outer faces. A ray that has just met one of its faces from the
    * front heads away from the solid — each face's plane supports it — and meets none of its faces before
-   * another surface, so the tracer skips them in that search (compileScene lists them first). A speed
-   * hint only: it never changes a result. Default: none.
+   * another surface, so the tracer skips them in that search (compileScene lists them first), as it does
+   * when the ray's line misses a sphere around rect faces. A speed hint only: it never changes a result.
+   * Default: none.
    */
   convexSolid?: string;
 }

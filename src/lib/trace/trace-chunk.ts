@@ -107,6 +107,7 @@ const {
   M_BOX_Z1,
   M_CONVEX_COUNT,
   M_CONVEX_REST,
+  M_CONVEX_SPHERE,
   M_INDEX,
   M_LIST_COUNT,
   M_LIST_START,
@@ -395,6 +396,17 @@ function nearestBoundary(): number {
   const rest = start + (media[o + M_CONVEX_COUNT] | 0);
   const exitFirst = media[o + M_CONVEX_REST] === 1;
   if (lastSurface >= 0 && convexOf[lastSurface] === medium) start = rest;
+  else if (rest > start) {
+    // Nor when its line misses a sphere around the solid: outside it and heading away, or passing wide
+    const c = o + M_CONVEX_SPHERE;
+    const ox = media[c] - ray[0];
+    const oy = media[c + 1] - ray[1];
+    const oz = media[c + 2] - ray[2];
+    const along = ox * ray[3] + oy * ray[4] + oz * ray[5];
+    const d2 = ox * ox + oy * oy + oz * oz;
+    const r2 = media[c + 3];
+    if (d2 > r2 && (along < 0 || d2 - along * along > r2)) start = rest;
+  }
   for (let i = start; i < end; i++) {
     const entry = bounds[i];
     const o = (entry >> 1) * SURFACE_STRIDE;
