@@ -2,7 +2,8 @@
  * The chip's faces as one convex solid (SceneSurface.convexSolid) and a convex region around it
  * (SceneMedium.convexAroundSolid) are shortcuts of the list search, never a change of result: a ray that
  * has just met a face of a convex solid from without heads away from it (each face's plane supports the
- * solid), and a ray inside a convex region crosses its boundary once (common practice in ray tracing,
+ * solid), a ray whose line misses a sphere around the solid cannot meet it, and a ray inside a convex
+ * region crosses its boundary once (common practice in ray tracing,
  * e.g. M. Pharr, W. Jakob, G. Humphreys, Physically Based Rendering, 3rd ed., §3.1 on convex shapes).
  * The same chunk traced from the scene with and without the hints gives the same ledger bit for bit.
  */
