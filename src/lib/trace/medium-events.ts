@@ -49,19 +49,20 @@ const u = new Float64Array(2);
 const c = new Float64Array(3);
 /** μs, μa, g of each kind of a mixture at the ray's wavelength. */
 const kinds = new Float64Array(3 * MAX_MIXED_KINDS);
-let partStart: Int32Array = new Int32Array(0);
-let partCount: Int32Array = new Int32Array(0);
-let coefficients: Float64Array = new Float64Array(0);
-let emission: Float64Array = new Float64Array(0);
-let quantumYield: Float64Array = new Float64Array(0);
-let chip: Float64Array = new Float64Array(0);
-let chipLine = true;
-let heatBins: number[] = [];
+// `var`, not `let`, for the mutable state read per event (no initialisation check per read: see trace-chunk.ts)
+var partStart: Int32Array = new Int32Array(0);
+var partCount: Int32Array = new Int32Array(0);
+var coefficients: Float64Array = new Float64Array(0);
+var emission: Float64Array = new Float64Array(0);
+var quantumYield: Float64Array = new Float64Array(0);
+var chip: Float64Array = new Float64Array(0);
+var chipLine = true;
+var heatBins: number[] = [];
 // Dispersive media (compiled medium indices), their index tables on the grid, and the records they are written to
-let dispersive: Int32Array = new Int32Array(0);
-let indices: Float64Array = new Float64Array(0);
-let sceneMedia: Float64Array = new Float64Array(0);
-let tally: SpectralTally = createSpectralTally();
+var dispersive: Int32Array = new Int32Array(0);
+var indices: Float64Array = new Float64Array(0);
+var sceneMedia: Float64Array = new Float64Array(0);
+var tally: SpectralTally = createSpectralTally();
 const RAD_TO_DEG = 180 / Math.PI;
 
 /**

@@ -15,9 +15,10 @@ import { SIDE_FRONT } from './scene-layout';
 /** Wrong-side hits stepped past before giving up (a profile crossed more often than this is not an optic). */
 const MAX_STEPS = 8;
 
-let profiles: RevolutionProfile[] = [];
+// `var`, not `let`, for the mutable state read per event (no initialisation check per read: see trace-chunk.ts)
+var profiles: RevolutionProfile[] = [];
 // The last outward normal found on each revolution surface, 3 doubles per surface index
-let normals = new Float64Array(0);
+var normals = new Float64Array(0);
 // Intersection output [nx, ny, nz, segment]
 const out = new Float64Array(4);
 
