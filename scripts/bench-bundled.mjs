@@ -1,5 +1,5 @@
 /**
- * The tracer as the browser runs it: bundles the tracer with esbuild (one file, imports resolved to
+ * The tracer as the browser runs it: bundles the tracer with Rolldown, as Vite builds the page (one file, imports resolved to
  * plain bindings, as Vite does for the page's worker) and times it on one thread and on all cores,
  * side by side with the same bundle of an older commit's tracer, in one process, the order alternating
  * round by round (ABBA), so the machine's load falls on both alike. Prints rays/s, events/s, rays per CPU second (one thread:
@@ -21,6 +21,7 @@ import { join, resolve } from 'node:path';
 import { PerformanceObserver, constants as perfConstants } from 'node:perf_hooks';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { Worker, isMainThread, parentPort, workerData } from 'node:worker_threads';
+import { BUNDLER, bundleTracer } from './bundle-tracer.mjs';
 
 const CHUNK_RAYS = 16384;
 
@@ -89,18 +90,10 @@ function readArgs(argv) {
   return { rays, rounds, old, only, oneThread };
 }
 
-/** Bundles src/lib/trace/index.ts under `root` into dir/name.mjs; returns its file URL. */
-async function bundle(esbuild, root, dir, name) {
+/** Bundles the tracer of the tree at `root` into dir/name.mjs (bundle-tracer.mjs); returns its file URL. */
+async function bundle(root, dir, name) {
   const outfile = join(dir, `${name}.mjs`);
-  await esbuild.build({
-    entryPoints: [join(root, 'src/lib/trace/index.ts')],
-    bundle: true,
-    format: 'esm',
-    platform: 'neutral',
-    target: 'es2022',
-    outfile,
-    logLevel: 'error'
-  });
+  await bundleTracer(root, outfile);
   return pathToFileURL(outfile).href;
 }
 
@@ -154,21 +147,20 @@ const m = (x) => (x / 1e6).toFixed(2).padStart(7);
 async function main() {
   const { rays, rounds, old, only, oneThread } = readArgs(process.argv.slice(2));
   const repo = resolve(fileURLToPath(import.meta.url), '../..');
-  const esbuild = await import('esbuild');
   const dir = mkdtempSync(join(tmpdir(), 'outcouple-bench-'));
   try {
-    const builds = [{ label: 'current', url: await bundle(esbuild, repo, dir, 'current') }];
+    const builds = [{ label: 'current', url: await bundle(repo, dir, 'current') }];
     if (old !== 'none') {
       const oldRoot = join(dir, 'old');
       execSync(`mkdir -p "${oldRoot}" && git -C "${repo}" archive ${old} src/lib | tar -x -C "${oldRoot}"`);
       // a newer commit's tracer also imports its data files and packages
       execSync(`(git -C "${repo}" archive ${old} data 2>/dev/null | tar -x -C "${oldRoot}") || true; ln -s "${join(repo, 'node_modules')}" "${join(oldRoot, 'node_modules')}"`);
-      builds.push({ label: old, url: await bundle(esbuild, oldRoot, dir, 'old') });
+      builds.push({ label: old, url: await bundle(oldRoot, dir, 'old') });
     }
     const libs = await Promise.all(builds.map((b) => import(b.url)));
     const current = libs[0];
     const threads = availableParallelism();
-    console.log(`Bundled tracer (esbuild ${esbuild.version}): ${rays.toLocaleString('en')} rays per run, ${rounds} rounds, ${threads} threads`);
+    console.log(`Bundled tracer (${BUNDLER}): ${rays.toLocaleString('en')} rays per run, ${rounds} rounds, ${threads} threads`);
     console.log(`CPU: ${cpus()[0]?.model ?? 'unknown'}; Node ${process.version}; medians over rounds\n`);
     console.log('package              tracer   threads  Mrays/s  Mevents/s  Mrays/CPU-s  scavenges/Mray  extraction');
     const pools = builds.map((b) => startPool(b.url, threads));

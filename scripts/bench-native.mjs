@@ -3,7 +3,7 @@
  * same physics (scripts/native/dome-trace.c), on the benchmark's dome package (and, on request, the bare
  * chip and the cylinder), per CPU second of one thread, so other work on a shared machine weighs little.
  * The JS tracer runs as the command line runs it (TypeScript through tsx) and as the page runs it (one
- * esbuild bundle), each for the current tree and for an older commit (`git archive`, default 39aaaae,
+ * Rolldown bundle, as Vite builds it), each for the current tree and for an older commit (`git archive`, default 39aaaae,
  * the special-cased tracer before the scene model). Each round runs every tracer once, the order
  * alternating round by round (ABBA), each round with its own seed. The results double as a physics
  * cross-check between two independent codes: pooled over the rounds, the extraction and the fractions
@@ -20,6 +20,7 @@ import { cpus, tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { tsImport } from 'tsx/esm/api';
+import { bundleTracer } from './bundle-tracer.mjs';
 
 const AGREEMENT_SIGMA = 4;
 const WARM_UP_RAYS = 200_000;
@@ -66,17 +67,9 @@ function compileNative(repo, dir) {
   return binary;
 }
 
-/** Bundles src/lib/trace/index.ts under `root` as the page's worker gets it (scripts/bench-bundled.mjs). */
-async function bundle(esbuild, root, outfile) {
-  await esbuild.build({
-    entryPoints: [join(root, 'src/lib/trace/index.ts')],
-    bundle: true,
-    format: 'esm',
-    platform: 'neutral',
-    target: 'es2022',
-    outfile,
-    logLevel: 'error'
-  });
+/** The tracer of the tree at `root`, bundled as the page's worker gets it (bundle-tracer.mjs), loaded. */
+async function bundle(root, outfile) {
+  await bundleTracer(root, outfile);
   return import(pathToFileURL(outfile).href);
 }
 
@@ -132,17 +125,16 @@ async function main() {
   const dir = mkdtempSync(join(tmpdir(), 'outcouple-native-'));
   try {
     const binary = compileNative(repo, dir);
-    const esbuild = await import('esbuild');
     const runners = [nativeRunner(binary)];
     runners.push(jsRunner('tsx', await tsImport(join(repo, 'src/lib/trace/index.ts'), import.meta.url)));
-    runners.push(jsRunner('bundled', await bundle(esbuild, repo, join(dir, 'current.mjs'))));
+    runners.push(jsRunner('bundled', await bundle(repo, join(dir, 'current.mjs'))));
     if (old !== 'none') {
       const oldRoot = join(dir, 'old');
       execSync(`mkdir -p "${oldRoot}" && git -C "${repo}" archive ${old} src/lib package.json | tar -x -C "${oldRoot}"`);
       // a newer commit's tracer also imports its data files and packages
       execSync(`(git -C "${repo}" archive ${old} data 2>/dev/null | tar -x -C "${oldRoot}") || true; ln -s "${join(repo, 'node_modules')}" "${join(oldRoot, 'node_modules')}"`);
       runners.push(jsRunner(`tsx ${old}`, await tsImport(join(oldRoot, 'src/lib/trace/index.ts'), import.meta.url)));
-      runners.push(jsRunner(`bundled ${old}`, await bundle(esbuild, oldRoot, join(dir, 'old.mjs'))));
+      runners.push(jsRunner(`bundled ${old}`, await bundle(oldRoot, join(dir, 'old.mjs'))));
     }
     console.log(`JS/native tracer ratio: ${rays.toLocaleString('en')} rays per run, ${rounds} rounds (seeds 1–${rounds}), one thread, rates per CPU second`);
     console.log(`CPU: ${cpus()[0]?.model ?? 'unknown'}; Node ${process.version}; native: gcc -O2 -march=x86-64\n`);

@@ -42,7 +42,7 @@
  * - Dispatch is by `switch` on small integer kinds read from the packed records; no closures.
  *
  * Speed: nothing is allocated per ray or event, in both polarisation modes, under tsx and in the
- * esbuild bundle the page runs (node scripts/bench-bundled.mjs counts scavenges). The ray lives in the
+ * bundle the page runs (node scripts/bench-bundled.mjs counts scavenges). The ray lives in the
  * module-scope Float64Array `ray`; the loop's functions pass only small integers (media, surfaces,
  * outcomes), never floating-point numbers, which the engine would box into heap objects whenever it
  * declines to inline a call — and the bundle's loop runs out of inlining budget, so the core helpers
