@@ -55,8 +55,8 @@ export function fresnelReal(cosThetaI: number, etaI: number, etaT: number, out: 
 
 /**
  * {@link fresnelReal} with its numbers in an array, inp = [cos θi, etaI, etaT], so that a call the
- * engine does not inline boxes nothing (the tracer's bounce loop). Same outputs and result; the
- * formulas live here, fresnelReal hands its arguments over.
+ * engine does not inline boxes nothing (the tracer's bounce loop). Same outputs and result: it checks
+ * its arguments and hands the array to {@link fresnelRealTrusted}, where the formulas live.
  */
 export function fresnelRealAt(inp: Float64Array, out: Float64Array): boolean {
   const cosI = inp[0];

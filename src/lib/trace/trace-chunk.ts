@@ -312,8 +312,8 @@ function configureBoxFaces(): void {
       boxTable[q + F_R] = plainMirror ? surfaces[o + S_B] : 0;
       boxTable[q + F_BIN] = surfaces[o + S_BIN_ABSORBED];
       const etaI = media[mo + M_INDEX];
-      const etaT = media[to * MEDIUM_STRIDE + M_INDEX];
-      boxTable[q + F_ETA] = fresnel && !spectral && etaI !== etaT ? etaI / etaT : NaN;
+      const etaT = fresnel ? media[to * MEDIUM_STRIDE + M_INDEX] : etaI;
+      boxTable[q + F_ETA] = !spectral && etaI !== etaT ? etaI / etaT : NaN;
     }
   }
 }
@@ -766,17 +766,15 @@ function boxSteps(rayEvents: number, maxEvents: number): number {
       // Total internal reflection decided by fresnelRealTrusted's test, sin²θt = η²(1 − cos²θi) ≥ 1, with
       // η known beforehand (NaN: not known, the comparison fails and the Fresnel step decides)
       const eta = boxTable[q + F_ETA];
-      if (eta * eta * (1 - cosI * cosI) >= 1) {
-        ray[j] = -ray[j];
-        const c = boxTable[q + F_TIR_COUNTER] | 0;
-        if (c !== NONE) counters[c]++;
-        continue;
+      let tir = eta * eta * (1 - cosI * cosI) >= 1;
+      if (!tir) {
+        fin[0] = cosI;
+        // the indices from the media records, which a spectral scene rewrites at each ray's wavelength
+        fin[1] = media[medium * MEDIUM_STRIDE + M_INDEX];
+        fin[2] = media[(boxTable[q + F_TO] | 0) * MEDIUM_STRIDE + M_INDEX];
+        tir = !fresnelRealTrusted(fin, fr);
       }
-      fin[0] = cosI;
-      // the indices from the media records, which a spectral scene rewrites at each ray's wavelength
-      fin[1] = media[medium * MEDIUM_STRIDE + M_INDEX];
-      fin[2] = media[(boxTable[q + F_TO] | 0) * MEDIUM_STRIDE + M_INDEX];
-      if (!fresnelRealTrusted(fin, fr)) {
+      if (tir) {
         ray[j] = -ray[j];
         const c = boxTable[q + F_TIR_COUNTER] | 0;
         if (c !== NONE) counters[c]++;
